@@ -1,0 +1,54 @@
+import type { Metadata, Viewport } from "next";
+import localFont from "next/font/local";
+import type { ReactNode } from "react";
+import { SiteFooter } from "@/components/shell/site-footer";
+import { SiteHeader } from "@/components/shell/site-header";
+import "./globals.css";
+
+const plexSans = localFont({
+  src: "../fonts/IBMPlexSans-Variable-latin.woff2",
+  weight: "100 700",
+  variable: "--font-plex-sans",
+  display: "swap",
+});
+
+const jetbrainsMono = localFont({
+  src: "../fonts/JetBrainsMono-Variable-latin.woff2",
+  weight: "100 800",
+  variable: "--font-jetbrains-mono",
+  display: "swap",
+});
+
+export const metadata: Metadata = {
+  title: { default: "Sidewise — read your tire's sidewall", template: "%s · Sidewise" },
+  description:
+    "Type what is printed on your tire's sidewall and see every part explained, drawn to scale, with equal-or-better replacements from the shop's stock.",
+  applicationName: "Sidewise",
+};
+
+export const viewport: Viewport = {
+  themeColor: [
+    { media: "(prefers-color-scheme: light)", color: "#f5f3ec" },
+    { media: "(prefers-color-scheme: dark)", color: "#14181d" },
+  ],
+};
+
+export default function RootLayout({ children }: { children: ReactNode }) {
+  return (
+    <html lang="en" className={`${plexSans.variable} ${jetbrainsMono.variable}`}>
+      <body className="flex min-h-dvh flex-col antialiased">
+        <a
+          href="#main"
+          className="sr-only focus:not-sr-only focus:fixed focus:top-2 focus:left-2 focus:z-50 focus:rounded focus:bg-sheet focus:px-3 focus:py-2"
+        >
+          Skip to content
+        </a>
+        <SiteHeader />
+        <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-6 sm:py-10">
+          {children}
+        </main>
+        <SiteFooter />
+      </body>
+    </html>
+  );
+}

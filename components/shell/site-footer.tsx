@@ -1,0 +1,19 @@
+import { Suspense } from "react";
+import { safetySummary } from "@/content/safety";
+import { ShopContactLine } from "./shop-contact";
+
+export function SiteFooter() {
+  return (
+    <footer className="mt-16 border-t border-rule bg-sheet/95 text-sm text-ink-soft">
+      <div className="mx-auto flex max-w-6xl flex-col gap-3 px-4 py-6">
+        <p role="note" className="max-w-3xl">
+          <span className="font-semibold text-ink">Safety: </span>
+          {safetySummary}
+        </p>
+        <Suspense fallback={<p aria-hidden="true">&nbsp;</p>}>
+          <ShopContactLine />
+        </Suspense>
+      </div>
+    </footer>
+  );
+}

@@ -1,0 +1,12 @@
+/** The cautions shown wherever a choice of tire or size is made. Plain words, our own. */
+export const safetySummary =
+  "Tires carry people. Follow your vehicle's tire and loading placard, keep the same rim diameter, never fit a lower load index or speed rating than specified, and have tires mounted and balanced by a qualified fitter. Local rules and the vehicle and tire makers' guidance come first.";
+
+export const safetyCautions = [
+  "Follow the tire and loading information placard on your vehicle (usually on the driver's door jamb).",
+  "Never fit a lower load index or a lower speed rating than the vehicle specifies.",
+  "Keep the same rim diameter: a tire only fits a wheel of exactly its rim size.",
+  "A change of overall diameter changes what the speedometer shows and can affect ABS, stability control and clearance.",
+  "Have tires mounted and balanced by a qualified fitter.",
+  "Local rules and the vehicle and tire makers' guidance prevail over anything shown here.",
+] as const;

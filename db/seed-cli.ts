@@ -1,0 +1,14 @@
+import { migrateDatabase, openDatabase } from "./client";
+import { seedDemoData } from "./seed";
+import { readServerEnv } from "@/lib/env/server-env";
+
+// Re-seeds the demo data on demand. With PGlite, stop the dev server first: one process per data folder.
+const env = readServerEnv();
+const handle = await openDatabase({ url: env.DATABASE_URL, dataDir: env.PGLITE_DATA_DIR });
+try {
+  await migrateDatabase(handle);
+  await seedDemoData(handle.db);
+  console.log(`Demo data seeded into ${handle.kind === "postgres" ? "the PostgreSQL server" : env.PGLITE_DATA_DIR}.`);
+} finally {
+  await handle.close();
+}

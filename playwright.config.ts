@@ -1,0 +1,68 @@
+import { existsSync, mkdtempSync } from "node:fs";
+import { tmpdir } from "node:os";
+import path from "node:path";
+import { defineConfig, devices } from "@playwright/test";
+
+const port = Number(process.env.E2E_PORT ?? 3210);
+const baseURL = `http://localhost:${port}`;
+
+function findChromium(): string {
+  const candidates = [process.env.CHROMIUM_PATH, "/usr/bin/chromium", "/usr/bin/chromium-browser"].filter(
+    (candidate): candidate is string => Boolean(candidate),
+  );
+  const found = candidates.find((candidate) => existsSync(candidate));
+  if (!found) {
+    throw new Error(
+      "No Chromium found for the end-to-end tests. Install Debian's browser with `sudo apt-get install -y chromium`, " +
+        "or point CHROMIUM_PATH at a Chromium binary.",
+    );
+  }
+  return found;
+}
+
+// Every run gets its own embedded database, so the e2e tests never touch development data.
+const e2eDataDir = process.env.E2E_PGLITE_DATA_DIR ?? path.join(mkdtempSync(path.join(tmpdir(), "sidewise-e2e-")), "pglite");
+process.env.E2E_PGLITE_DATA_DIR = e2eDataDir;
+
+export default defineConfig({
+  testDir: "tests/e2e",
+  fullyParallel: false,
+  workers: 1,
+  forbidOnly: Boolean(process.env.CI),
+  retries: process.env.CI ? 1 : 0,
+  reporter: process.env.CI ? [["list"]] : [["list"]],
+  timeout: 30_000,
+  use: {
+    baseURL,
+    trace: "retain-on-failure",
+    launchOptions: {
+      executablePath: findChromium(),
+      args: [
+        "--no-sandbox",
+        "--disable-gpu",
+        "--disable-background-networking",
+        "--disable-component-update",
+        "--disable-sync",
+        "--no-first-run",
+        "--disable-quic",
+      ],
+    },
+  },
+  projects: [
+    { name: "phone", use: { ...devices["Pixel 7"], viewport: { width: 360, height: 780 }, defaultBrowserType: "chromium" } },
+    { name: "desktop", use: { ...devices["Desktop Chrome"], viewport: { width: 1280, height: 900 } } },
+  ],
+  webServer: {
+    command: `npm run build && node node_modules/next/dist/bin/next start -p ${port}`,
+    url: `${baseURL}/api/health`,
+    timeout: 300_000,
+    reuseExistingServer: !process.env.CI,
+    stdout: "pipe",
+    env: {
+      PGLITE_DATA_DIR: e2eDataDir,
+      DATABASE_URL: "",
+      DEMO_SEED: "on",
+      NEXT_TELEMETRY_DISABLED: "1",
+    },
+  },
+});
