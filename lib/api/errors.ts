@@ -1,0 +1,23 @@
+import { NextResponse } from "next/server";
+
+/** The public API's error codes and the HTTP status each one answers with. */
+export const apiErrorStatus = {
+  missing_parameter: 400,
+  invalid_parameter: 400,
+  unauthenticated: 401,
+  forbidden: 403,
+  not_found: 404,
+  gone: 410,
+  too_large: 413,
+  too_long: 414,
+  unreadable: 422,
+  unknown_load_index: 422,
+  unknown_speed_symbol: 422,
+  rate_limited: 429,
+} as const;
+
+export type ApiErrorCode = keyof typeof apiErrorStatus;
+
+export function apiError(code: ApiErrorCode, message: string, headers?: HeadersInit): NextResponse {
+  return NextResponse.json({ error: { code, message } }, { status: apiErrorStatus[code], headers });
+}

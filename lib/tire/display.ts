@@ -1,0 +1,46 @@
+import { kgToLb, kmhToMph, kpaToPsi, mmToIn } from "./units";
+
+/** How figures are shown to a person; the API always answers in both. */
+export type UnitSystem = "metric" | "imperial";
+
+const grouped = new Intl.NumberFormat("en-US", { maximumFractionDigits: 0 });
+const oneDecimal = new Intl.NumberFormat("en-US", { minimumFractionDigits: 1, maximumFractionDigits: 1 });
+
+export const formatInteger = (value: number): string => grouped.format(Math.round(value));
+export const formatOneDecimal = (value: number): string => oneDecimal.format(value);
+
+/** Millimetres to the nearest millimetre, inches to a tenth: 793 mm, 31.2 in. */
+export function formatLength(mm: number, units: UnitSystem): string {
+  return units === "metric" ? `${formatInteger(mm)} mm` : `${formatOneDecimal(mmToIn(mm))} in`;
+}
+
+/** A load, as the load tables print it: 1,360 kg or 2,998 lb (kg × 2.20462, rounded). */
+export function formatLoad(kg: number, units: UnitSystem): string {
+  return units === "metric" ? `${formatInteger(kg)} kg` : `${formatInteger(kgToLb(kg))} lb`;
+}
+
+export function formatSpeed(kmh: number, units: UnitSystem): string {
+  return units === "metric" ? `${formatInteger(kmh)} km/h` : `${formatInteger(kmhToMph(kmh))} mph`;
+}
+
+export function formatPressure(kPa: number, units: UnitSystem): string {
+  return units === "metric" ? `${formatInteger(kPa)} kPa` : `${formatInteger(kpaToPsi(kPa))} psi`;
+}
+
+/** Revolutions per kilometre (metric) or per mile (imperial), to a tenth. */
+export function formatRevolutions(revsPerKm: number, revsPerMile: number, units: UnitSystem): string {
+  return units === "metric" ? `${formatOneDecimal(revsPerKm)} per km` : `${formatOneDecimal(revsPerMile)} per mile`;
+}
+
+/** A signed percentage to a tenth: +0.4 %, −1.2 %, 0.0 %. */
+export function formatSignedPercent(pct: number): string {
+  const rounded = (Math.sign(pct) * Math.round(Math.abs(pct) * 10)) / 10;
+  if (rounded === 0) return "0.0 %";
+  return `${rounded > 0 ? "+" : "−"}${oneDecimal.format(Math.abs(rounded))} %`;
+}
+
+/** The default unit system for a browser locale: imperial for the United States, Liberia and Myanmar. */
+export function defaultUnitSystem(locale: string | undefined): UnitSystem {
+  const region = locale?.split(/[-_]/)[1]?.toUpperCase();
+  return region === "US" || region === "LR" || region === "MM" ? "imperial" : "metric";
+}

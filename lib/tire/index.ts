@@ -1,0 +1,14 @@
+export * from "./units";
+export * from "./load-index";
+export * from "./speed-symbols";
+export * from "./load-range";
+export * from "./geometry";
+export * from "./format";
+export * from "./service-type";
+export * from "./decode-response";
+export { parseMarking } from "./parse/parse-marking";
+export { SIZE_BOUNDS } from "./parse/size-parts";
+export { sizeFromSlug } from "./slug";
+export type * from "./types";
+export * from "./display";
+export * from "./describe";

@@ -1,0 +1,131 @@
+import { addMiss, type Reader } from "./reader";
+import { isDigit, isLetter, isSpace } from "./tokens";
+
+/** A TIN has at most 13 symbols (49 CFR 574.5, since the April 2015 rule). */
+const TIN_MAX_SYMBOLS = 13;
+/** 9 symbols before the date code make a 13-symbol TIN, which starts with a 3-symbol plant code. */
+const SYMBOLS_BEFORE_DATE_WITH_3_SYMBOL_PLANT = 9;
+/** TIN symbols never include G, I, O, Q, S or Z (49 CFR 574.5, from memory). */
+const NOT_TIN_SYMBOLS = /[GIOQSZ]/;
+/** Words that end a TIN when they follow it on the same line. */
+const AFTER_TIN = new Set(["MAX", "MAXIMUM", "LOAD", "XL", "SL", "TREADWEAR", "TRACTION", "TEMPERATURE", "TEMP", "UTQG", "DOT", "TIN"]);
+
+const isAlnum = (c: number): boolean => isDigit(c) || isLetter(c);
+const allDigits = (s: string): boolean => /^\d+$/.test(s);
+
+interface Group {
+  text: string;
+  end: number;
+}
+
+/** Space-separated symbol groups after the keyword, as long as they can still belong to one TIN. */
+function tinGroups(input: string, from: number): Group[] {
+  const groups: Group[] = [];
+  let pos = from;
+  let symbols = 0;
+  while (pos < input.length) {
+    let end = pos;
+    while (end < input.length && isAlnum(input.charCodeAt(end))) end++;
+    if (end === pos) break;
+    const text = input.slice(pos, end).toUpperCase();
+    const after = input.charCodeAt(end);
+    const closes = end === input.length || isSpace(after) || ",;.)".includes(input.charAt(end));
+    if (!closes || symbols + text.length > TIN_MAX_SYMBOLS || AFTER_TIN.has(text)) break;
+    groups.push({ text, end });
+    symbols += text.length;
+    pos = end;
+    while (pos < input.length && isSpace(input.charCodeAt(pos))) pos++;
+  }
+  return groups;
+}
+
+function joined(groups: Group[], count: number): string {
+  let text = "";
+  for (let g = 0; g < count; g++) text += groups[g]?.text ?? "";
+  return text;
+}
+
+/** Finds the date code: the last 4-digit group, else a final 3-digit group (before 2000), else 4 digits ending a run-together TIN. */
+function splitDate(groups: Group[]): { before: string; date: string; end: number } | null {
+  for (let g = groups.length - 1; g >= 0; g--) {
+    const group = groups[g] as Group;
+    if (group.text.length === 4 && allDigits(group.text)) {
+      return { before: joined(groups, g), date: group.text, end: group.end };
+    }
+  }
+  const last = groups.at(-1);
+  if (!last) return null;
+  const before = joined(groups, groups.length - 1);
+  if (last.text.length === 3 && allDigits(last.text)) return { before, date: last.text, end: last.end };
+  const tail = last.text.slice(-4);
+  if (last.text.length > 4 && allDigits(tail) && !allDigits(last.text)) {
+    return { before: before + last.text.slice(0, -4), date: tail, end: last.end };
+  }
+  return null;
+}
+
+function skipToToken(r: Reader, i: number, pos: number): number {
+  let k = i + 1;
+  while (k < r.tokens.length && (r.tokens[k]?.start ?? pos) < pos) k++;
+  return k;
+}
+
+/**
+ * "DOT U2LL LMLR 3208" (49 CFR 574.5): plant code, size and optional codes, then the week and year
+ * of manufacture. "DOT" may touch the symbols ("DOTU2LL…"); "TIN" works like "DOT".
+ */
+export function readDot(r: Reader, i: number): number {
+  const t = r.tokens[i];
+  if (t?.kind !== "word" || !(t.text.startsWith("DOT") || t.text === "TIN")) return 0;
+  const input = r.input;
+  let from = t.start + 3;
+  while (from < input.length && (isSpace(input.charCodeAt(from)) || ":#-".includes(input.charAt(from)))) from++;
+  const groups = tinGroups(input, from);
+  const found = splitDate(groups);
+  const d = r.draft;
+  if (!found) {
+    if (t.text.length > 3) return 0;
+    const end = groups.at(-1)?.end ?? t.end;
+    addMiss(
+      r,
+      `"${input.slice(t.start, end)}" has no date code.`,
+      "The date code is the last group of the DOT code: four digits, week then year (3208 = week 32 of 2008).",
+    );
+    d.spans.push({ part: "unread", start: t.start, end });
+    return skipToToken(r, i, end);
+  }
+  const next = skipToToken(r, i, found.end);
+  const week = Number(found.date.slice(0, 2));
+  if (week < 1 || week > 53) {
+    addMiss(
+      r,
+      `The date code ${found.date} in "${input.slice(t.start, found.end)}" does not read as a week and year: weeks run from 01 to 53.`,
+      "Type the last group of the DOT code as marked, e.g. DOT 3208 for week 32 of 2008.",
+    );
+    d.spans.push({ part: "unread", start: t.start, end: found.end });
+    return next;
+  }
+  if (d.dot) {
+    d.warnings.push(`A second DOT code, "${input.slice(t.start, found.end)}", is left out: only the first is read.`);
+    d.spans.push({ part: "unread", start: t.start, end: found.end });
+    return next;
+  }
+  const threeDigit = found.date.length === 3;
+  const before = found.before;
+  const year = threeDigit ? 1990 + Number(found.date[2]) : 2000 + Number(found.date.slice(2));
+  d.dot = {
+    plantCode: before.slice(0, before.length === SYMBOLS_BEFORE_DATE_WITH_3_SYMBOL_PLANT ? 3 : 2),
+    week,
+    year,
+    yearAmbiguous: threeDigit,
+    tin: before + found.date,
+  };
+  if (threeDigit) {
+    d.assumptions.push(`The three-digit date code ${found.date} is from before 2000 and gives only the last digit of the year: week ${week} of ${year} is assumed (it could be ${year - 10}).`);
+  }
+  if (NOT_TIN_SYMBOLS.test(before)) {
+    d.warnings.push(`The DOT code "${input.slice(t.start, found.end)}" contains a letter that TINs never use (G, I, O, Q, S or Z); check for a misread, such as O for 0.`);
+  }
+  d.spans.push({ part: "dot", start: t.start, end: found.end });
+  return next;
+}

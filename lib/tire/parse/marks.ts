@@ -1,0 +1,155 @@
+import { isLoadRange } from "../load-range";
+import { addSpan, endsChunk, numAt, punctAt, skipPunct, textOf, wordAt, type Reader } from "./reader";
+
+/** Records a load range read from tokens [from, to); the letter must be a known one. */
+export function setLoadRange(r: Reader, letter: string, from: number, to: number): void {
+  const d = r.draft;
+  if (!isLoadRange(letter)) {
+    d.warnings.push(`Load range ${letter} is not a known load range (B to N).`);
+    addSpan(r, "unread", from, to);
+    return;
+  }
+  if (d.loadRange !== null && d.loadRange !== letter) {
+    d.warnings.push(`Two load ranges are marked (${d.loadRange} and ${letter}); ${d.loadRange} is used.`);
+  }
+  d.loadRange ??= letter;
+  addSpan(r, "loadRange", from, to);
+}
+
+/** "LOAD RANGE E", "LR E", "LR-E", "LRE". */
+export function readLoadRange(r: Reader, i: number): number {
+  const w = wordAt(r, i);
+  let j: number;
+  let letter: string | undefined;
+  if (w === "LOAD" && wordAt(r, i + 1) === "RANGE") {
+    j = skipPunct(r, i + 2, ":-");
+    letter = wordAt(r, j++);
+  } else if (w === "LR") {
+    j = skipPunct(r, i + 1, ":-");
+    letter = wordAt(r, j++);
+  } else if (w?.length === 3 && w.startsWith("LR")) {
+    j = i + 1;
+    letter = w[2];
+  } else {
+    return 0;
+  }
+  if (letter?.length !== 1 || !endsChunk(r, j)) return 0;
+  setLoadRange(r, letter, i, j);
+  return j;
+}
+
+/** A lone load-range letter after a light-truck size: "LT265/75R16 123/120S E". */
+export function readLoneLoadRange(r: Reader, i: number): number {
+  const w = wordAt(r, i);
+  const size = r.draft.size;
+  const lightTruck = size !== null && (size.prefix === "LT" || size.kind === "flotation");
+  if (!lightTruck || w?.length !== 1 || !isLoadRange(w) || !endsChunk(r, i + 1)) return 0;
+  setLoadRange(r, w, i, i + 1);
+  return i + 1;
+}
+
+/** "10PR", "10 PLY", "10-ply", "10 PLY RATING". */
+export function readPlyRating(r: Reader, i: number): number {
+  const n = numAt(r, i);
+  if (!n?.plain) return 0;
+  let j = skipPunct(r, i + 1, "-");
+  const w = wordAt(r, j);
+  if (w !== "PR" && w !== "PLY") return 0;
+  j++;
+  if (wordAt(r, j) === "RATING") j++;
+  if (!endsChunk(r, j)) return 0;
+  const d = r.draft;
+  if (n.value < 2 || n.value > 40) {
+    d.warnings.push(`"${textOf(r, i, j)}" is not a usual ply rating (2 to 40).`);
+    addSpan(r, "unread", i, j);
+    return j;
+  }
+  if (d.plyRating !== null && d.plyRating !== n.value) {
+    d.warnings.push(`Two ply ratings are marked (${d.plyRating} and ${n.value}); ${d.plyRating} is used.`);
+  }
+  d.plyRating ??= n.value;
+  addSpan(r, "plyRating", i, j);
+  return j;
+}
+
+function setLoadType(r: Reader, type: "SL" | "XL", from: number, to: number): number {
+  const d = r.draft;
+  if (d.loadType !== null && d.loadType !== type) {
+    d.warnings.push("Both standard load (SL) and extra load (XL) are marked; extra load is used.");
+  }
+  if (d.loadType !== "XL") d.loadType = type;
+  addSpan(r, "loadType", from, to);
+  return to;
+}
+
+function setRunFlat(r: Reader, from: number, to: number): number {
+  r.draft.runFlat = true;
+  addSpan(r, "runFlat", from, to);
+  return to;
+}
+
+/**
+ * "XL", "Extra Load", "Reinforced", "SL", "Standard Load", and "RF", which means reinforced once a
+ * service description has been read and run-flat before one (in or right after the size).
+ */
+export function readLoadType(r: Reader, i: number): number {
+  const w = wordAt(r, i);
+  const next = wordAt(r, i + 1);
+  let to = i + 1;
+  let type: "SL" | "XL" | "runFlat";
+  if (w === "XL" || w === "REINFORCED" || w === "REINF") type = "XL";
+  else if (w === "SL") type = "SL";
+  else if (w === "RF") type = r.draft.service ? "XL" : "runFlat";
+  else if (w === "EXTRA" && next === "LOAD") [type, to] = ["XL", i + 2];
+  else if (w === "STANDARD" && next === "LOAD") [type, to] = ["SL", i + 2];
+  else return 0;
+  if (!endsChunk(r, to)) return 0;
+  return type === "runFlat" ? setRunFlat(r, i, to) : setLoadType(r, type, i, to);
+}
+
+/** "RFT", "Runflat", "Run Flat", "Run-Flat". */
+export function readRunFlat(r: Reader, i: number): number {
+  const w = wordAt(r, i);
+  let to = 0;
+  if (w === "RFT" || w === "RUNFLAT") to = i + 1;
+  else if (w === "RUN") {
+    const j = skipPunct(r, i + 1, "-");
+    if (wordAt(r, j) === "FLAT") to = j + 1;
+  }
+  return to > 0 && endsChunk(r, to) ? setRunFlat(r, i, to) : 0;
+}
+
+function setWinter(r: Reader, mark: "mudAndSnow" | "threePeak", from: number, to: number): number {
+  r.draft[mark] = true;
+  addSpan(r, "winter", from, to);
+  return to;
+}
+
+/** "M+S", "M/S", "M&S", "MS", "Mud and Snow". */
+export function readMudAndSnow(r: Reader, i: number): number {
+  const w = wordAt(r, i);
+  let to = 0;
+  if (w === "MS") to = i + 1;
+  else if (w === "M" && "+/&".includes(punctAt(r, i + 1) ?? "x") && wordAt(r, i + 2) === "S") to = i + 3;
+  else if (w === "MUD" && (wordAt(r, i + 1) === "AND" || "+&".includes(punctAt(r, i + 1) ?? "x"))) {
+    if (wordAt(r, i + 2) === "SNOW") to = i + 3;
+  }
+  return to > 0 && endsChunk(r, to) ? setWinter(r, "mudAndSnow", i, to) : 0;
+}
+
+/** "3PMSF", "3 PMSF", "three-peak mountain snowflake", "3 peak mountain snow flake". */
+export function readThreePeak(r: Reader, i: number): number {
+  const three = wordAt(r, i) === "THREE" || numAt(r, i)?.text === "3";
+  if (!three) return 0;
+  let j = skipPunct(r, i + 1, "-");
+  const w = wordAt(r, j);
+  if (w === "PMSF") j++;
+  else if (w === "PEAK" || w === "PEAKS") {
+    j = skipPunct(r, j + 1, "-");
+    if (wordAt(r, j++) !== "MOUNTAIN") return 0;
+    const flake = wordAt(r, j++);
+    if (flake === "SNOW" && wordAt(r, j) === "FLAKE") j++;
+    else if (flake !== "SNOWFLAKE") return 0;
+  } else return 0;
+  return endsChunk(r, j) ? setWinter(r, "threePeak", i, j) : 0;
+}
