@@ -1,11 +1,17 @@
+import { SidewallReader } from "@/components/reader/sidewall-reader";
 import { PageIntro } from "@/components/ui/page-intro";
 
-export default function SidewallReaderPage() {
+type SearchParams = Promise<Record<string, string | string[] | undefined>>;
+
+export default async function SidewallReaderPage({ searchParams }: { searchParams: SearchParams }) {
+  const { q } = await searchParams;
+  const initialText = typeof q === "string" ? q.slice(0, 2000) : "";
   return (
     <section>
       <PageIntro eyebrow="Sidewall reader" title="What does your sidewall say?">
-        <p>Type or paste the markings from your tire, such as 285/50R20 119S, and see each part explained and drawn to scale.</p>
+        <p>Each part explained in plain words and the size drawn to scale, as you type.</p>
       </PageIntro>
+      <SidewallReader initialText={initialText} />
     </section>
   );
 }

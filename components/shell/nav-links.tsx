@@ -18,6 +18,7 @@ export function NavLinks() {
           <li key={item.href} className="shrink-0">
             <Link
               href={item.href}
+              prefetch={false}
               aria-current={current ? "page" : undefined}
               className={`inline-flex min-h-11 items-center rounded px-3 whitespace-nowrap hover:bg-accent-soft ${
                 current ? "font-semibold text-accent underline decoration-2 underline-offset-8" : "text-ink-soft"

@@ -1,0 +1,69 @@
+// @vitest-environment jsdom
+import { cleanup, fireEvent, render, screen, within } from "@testing-library/react";
+import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
+import { SidewallReader } from "@/components/reader/sidewall-reader";
+
+vi.mock("next/link", () => ({
+  default: ({ href, children, ...rest }: { href: string; children: React.ReactNode }) => (
+    <a href={href} {...rest}>
+      {children}
+    </a>
+  ),
+}));
+
+beforeEach(() => window.localStorage.clear());
+afterEach(cleanup);
+
+function typeInto(text: string) {
+  fireEvent.change(screen.getByLabelText("Type or paste what's on your sidewall"), { target: { value: text } });
+}
+
+describe("the Sidewall reader", () => {
+  it("decodes as it is typed and shows metric figures", () => {
+    window.localStorage.setItem("sidewise:units", "metric");
+    render(<SidewallReader initialText="" />);
+    typeInto("285/50R20 119S");
+    expect(screen.getByText(/Read as/).textContent).toContain("285/50R20 119S");
+    const table = screen.getAllByRole("table")[0]!;
+    expect(within(table).getByText("Overall diameter").closest("tr")?.textContent).toContain("793 mm");
+    // Load index 119 = 1,360 kg (ISO 4000-1 load-index table).
+    expect(screen.getByText(/carries up to 1,360 kg per tire/)).toBeTruthy();
+  });
+
+  it("switches every figure to imperial and remembers the choice", () => {
+    window.localStorage.setItem("sidewise:units", "metric");
+    render(<SidewallReader initialText="285/50R20 119S" />);
+    fireEvent.click(screen.getByLabelText("Imperial"));
+    const table = screen.getAllByRole("table")[0]!;
+    expect(within(table).getByText("Overall diameter").closest("tr")?.textContent).toContain("31.2 in");
+    expect(screen.getByText(/carries up to 2,998 lb per tire/)).toBeTruthy();
+    expect(screen.queryByText(/ mm$/)).toBeNull();
+    expect(window.localStorage.getItem("sidewise:units")).toBe("imperial");
+  });
+
+  it("explains what is missing when nothing can be read", () => {
+    render(<SidewallReader initialText="" />);
+    typeInto("285/50R");
+    expect(screen.getByRole("alert").textContent).toMatch(/rim diameter/i);
+  });
+
+  it("decodes a DOT code on its own, without a drawing", () => {
+    render(<SidewallReader initialText="" />);
+    typeInto("DOT 4B7X 2HRT 1523");
+    expect(screen.getByText(/made in week 15 of 2023/)).toBeTruthy();
+    expect(screen.queryByRole("img")).toBeNull();
+  });
+
+  it("fills the input from an example chip", () => {
+    render(<SidewallReader initialText="" />);
+    fireEvent.click(screen.getByRole("button", { name: "245/40ZR18 97Y XL" }));
+    expect((screen.getByLabelText("Type or paste what's on your sidewall") as HTMLInputElement).value).toBe("245/40ZR18 97Y XL");
+    expect(screen.getByText(/Extra Load: reinforced/)).toBeTruthy();
+  });
+
+  it("links onward with the size, load index and speed symbol filled in", () => {
+    render(<SidewallReader initialText="LT265/75R16 123/120S Load Range E" />);
+    const finder = screen.getByRole("link", { name: /Replacement finder/ });
+    expect(finder.getAttribute("href")).toBe("/replace?size=LT265-75R16&loadIndex=123&speedSymbol=S&loadRange=E");
+  });
+});
