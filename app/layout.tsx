@@ -3,6 +3,7 @@ import localFont from "next/font/local";
 import type { ReactNode } from "react";
 import { SiteFooter } from "@/components/shell/site-footer";
 import { SiteHeader } from "@/components/shell/site-header";
+import { siteUrl } from "@/lib/env/site-url";
 import "./globals.css";
 
 const plexSans = localFont({
@@ -20,6 +21,7 @@ const jetbrainsMono = localFont({
 });
 
 export const metadata: Metadata = {
+  metadataBase: siteUrl(),
   title: { default: "Sidewise — read your tire's sidewall", template: "%s · Sidewise" },
   description:
     "Type what is printed on your tire's sidewall and see every part explained, drawn to scale, with equal-or-better replacements from the shop's stock.",

@@ -12,3 +12,4 @@ export { sizeFromSlug } from "./slug";
 export type * from "./types";
 export * from "./display";
 export * from "./describe";
+export { COMMON_SIZES } from "./common-sizes";

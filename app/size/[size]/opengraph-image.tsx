@@ -1,0 +1,44 @@
+import { ImageResponse } from "next/og";
+import { drawnTireOf } from "@/components/reader/drawn-tire";
+import { TireSketch } from "@/components/share-image/tire-sketch";
+import { shareImageFonts, shareImageSize } from "@/lib/share-image/fonts";
+import { readSizeSheet } from "@/lib/size-sheet/read-size-sheet";
+import { formatLength, formatRevolutions } from "@/lib/tire";
+
+export const size = shareImageSize;
+export const contentType = "image/png";
+export const alt = "The tire size drawn to scale with its overall diameter, width and revolutions per mile";
+
+export default async function SizeShareImage({ params }: { params: Promise<{ size: string }> }) {
+  const sheet = readSizeSheet((await params).size);
+  if (!sheet) return new Response("Not a tire size", { status: 404 });
+  const { geometry, size: tireSize, designation } = sheet;
+  const facts = [
+    ["Overall diameter", `${formatLength(geometry.overallDiameterMm, "metric")} · ${formatLength(geometry.overallDiameterMm, "imperial")}`],
+    ["Section width", `${formatLength(geometry.sectionWidthMm, "metric")} · ${formatLength(geometry.sectionWidthMm, "imperial")}`],
+    ["Sidewall", `${formatLength(geometry.sidewallMm, "metric")} · ${formatLength(geometry.sidewallMm, "imperial")}`],
+    ["Revolutions", formatRevolutions(geometry.revsPerKm, geometry.revsPerMile, "imperial")],
+  ];
+  return new ImageResponse(
+    (
+      <div style={{ display: "flex", width: "100%", height: "100%", background: "#f5f3ec", color: "#1b2129", fontFamily: "Plex", padding: 56 }}>
+        <div style={{ display: "flex", alignItems: "center", justifyContent: "center", width: 520 }}>
+          <TireSketch tires={[drawnTireOf(tireSize, geometry)]} sizePx={500} />
+        </div>
+        <div style={{ display: "flex", flexDirection: "column", justifyContent: "center", paddingLeft: 48, flex: 1 }}>
+          <div style={{ fontSize: 28, color: "#244a9a", letterSpacing: 4 }}>SIDEWISE · SIZE SHEET</div>
+          <div style={{ fontFamily: "Mono", fontSize: designation.length > 10 ? 58 : 76, fontWeight: 600, marginTop: 8 }}>{designation}</div>
+          <div style={{ display: "flex", flexDirection: "column", marginTop: 28 }}>
+            {facts.map(([label, value]) => (
+              <div key={label} style={{ display: "flex", justifyContent: "space-between", borderTop: "2px solid #d8d3c4", padding: "12px 0", fontSize: 27 }}>
+                <span style={{ color: "#4a5361" }}>{label}</span>
+                <span style={{ fontFamily: "Mono", fontWeight: 600 }}>{value}</span>
+              </div>
+            ))}
+          </div>
+        </div>
+      </div>
+    ),
+    { ...shareImageSize, fonts: await shareImageFonts() },
+  );
+}

@@ -1,0 +1,34 @@
+import { formatLength, formatSize, type Geometry, type Marking, parseMarking, sizeFromSlug, sizeToSlug, type TireSize } from "@/lib/tire";
+
+export interface SizeSheetData {
+  size: TireSize;
+  geometry: Geometry;
+  marking: Marking;
+  designation: string;
+  /** The one spelling of this size in URLs: /size/285-50R20. */
+  slug: string;
+  summary: string;
+}
+
+function decodeSegment(segment: string): string {
+  try {
+    return decodeURIComponent(segment);
+  } catch {
+    return segment;
+  }
+}
+
+/** Everything the Size sheet and its share image show, or null when the URL segment is not a size. */
+export function readSizeSheet(segment: string): SizeSheetData | null {
+  const size = sizeFromSlug(decodeSegment(segment).slice(0, 64));
+  if (!size) return null;
+  const designation = formatSize(size);
+  const marking = parseMarking(designation);
+  if (!marking.ok || !marking.geometry) return null;
+  const geometry = marking.geometry;
+  const summary =
+    `${designation}: ${formatLength(geometry.sectionWidthMm, "metric")} wide, ` +
+    `${formatLength(geometry.overallDiameterMm, "metric")} (${formatLength(geometry.overallDiameterMm, "imperial")}) tall, ` +
+    `for ${size.rimDiameterIn}-inch wheels, ${Math.round(geometry.revsPerMile)} revolutions per mile.`;
+  return { size, geometry, marking, designation, slug: sizeToSlug(size), summary };
+}
