@@ -1,6 +1,6 @@
 "use client";
 
-import { domAnimation, LazyMotion, m, MotionConfig } from "framer-motion";
+import { LazyMotion, m, MotionConfig } from "framer-motion";
 import { useId } from "react";
 import { formatLength, type UnitSystem } from "@/lib/tire/display";
 import { Dimension } from "./dimension";
@@ -19,6 +19,7 @@ interface TireDrawingProps {
 }
 
 const transition = { type: "spring", stiffness: 140, damping: 22 } as const;
+const loadMotionFeatures = () => import("./motion-features").then((features) => features.default);
 
 /** Side view and cross-section of one to four tires, drawn in millimetres to one scale. */
 export function TireDrawing({ tires, units, title, description, arrangement, highlight = null, className }: TireDrawingProps) {
@@ -30,7 +31,7 @@ export function TireDrawing({ tires, units, title, description, arrangement, hig
   const strokeWidth = fontSize * 0.1;
 
   return (
-    <LazyMotion features={domAnimation} strict>
+    <LazyMotion features={loadMotionFeatures} strict>
       <MotionConfig reducedMotion="user" transition={transition}>
         <m.svg
           role="img"
