@@ -13,3 +13,4 @@ export type * from "./types";
 export * from "./display";
 export * from "./describe";
 export { COMMON_SIZES } from "./common-sizes";
+export * from "./placard";
