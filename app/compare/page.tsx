@@ -1,8 +1,32 @@
 import type { Metadata } from "next";
-import { ComingSoon } from "@/components/ui/coming-soon";
+import { SideBySide } from "@/components/compare/side-by-side";
+import { PageIntro } from "@/components/ui/page-intro";
+import { SafetyCautions } from "@/components/ui/safety-cautions";
+import { MAX_COMPARED_SIZES } from "@/lib/compare/read-sizes";
+import { formatSize, sizeFromSlug } from "@/lib/tire";
 
-export const metadata: Metadata = { title: "Side-by-side" };
+export const metadata: Metadata = {
+  title: "Side-by-side",
+  description: "Draw up to four tire sizes over each other to scale and see what changes: diameter, sidewall, clearance and the speedometer.",
+};
 
-export default function SideBySidePage() {
-  return <ComingSoon title="Side-by-side" summary="Draw up to four sizes over each other and see what changes: diameter, sidewall, speedometer and clearance." />;
+type SearchParams = Promise<Record<string, string | string[] | undefined>>;
+
+export default async function SideBySidePage({ searchParams }: { searchParams: SearchParams }) {
+  const { sizes } = await searchParams;
+  const typed = typeof sizes === "string" ? sizes.slice(0, 400).split(",").map((size) => size.trim()).filter(Boolean) : [];
+  // Slugs from the address are shown as people write sizes: 285-50R20 becomes 285/50R20.
+  const initialSizes = typed.slice(0, MAX_COMPARED_SIZES).map((text) => {
+    const size = sizeFromSlug(text);
+    return size ? formatSize(size) : text;
+  });
+  return (
+    <section className="flex flex-col gap-6">
+      <PageIntro eyebrow="Side-by-side" title="What a different size changes">
+        <p>Up to four sizes drawn over each other to one scale. The first is the reference: the size your speedometer is set for.</p>
+      </PageIntro>
+      <SideBySide initialSizes={initialSizes.length > 0 ? initialSizes : ["", ""]} />
+      <SafetyCautions />
+    </section>
+  );
 }

@@ -14,3 +14,4 @@ export * from "./display";
 export * from "./describe";
 export { COMMON_SIZES } from "./common-sizes";
 export * from "./placard";
+export * from "./compare";

@@ -1,0 +1,78 @@
+"use client";
+
+import { useEffect, useMemo, useRef, useState } from "react";
+import { ScaledTireDrawing } from "@/components/diagram/scaled-tire-drawing";
+import { UnitsToggle } from "@/components/units/units-toggle";
+import { useUnitSystem } from "@/components/units/use-unit-system";
+import { compareSizes, formatSize, sizeFromSlug, sizeGeometry, sizeToSlug, type TireSize } from "@/lib/tire";
+import { DifferenceTable } from "./difference-table";
+import { type SizeEntry, SizeListEditor } from "./size-list-editor";
+import { SpeedometerTable } from "./speedometer-table";
+
+const entryOf = (text: string, id: number): SizeEntry => ({ id, text, valid: sizeFromSlug(text) !== null });
+
+/** Up to four sizes drawn over each other to one scale, with their differences and the speedometer. */
+export function SideBySide({ initialSizes }: { initialSizes: string[] }) {
+  const [entries, setEntries] = useState<SizeEntry[]>(() => (initialSizes.length > 0 ? initialSizes : [""]).map(entryOf));
+  const nextId = useRef(entries.length);
+  const [units, setUnits] = useUnitSystem();
+  const sizes = useMemo(() => entries.map((entry) => sizeFromSlug(entry.text)).filter((size): size is TireSize => size !== null), [entries]);
+  const compared = useMemo(() => compareSizes(sizes), [sizes]);
+
+  useEffect(() => {
+    const url = new URL(window.location.href);
+    if (sizes.length > 0) url.searchParams.set("sizes", sizes.map(sizeToSlug).join(","));
+    else url.searchParams.delete("sizes");
+    window.history.replaceState(window.history.state, "", url);
+  }, [sizes]);
+
+  const change = (id: number, text: string) => setEntries((list) => list.map((entry) => (entry.id === id ? entryOf(text, id) : entry)));
+  const remove = (id: number) => setEntries((list) => list.filter((entry) => entry.id !== id));
+  const add = () => setEntries((list) => [...list, entryOf("", nextId.current++)]);
+  const move = (id: number, offset: -1 | 1) =>
+    setEntries((list) => {
+      const from = list.findIndex((entry) => entry.id === id);
+      const to = from + offset;
+      if (from < 0 || to < 0 || to >= list.length) return list;
+      const next = [...list];
+      [next[from], next[to]] = [next[to]!, next[from]!];
+      return next;
+    });
+
+  const tires = sizes.map((size, index) => {
+    const geometry = sizeGeometry(size);
+    return { id: `${index}-${formatSize(size)}`, label: formatSize(size), ...geometry };
+  });
+  return (
+    <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,1.2fr)] lg:gap-10">
+      <div className="flex min-w-0 flex-col gap-4">
+        <SizeListEditor entries={entries} onChange={change} onRemove={remove} onMove={move} onAdd={add} />
+        <div className="flex justify-end">
+          <UnitsToggle units={units} onChange={setUnits} />
+        </div>
+      </div>
+      <div className="flex min-w-0 flex-col gap-6">
+        {tires.length > 0 ? (
+          <figure className="rounded border border-rule bg-sheet p-3 sm:p-4">
+            <ScaledTireDrawing
+              tires={tires}
+              units={units}
+              title={`${tires.map((tire) => tire.label).join(", ")} drawn over each other to one scale`}
+              description={`The reference ${tires[0]!.label} in solid lines; the other sizes dashed, dotted and dash-dotted, in the order listed.`}
+            />
+          </figure>
+        ) : (
+          <p className="rounded border border-dashed border-rule p-6 text-ink-soft">Type a size to see it drawn.</p>
+        )}
+        {compared.length > 1 ? (
+          <>
+            <DifferenceTable sizes={compared} units={units} />
+            <SpeedometerTable sizes={compared} units={units} />
+          </>
+        ) : tires.length === 1 ? (
+          <p className="text-ink-soft">Add a second size to compare it with {tires[0]!.label}.</p>
+        ) : null}
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,25 @@
+import { sizeFromSlug, type TireSize } from "@/lib/tire";
+
+export const MAX_COMPARED_SIZES = 4;
+
+export type SizeListResult =
+  | { ok: true; sizes: TireSize[] }
+  | { ok: false; code: "invalid_parameter" | "unreadable"; message: string };
+
+/** Reads "285-50R20,275/55R20,…" (slugs or ordinary spellings), at least `min` and at most four sizes. */
+export function readSizeList(text: string, min: number): SizeListResult {
+  const parts = text
+    .split(",")
+    .map((part) => part.trim())
+    .filter(Boolean);
+  if (parts.length < min || parts.length > MAX_COMPARED_SIZES) {
+    return { ok: false, code: "invalid_parameter", message: `Give ${min === 2 ? "two" : "one"} to four sizes separated by commas; got ${parts.length}.` };
+  }
+  const sizes: TireSize[] = [];
+  for (const part of parts) {
+    const size = sizeFromSlug(part);
+    if (!size) return { ok: false, code: "unreadable", message: `"${part.slice(0, 40)}" is not a tire size this app can read (try the form 285/50R20).` };
+    sizes.push(size);
+  }
+  return { ok: true, sizes };
+}

@@ -1,0 +1,41 @@
+import { expect, test } from "@playwright/test";
+import { expectNoAxeViolations } from "./helpers/axe";
+
+test.describe("Side-by-side", () => {
+  test.use({ locale: "en-GB" });
+
+  test("adds, reorders and removes sizes, and the address always holds the set", async ({ page }) => {
+    await page.goto("/compare?sizes=265-70R17");
+    await page.getByRole("button", { name: "Add a size" }).click();
+    await page.getByLabel("Size 2").fill("285/70R17");
+    await expect(page).toHaveURL(/sizes=265-70R17%2C285-70R17|sizes=265-70R17,285-70R17/);
+    // 285/70R17 is 830.8 mm against 802.8 mm: +3.5 %, and the speedometer reads below the true speed.
+    await expect(page.getByRole("row", { name: /Diameter change/ })).toContainText("+3.5 %");
+    await expect(page.getByText(/UN Regulation No. 39/)).toBeVisible();
+    await expect(page.locator('svg[role="img"]').filter({ visible: true }).locator('[data-part="overall"]')).toHaveCount(2);
+
+    await page.getByRole("button", { name: "Add a size" }).click();
+    await page.getByLabel("Size 3").fill("255/75R17");
+    await page.getByRole("button", { name: "Move size 3 up" }).click();
+    await expect(page).toHaveURL(/265-70R17%2C255-75R17%2C285-70R17|265-70R17,255-75R17,285-70R17/);
+    await page.getByRole("button", { name: "Remove size 1" }).click();
+    await expect(page.getByLabel("Reference size (the one the speedometer is set for)")).toHaveValue("255/75R17");
+
+    await page.reload();
+    await expect(page.getByLabel("Reference size (the one the speedometer is set for)")).toHaveValue("255/75R17");
+    await expect(page.getByLabel("Size 2")).toHaveValue("285/70R17");
+  });
+
+  test("reproduces the encyclopedia's speedometer example: 185/70R14 → 195/50R15 reads 6.7 % high", async ({ page }) => {
+    await page.goto("/compare?sizes=185-70R14,195-50R15");
+    // 576 ÷ 614.6 × 100 km/h = 93.7 km/h true when 100 is shown.
+    await expect(page.getByRole("row", { name: /^100 km\/h/ })).toContainText("93.7 km/h");
+    await expect(page.getByRole("row", { name: /Diameter change/ })).toContainText("−6.3 %");
+  });
+
+  test("has no accessibility violations", async ({ page }) => {
+    await page.goto("/compare?sizes=265-70R17,285-70R17,255-75R17");
+    await expect(page.getByRole("row", { name: /Diameter change/ })).toBeVisible();
+    await expectNoAxeViolations(page);
+  });
+});
