@@ -15,3 +15,4 @@ export * from "./describe";
 export { COMMON_SIZES } from "./common-sizes";
 export * from "./placard";
 export * from "./compare";
+export * from "./plus";
