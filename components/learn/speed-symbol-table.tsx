@@ -1,0 +1,41 @@
+"use client";
+
+import { SLOWEST_ROAD_SPEED_SYMBOL } from "@/content/learn/ranges";
+import { formatSpeed, speedSymbolRank } from "@/lib/tire";
+import { searchSpeedSymbols, speedSymbolRows, type SpeedSymbolRow } from "./speed-symbol-search";
+import { TableFinder, type FinderColumn, type FinderFilter } from "./table-finder";
+
+const bothSpeeds = (row: SpeedSymbolRow) => `${formatSpeed(row.kmh, "metric")} / ${formatSpeed(row.kmh, "imperial")}`;
+
+const columns: readonly FinderColumn<SpeedSymbolRow>[] = [
+  { label: "Speed symbol", cell: (row) => row.symbol, isRowHeader: true },
+  { label: "km/h", cell: (row) => `${row.above ? "over " : ""}${formatSpeed(row.kmh, "metric")}`, numeric: true, wideOnly: true },
+  { label: "mph", cell: (row) => `${row.above ? "over " : ""}${formatSpeed(row.kmh, "imperial")}`, numeric: true, wideOnly: true },
+  { label: "What it means", cell: (row) => `built for ${row.above ? "above" : "up to"} ${bothSpeeds(row)}` },
+];
+
+const roadRank = speedSymbolRank(SLOWEST_ROAD_SPEED_SYMBOL);
+const rankOf = (row: SpeedSymbolRow) => speedSymbolRank(row.symbol);
+
+const filters: readonly FinderFilter<SpeedSymbolRow>[] = [
+  { id: "all", label: "All symbols", includes: () => true },
+  { id: "road", label: `Cars and light trucks (${SLOWEST_ROAD_SPEED_SYMBOL} and faster)`, includes: (row) => rankOf(row) >= roadRank },
+  { id: "slow", label: "Slow machines and special vehicles", includes: (row) => rankOf(row) < roadRank },
+];
+
+/** Every speed symbol in order of speed, searchable by letter, service description or speed. */
+export function SpeedSymbolTable() {
+  return (
+    <TableFinder
+      caption="Speed symbols (UN R30 / ETRTO), slowest first: ordered by speed, not by letter"
+      noun={{ one: "speed symbol", many: "speed symbols" }}
+      rows={speedSymbolRows}
+      columns={columns}
+      search={searchSpeedSymbols}
+      searchLabel="Find a speed symbol or a speed"
+      searchHint="Type a letter such as H, a service description such as 95H, or a speed such as 210 km/h or 130 mph."
+      filterLegend="Show"
+      filters={filters}
+    />
+  );
+}
