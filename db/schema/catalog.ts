@@ -1,0 +1,158 @@
+import { sql } from "drizzle-orm";
+import {
+  boolean,
+  check,
+  doublePrecision,
+  index,
+  integer,
+  pgTable,
+  serial,
+  smallint,
+  text,
+  timestamp,
+  unique,
+} from "drizzle-orm/pg-core";
+
+export const SEASONS = ["all-season", "all-weather", "summer", "winter"] as const;
+export const TERRAINS = ["highway", "all-terrain", "mud-terrain"] as const;
+export const SERVICE_TYPES = ["passenger", "LT", "C", "ST", "T"] as const;
+export const SIZE_PREFIXES = ["P", "LT", "ST", "T"] as const;
+export const CONSTRUCTIONS = ["R", "D", "B"] as const;
+export const SIZE_KINDS = ["metric", "flotation"] as const;
+export const TRACTION_GRADES = ["AA", "A", "B", "C"] as const;
+export const TEMPERATURE_GRADES = ["A", "B", "C"] as const;
+
+const oneOf = (values: readonly string[]) => sql.raw(`(${values.map((v) => `'${v}'`).join(", ")})`);
+
+export const brand = pgTable("brand", {
+  id: serial().primaryKey(),
+  name: text().notNull().unique(),
+});
+
+/** A tread pattern a brand sells in many sizes; what it is made for belongs here, not to each size. */
+export const tireLine = pgTable(
+  "tire_line",
+  {
+    id: serial().primaryKey(),
+    brandId: integer()
+      .notNull()
+      .references(() => brand.id, { onDelete: "restrict" }),
+    name: text().notNull(),
+    season: text({ enum: SEASONS }).notNull(),
+    terrain: text({ enum: TERRAINS }).notNull(),
+    mudAndSnow: boolean().notNull().default(false),
+    threePeak: boolean().notNull().default(false),
+    runFlat: boolean().notNull().default(false),
+    utqgTreadwear: smallint(),
+    utqgTraction: text({ enum: TRACTION_GRADES }),
+    utqgTemperature: text({ enum: TEMPERATURE_GRADES }),
+    mileageWarrantyMiles: integer(),
+  },
+  (table) => [
+    unique("tire_line_brand_name").on(table.brandId, table.name),
+    check("tire_line_season", sql`${table.season} in ${oneOf(SEASONS)}`),
+    check("tire_line_terrain", sql`${table.terrain} in ${oneOf(TERRAINS)}`),
+    check("tire_line_traction", sql`${table.utqgTraction} in ${oneOf(TRACTION_GRADES)}`),
+    check("tire_line_temperature", sql`${table.utqgTemperature} in ${oneOf(TEMPERATURE_GRADES)}`),
+    check("tire_line_treadwear", sql`${table.utqgTreadwear} between 20 and 1500`),
+    check(
+      "tire_line_utqg_complete",
+      sql`(${table.utqgTreadwear} is null) = (${table.utqgTraction} is null) and (${table.utqgTraction} is null) = (${table.utqgTemperature} is null)`,
+    ),
+    check("tire_line_warranty", sql`${table.mileageWarrantyMiles} between 1 and 200000`),
+  ],
+);
+
+/**
+ * One item the shop sells: a line in one size and service description. The designation is stored
+ * normalized and also taken apart, so that the replacement finder can compare in SQL; the overall
+ * diameter is worked out by the tire core when the row is written.
+ */
+export const stockItem = pgTable(
+  "stock_item",
+  {
+    id: serial().primaryKey(),
+    sku: text().notNull().unique(),
+    lineId: integer()
+      .notNull()
+      .references(() => tireLine.id, { onDelete: "restrict" }),
+    designation: text().notNull(),
+    sizeKind: text({ enum: SIZE_KINDS }).notNull(),
+    prefix: text({ enum: SIZE_PREFIXES }),
+    sectionWidthMm: doublePrecision().notNull(),
+    aspectRatio: smallint(),
+    rimDiameterIn: doublePrecision().notNull(),
+    construction: text({ enum: CONSTRUCTIONS }).notNull(),
+    zr: boolean().notNull(),
+    commercial: boolean().notNull(),
+    runFlat: boolean().notNull(),
+    loadIndex: smallint().notNull(),
+    loadIndexDual: smallint(),
+    speedSymbol: text().notNull(),
+    /** Orders speed symbols by km/h (H between U and V; (Y) above Y), from the tire core. */
+    speedRank: smallint().notNull(),
+    loadRange: text(),
+    /** The ply rating the load range stands for (E → 10), so that load ranges compare as numbers. */
+    loadRangePly: smallint(),
+    extraLoad: boolean().notNull(),
+    serviceType: text({ enum: SERVICE_TYPES }).notNull(),
+    overallDiameterMm: doublePrecision().notNull(),
+    priceCents: integer().notNull(),
+    quantityOnHand: integer().notNull(),
+    retired: boolean().notNull().default(false),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (table) => [
+    // The finder walks outwards from the original's diameter within its rim, service type and
+    // construction (rules 1 and 6), nearest first and then by price and SKU: upwards on one index,
+    // downwards on the other, so a page reads about as many rows as it shows.
+    index("stock_item_finder_up")
+      .on(table.rimDiameterIn, table.serviceType, table.construction, table.overallDiameterMm, table.priceCents, sql`${table.sku} collate "C"`)
+      .where(sql`not ${table.retired}`),
+    index("stock_item_finder_down")
+      .on(table.rimDiameterIn, table.serviceType, table.construction, table.overallDiameterMm.desc().nullsFirst(), table.priceCents, sql`${table.sku} collate "C"`)
+      .where(sql`not ${table.retired}`),
+    // Catalog pages walk SKUs in plain character order, the same on every server.
+    index("stock_item_sku_plain_order")
+      .on(sql`${table.sku} collate "C"`)
+      .where(sql`not ${table.retired}`),
+    // Every stocked item of one designation (plus sizing counts them).
+    index("stock_item_designation")
+      .on(table.designation)
+      .where(sql`not ${table.retired}`),
+    index("stock_item_line").on(table.lineId),
+    // Printable ASCII without spaces, so that plain character order is the same everywhere.
+    check("stock_item_sku_shape", sql`${table.sku} ~ '^[!-~]{1,64}$'`),
+    check("stock_item_designation", sql`length(${table.designation}) between 1 and 40`),
+    check("stock_item_size_kind", sql`${table.sizeKind} in ${oneOf(SIZE_KINDS)}`),
+    check("stock_item_prefix", sql`${table.prefix} in ${oneOf(SIZE_PREFIXES)}`),
+    check("stock_item_construction", sql`${table.construction} in ${oneOf(CONSTRUCTIONS)}`),
+    check("stock_item_service_type", sql`${table.serviceType} in ${oneOf(SERVICE_TYPES)}`),
+    check("stock_item_section_width", sql`${table.sectionWidthMm} > 0`),
+    check("stock_item_aspect_ratio", sql`${table.aspectRatio} between 20 and 95`),
+    check("stock_item_rim", sql`${table.rimDiameterIn} between 8 and 30`),
+    check("stock_item_load_index", sql`${table.loadIndex} between 0 and 279`),
+    check(
+      "stock_item_load_index_dual",
+      sql`${table.loadIndexDual} between 0 and 279 and ${table.loadIndexDual} <= ${table.loadIndex}`,
+    ),
+    check("stock_item_speed", sql`length(${table.speedSymbol}) between 1 and 3 and ${table.speedRank} > 0`),
+    check(
+      "stock_item_load_range",
+      sql`(${table.loadRange} is null) = (${table.loadRangePly} is null) and ${table.loadRangePly} between 4 and 24`,
+    ),
+    check("stock_item_diameter", sql`${table.overallDiameterMm} > 0`),
+    check("stock_item_price", sql`${table.priceCents} >= 0`),
+    check("stock_item_quantity", sql`${table.quantityOnHand} >= 0`),
+  ],
+);
+
+export type Brand = typeof brand.$inferSelect;
+export type TireLine = typeof tireLine.$inferSelect;
+export type NewTireLine = typeof tireLine.$inferInsert;
+export type StockItem = typeof stockItem.$inferSelect;
+export type NewStockItem = typeof stockItem.$inferInsert;
+export type Season = (typeof SEASONS)[number];
+export type Terrain = (typeof TERRAINS)[number];
+export type CatalogServiceType = (typeof SERVICE_TYPES)[number];
