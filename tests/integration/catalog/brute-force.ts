@@ -11,7 +11,6 @@ import {
   serviceType,
   sizeFromSlug,
   sizeGeometry,
-  SPEED_SYMBOLS,
   speedSymbolRank,
   ZR_UNRATED_RANK,
   type SpeedSymbol,
