@@ -1,0 +1,27 @@
+import { and, gt, not, sql } from "drizzle-orm";
+import type { Database } from "@/db/client";
+import { brand, stockItem, tireLine } from "@/db/schema";
+import { ofBrand, ofLine } from "./catalog-select";
+import { encodeCatalogCursor } from "./cursor";
+import { skuPlainOrder } from "./rule-sql";
+import { tireColumns, toTire, type Tire } from "./tire";
+
+export interface CatalogPage {
+  items: Tire[];
+  nextCursor: string | null;
+}
+
+/** The current catalog (retired items left out) in plain SKU order, one keyset page at a time. */
+export async function listCatalog(db: Database, options: { afterSku: string | null; limit: number }): Promise<CatalogPage> {
+  const rows = await db
+    .select(tireColumns)
+    .from(stockItem)
+    .innerJoin(tireLine, ofLine)
+    .innerJoin(brand, ofBrand)
+    .where(and(not(stockItem.retired), options.afterSku === null ? undefined : gt(skuPlainOrder, sql`${options.afterSku}::text collate "C"`)))
+    .orderBy(skuPlainOrder)
+    .limit(options.limit + 1);
+  const items = rows.slice(0, options.limit).map(toTire);
+  const last = items.at(-1);
+  return { items, nextCursor: rows.length > options.limit && last ? encodeCatalogCursor(last.sku) : null };
+}
