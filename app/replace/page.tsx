@@ -1,8 +1,42 @@
 import type { Metadata } from "next";
-import { ComingSoon } from "@/components/ui/coming-soon";
+import { connection } from "next/server";
+import { getDb } from "@/db/client";
+import { ReplacementFinder } from "@/components/finder/replacement-finder";
+import { StartForm } from "@/components/finder/start-form";
+import { PageIntro } from "@/components/ui/page-intro";
+import { SafetyCautions } from "@/components/ui/safety-cautions";
+import { readFinderQuery } from "@/lib/finder/finder-query";
+import { readShopTolerance } from "@/lib/catalog/shop-tolerance";
+import { listBrandNames } from "@/lib/finder/queries";
 
-export const metadata: Metadata = { title: "Replacement finder" };
+export const metadata: Metadata = {
+  title: "Replacement finder",
+  description: "Equal-or-better tires from the shop's stock: same rim, load index and speed rating at least as high, diameter within tolerance.",
+};
 
-export default function ReplacementFinderPage() {
-  return <ComingSoon title="Replacement finder" summary="Find equal-or-better tires from the shop's stock: same rim, load index and speed rating at least as high." />;
+type SearchParams = Promise<Record<string, string | string[] | undefined>>;
+
+export default async function ReplacementFinderPage({ searchParams }: { searchParams: SearchParams }) {
+  await connection();
+  const query = readFinderQuery(await searchParams);
+  const complete = Boolean(query.size && query.loadIndex !== undefined && query.speedSymbol);
+  const db = await getDb();
+  const [brands, defaultTolerancePct] = await Promise.all([listBrandNames(db), readShopTolerance(db)]);
+  return (
+    <section className="flex flex-col gap-6">
+      <PageIntro eyebrow="Replacement finder" title="Equal-or-better tires in stock">
+        <p>Same rim diameter, a load index and speed rating at least as high, and an overall diameter close enough to keep the speedometer honest.</p>
+      </PageIntro>
+      <StartForm query={query} open={!complete} />
+      {complete ? (
+        <ReplacementFinder
+          key={`${query.size}|${query.loadIndex}|${query.loadIndexDual}|${query.speedSymbol}|${query.loadRange}`}
+          initialQuery={query}
+          brands={brands}
+          defaultTolerancePct={defaultTolerancePct}
+        />
+      ) : null}
+      <SafetyCautions />
+    </section>
+  );
 }

@@ -8,15 +8,9 @@ export interface PartSpan {
   end: number;
 }
 
+/** The parts a marking is explained by: the pieces of a size and service description, and the other marks. */
 export type SidewallPartKey =
-  | "prefix"
-  | "sectionWidth"
-  | "aspectRatio"
-  | "construction"
-  | "rimDiameter"
-  | "commercial"
-  | "loadIndex"
-  | "speedSymbol"
+  | Exclude<DetailKind, "overallDiameter" | "loadIndexDual">
   | "loadRange"
   | "plyRating"
   | "extraLoad"

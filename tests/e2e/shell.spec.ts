@@ -3,9 +3,9 @@ import { expectNoAxeViolations } from "./helpers/axe";
 
 const shellPages = [
   { path: "/", heading: "What does your sidewall say?" },
-  { path: "/compare", heading: "Side-by-side" },
-  { path: "/plus", heading: "Plus planner" },
-  { path: "/replace", heading: "Replacement finder" },
+  { path: "/compare", heading: "What a different size changes" },
+  { path: "/plus", heading: "Bigger (or smaller) wheels, same overall size" },
+  { path: "/replace", heading: "Equal-or-better tires in stock" },
   { path: "/learn", heading: "Sidewall school" },
   { path: "/counter", heading: "Counter" },
 ];
@@ -29,6 +29,7 @@ test.describe("the app shell", () => {
     await nav.getByRole("link", { name: "Side-by-side" }).click();
     await expect(page).toHaveURL(/\/compare$/);
     await expect(nav.getByRole("link", { name: "Side-by-side" })).toHaveAttribute("aria-current", "page");
+    await expect(page.getByRole("heading", { level: 1, name: "What a different size changes" })).toBeVisible();
     await nav.getByRole("link", { name: "Sidewall school" }).click();
     await expect(page).toHaveURL(/\/learn$/);
     await nav.getByRole("link", { name: "Sidewall reader" }).click();

@@ -1,0 +1,92 @@
+"use client";
+
+import { type FinderQuery, finderSorts, seasons, terrains } from "@/lib/finder/finder-query";
+
+const sortLabels: Record<(typeof finderSorts)[number], string> = {
+  diameter: "Closest diameter",
+  price: "Lowest price",
+  loadMargin: "Most load to spare",
+};
+
+interface FinderFiltersProps {
+  query: FinderQuery;
+  brands: string[];
+  defaultTolerancePct: number;
+  onChange: (patch: Partial<FinderQuery>) => void;
+}
+
+const select = "min-h-11 w-full rounded border border-rule bg-sheet px-2 text-ink";
+
+function dollarsToCents(value: string): number | undefined {
+  const dollars = Number.parseFloat(value);
+  return Number.isFinite(dollars) && dollars >= 0 ? Math.round(dollars * 100) : undefined;
+}
+
+/** Filters and sort; every change lands in the address so a reload or a pasted link shows the same list. */
+export function FinderFilters({ query, brands, defaultTolerancePct, onChange }: FinderFiltersProps) {
+  const tolerance = query.tolerancePct ?? defaultTolerancePct;
+  return (
+    <fieldset className="grid grid-cols-2 gap-3 rounded border border-rule bg-sheet p-4 text-sm sm:grid-cols-3 lg:grid-cols-4">
+      <legend className="px-1 font-semibold">Filter and sort</legend>
+      <label className="flex flex-col gap-1">
+        Sort by
+        <select className={select} value={query.sort ?? "diameter"} onChange={(event) => onChange({ sort: event.target.value as FinderQuery["sort"] })}>
+          {finderSorts.map((sort) => (
+            <option key={sort} value={sort}>
+              {sortLabels[sort]}
+            </option>
+          ))}
+        </select>
+      </label>
+      <ChoiceSelect label="Season" value={query.season} choices={seasons} onChange={(season) => onChange({ season: season as FinderQuery["season"] })} />
+      <ChoiceSelect label="Terrain" value={query.terrain} choices={terrains} onChange={(terrain) => onChange({ terrain: terrain as FinderQuery["terrain"] })} />
+      <ChoiceSelect label="Brand" value={query.brand} choices={brands} onChange={(brand) => onChange({ brand })} />
+      <label className="flex flex-col gap-1">
+        Lowest price ($)
+        <input type="number" min={0} step={1} inputMode="numeric" className={select} defaultValue={query.minPriceCents === undefined ? "" : query.minPriceCents / 100} onBlur={(event) => onChange({ minPriceCents: dollarsToCents(event.target.value) })} />
+      </label>
+      <label className="flex flex-col gap-1">
+        Highest price ($)
+        <input type="number" min={0} step={1} inputMode="numeric" className={select} defaultValue={query.maxPriceCents === undefined ? "" : query.maxPriceCents / 100} onBlur={(event) => onChange({ maxPriceCents: dollarsToCents(event.target.value) })} />
+      </label>
+      <label className="col-span-2 flex flex-col gap-1">
+        Diameter tolerance: ±{tolerance} %
+        <input type="range" min={1} max={5} step={0.5} value={tolerance} onChange={(event) => onChange({ tolerancePct: Number(event.target.value) })} className="min-h-11 accent-[var(--color-accent)]" />
+      </label>
+      <div className="col-span-2 flex flex-wrap gap-x-5 gap-y-1 sm:col-span-1 lg:col-span-2">
+        <label className="inline-flex min-h-11 items-center gap-2">
+          <input type="checkbox" checked={query.inStock !== undefined} onChange={(event) => onChange({ inStock: event.target.checked ? "1" : undefined })} className="size-5 accent-[var(--color-accent)]" />
+          In stock only
+        </label>
+        <label className="inline-flex min-h-11 items-center gap-2">
+          <input type="checkbox" checked={query.threePeak !== undefined} onChange={(event) => onChange({ threePeak: event.target.checked ? "1" : undefined })} className="size-5 accent-[var(--color-accent)]" />
+          Snowflake (3PMSF) only
+        </label>
+      </div>
+    </fieldset>
+  );
+}
+
+interface ChoiceSelectProps {
+  label: string;
+  value: string | undefined;
+  choices: readonly string[];
+  onChange: (value: string | undefined) => void;
+}
+
+/** A filter with "Any" first; choosing "Any" removes the filter. */
+function ChoiceSelect({ label, value, choices, onChange }: ChoiceSelectProps) {
+  return (
+    <label className="flex flex-col gap-1">
+      {label}
+      <select className={select} value={value ?? ""} onChange={(event) => onChange(event.target.value || undefined)}>
+        <option value="">Any</option>
+        {choices.map((choice) => (
+          <option key={choice} value={choice}>
+            {choice}
+          </option>
+        ))}
+      </select>
+    </label>
+  );
+}

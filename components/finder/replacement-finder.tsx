@@ -1,0 +1,59 @@
+"use client";
+
+import { useEffect, useMemo, useState } from "react";
+import { drawnTireOf } from "@/components/reader/drawn-tire";
+import { useUnitSystem } from "@/components/units/use-unit-system";
+import { UnitsToggle } from "@/components/units/units-toggle";
+import { alternativesSearch, type FinderQuery, finderSearch } from "@/lib/finder/finder-query";
+import { readOriginal, placardFor } from "@/lib/finder/original";
+import { FinderFilters } from "./finder-filters";
+import { FinderResults } from "./finder-results";
+import { OriginalSummary } from "./original-summary";
+import { PlacardForm } from "./placard-form";
+import { useAlternatives } from "./use-alternatives";
+
+interface ReplacementFinderProps {
+  initialQuery: FinderQuery;
+  brands: string[];
+  defaultTolerancePct: number;
+}
+
+/** Equal-or-better tires for the current one, fetched from the public API as filters change. */
+export function ReplacementFinder({ initialQuery, brands, defaultTolerancePct }: ReplacementFinderProps) {
+  const [query, setQuery] = useState(initialQuery);
+  const [units, setUnits] = useUnitSystem();
+  const original = useMemo(() => readOriginal(query), [query]);
+  const placard = useMemo(() => (original.ok ? placardFor(query, original.passengerTire, units) : null), [query, original, units]);
+  const search = original.ok ? alternativesSearch(query, { loadIndex: placard?.minLoadIndex ?? null, loadIndexDual: placard?.minLoadIndexDual ?? null }) : null;
+  const data = useAlternatives(search);
+  const update = (patch: Partial<FinderQuery>) => setQuery((current) => ({ ...current, ...patch }));
+
+  useEffect(() => {
+    const url = new URL(window.location.href);
+    url.search = finderSearch(query);
+    window.history.replaceState(window.history.state, "", url);
+  }, [query]);
+
+  if (!original.ok) {
+    return (
+      <p role="alert" className="rounded border-l-4 border-danger bg-sheet p-4">
+        {original.message}
+      </p>
+    );
+  }
+  return (
+    <div className="grid gap-6 lg:grid-cols-[minmax(0,22rem)_minmax(0,1fr)] lg:items-start lg:gap-8">
+      <div className="flex min-w-0 flex-col gap-4">
+        <OriginalSummary original={original.marking} units={units} tolerancePct={data.first?.tolerancePct ?? query.tolerancePct ?? defaultTolerancePct} />
+        <div className="flex justify-end">
+          <UnitsToggle units={units} onChange={setUnits} />
+        </div>
+        <PlacardForm query={query} check={placard} originalLoadIndex={query.loadIndex} onChange={update} />
+      </div>
+      <div className="flex min-w-0 flex-col gap-4">
+        <FinderFilters query={query} brands={brands} defaultTolerancePct={defaultTolerancePct} onChange={update} />
+        <FinderResults data={data} original={original.marking.size && original.marking.geometry ? drawnTireOf(original.marking.size, original.marking.geometry) : null} units={units} />
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,79 @@
+"use client";
+
+import { useState } from "react";
+import { ScaledTireDrawing } from "@/components/diagram/scaled-tire-drawing";
+import type { DrawnTire } from "@/components/diagram/drawing-layout";
+import { drawnTireOf } from "@/components/reader/drawn-tire";
+import type { Candidate, NearMiss } from "@/lib/finder/alternatives-response";
+import { formatPrice } from "@/lib/shop/money";
+import { formatSignedPercent, parseMarking, type UnitSystem } from "@/lib/tire";
+
+function serviceDescription(tire: Candidate | NearMiss): string {
+  const dual = tire.loadIndexDual === null ? "" : `/${tire.loadIndexDual}`;
+  return `${tire.loadIndex}${dual}${tire.speedSymbol}`;
+}
+
+function drawnFor(designation: string): DrawnTire | null {
+  const marking = parseMarking(designation);
+  return marking.ok && marking.size && marking.geometry ? drawnTireOf(marking.size, marking.geometry) : null;
+}
+
+interface ResultCardProps {
+  tire: Candidate | NearMiss;
+  original: DrawnTire | null;
+  units: UnitSystem;
+}
+
+/** One catalog tire: what it is, what it costs, whether it is here, and why it qualifies (or not). */
+export function ResultCard({ tire, original, units }: ResultCardProps) {
+  const [drawing, setDrawing] = useState(false);
+  const lines = "reasons" in tire ? tire.reasons : tire.failed;
+  const candidate = drawing ? drawnFor(tire.designation) : null;
+  const badges = [tire.extraLoad ? "XL" : null, tire.runFlat ? "Run-flat" : null, tire.loadRange ? `Load range ${tire.loadRange}` : null, tire.threePeak ? "3PMSF" : null];
+  return (
+    <article className="rounded border border-rule bg-sheet p-4" data-sku={tire.sku}>
+      <div className="flex flex-wrap items-start justify-between gap-x-4 gap-y-1">
+        <div>
+          <h3 className="font-semibold">
+            {tire.brand} {tire.line}
+          </h3>
+          <p className="font-mono text-sm">
+            {tire.designation} {serviceDescription(tire)}
+            <span className="ml-2 text-ink-soft">({formatSignedPercent(tire.diameterDiffPct)} diameter)</span>
+          </p>
+          <p className="text-sm text-ink-soft">
+            {tire.season} · {tire.terrain}
+            {badges.filter(Boolean).map((badge) => ` · ${badge}`)}
+          </p>
+        </div>
+        <div className="text-right">
+          <p className="text-lg font-semibold">{formatPrice(tire.priceCents)}</p>
+          <p className={`text-sm ${tire.inStock ? "text-ink" : "text-ink-soft"}`}>{tire.inStock ? "In stock" : "Out of stock: ask the shop"}</p>
+        </div>
+      </div>
+      <ul className={`mt-2 grid gap-x-4 text-sm sm:grid-cols-2 ${"reasons" in tire ? "" : "text-danger"}`}>
+        {lines.map((line) => (
+          <li key={line} className="flex gap-1.5">
+            <span aria-hidden="true">{"reasons" in tire ? "✓" : "✗"}</span>
+            {line}
+          </li>
+        ))}
+      </ul>
+      {original ? (
+        <button type="button" aria-expanded={drawing} onClick={() => setDrawing(!drawing)} className="mt-2 min-h-11 text-sm font-semibold text-accent underline underline-offset-4">
+          {drawing ? "Hide the drawing" : "Draw it against the current tire"}
+        </button>
+      ) : null}
+      {original && candidate ? (
+        <div className="mt-2">
+          <ScaledTireDrawing
+            tires={[original, { ...candidate, id: `${candidate.id}-candidate` }]}
+            units={units}
+            title={`${original.label} and ${candidate.label} drawn to one scale`}
+            description={`The current tire in solid lines, ${candidate.label} dashed; its overall diameter differs by ${formatSignedPercent(tire.diameterDiffPct)}.`}
+          />
+        </div>
+      ) : null}
+    </article>
+  );
+}

@@ -1,0 +1,75 @@
+import { z } from "zod";
+
+export const seasons = ["all-season", "all-weather", "summer", "winter"] as const;
+export const terrains = ["highway", "all-terrain", "mud-terrain"] as const;
+export const finderSorts = ["diameter", "price", "loadMargin"] as const;
+export const vehicleTypes = ["passenger-car", "mpv-truck-trailer"] as const;
+
+const optionalText = z.string().trim().max(64).optional().catch(undefined);
+const optionalCount = (max: number) => z.coerce.number().int().min(0).max(max).optional().catch(undefined);
+const flag = z.enum(["1", "true"]).optional().catch(undefined);
+
+/**
+ * The Replacement finder's state as it lives in the URL. Unknown or malformed values are dropped
+ * rather than refused: a shared link with a stale filter should still show a list.
+ */
+export const finderQuerySchema = z.object({
+  size: optionalText,
+  loadIndex: optionalCount(279),
+  loadIndexDual: optionalCount(279),
+  speedSymbol: z.string().trim().max(4).optional().catch(undefined),
+  loadRange: z.string().trim().toUpperCase().regex(/^[B-N]$/).optional().catch(undefined),
+  runFlat: flag,
+  tolerancePct: z.coerce.number().min(1).max(5).optional().catch(undefined),
+  season: z.enum(seasons).optional().catch(undefined),
+  terrain: z.enum(terrains).optional().catch(undefined),
+  threePeak: flag,
+  brand: optionalText,
+  minPriceCents: optionalCount(10_000_000),
+  maxPriceCents: optionalCount(10_000_000),
+  inStock: flag,
+  sort: z.enum(finderSorts).optional().catch(undefined),
+  gawrFront: z.coerce.number().positive().max(100_000).optional().catch(undefined),
+  gawrRear: z.coerce.number().positive().max(100_000).optional().catch(undefined),
+  gawrUnit: z.enum(["kg", "lb"]).optional().catch(undefined),
+  rearDuals: flag,
+  vehicle: z.enum(vehicleTypes).optional().catch(undefined),
+});
+
+export type FinderQuery = z.infer<typeof finderQuerySchema>;
+
+export function readFinderQuery(params: Record<string, string | string[] | undefined>): FinderQuery {
+  const flat = Object.fromEntries(Object.entries(params).map(([key, value]) => [key, Array.isArray(value) ? value[0] : value]));
+  return finderQuerySchema.parse(flat);
+}
+
+/** The query string that reproduces this state: for the address bar and for links. */
+export function finderSearch(query: FinderQuery): string {
+  const search = new URLSearchParams();
+  for (const [key, value] of Object.entries(query)) {
+    if (value !== undefined && value !== "") search.set(key, String(value));
+  }
+  return search.toString();
+}
+
+const apiKeys = [
+  "size", "loadIndex", "loadIndexDual", "speedSymbol", "loadRange", "runFlat", "tolerancePct", "season", "terrain",
+  "threePeak", "brand", "minPriceCents", "maxPriceCents", "inStock", "sort",
+] as const;
+
+const flagKeys = new Set<string>(["runFlat", "threePeak", "inStock"]);
+
+/** The alternatives API's query for this state, with the Placard check's minimums applied. */
+export function alternativesSearch(query: FinderQuery, minimums: { loadIndex: number | null; loadIndexDual: number | null }): URLSearchParams {
+  const search = new URLSearchParams();
+  for (const key of apiKeys) {
+    const value = query[key];
+    // The address keeps flags short ("1"); the API takes true or false.
+    if (value !== undefined && value !== "") search.set(key, flagKeys.has(key) ? "true" : String(value));
+  }
+  if (minimums.loadIndex !== null && minimums.loadIndex > (query.loadIndex ?? -1)) search.set("loadIndex", String(minimums.loadIndex));
+  if (minimums.loadIndexDual !== null && minimums.loadIndexDual > (query.loadIndexDual ?? -1)) {
+    search.set("loadIndexDual", String(minimums.loadIndexDual));
+  }
+  return search;
+}

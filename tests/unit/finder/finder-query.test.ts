@@ -1,0 +1,50 @@
+import { describe, expect, it } from "vitest";
+import { alternativesSearch, finderSearch, readFinderQuery } from "@/lib/finder/finder-query";
+import { placardFor, readOriginal } from "@/lib/finder/original";
+
+describe("the finder's address", () => {
+  it("round-trips its state through the query string", () => {
+    const query = readFinderQuery({ size: "285-50R20", loadIndex: "119", speedSymbol: "S", season: "winter", inStock: "1", tolerancePct: "2.5" });
+    expect(readFinderQuery(Object.fromEntries(new URLSearchParams(finderSearch(query))))).toEqual(query);
+  });
+
+  it("drops malformed or unknown values instead of failing the page", () => {
+    const query = readFinderQuery({ size: "285-50R20", loadIndex: "abc", speedSymbol: "S", season: "monsoon", tolerancePct: "9", sort: "random" });
+    expect(query).toEqual({ size: "285-50R20", speedSymbol: "S" });
+  });
+
+  it("sends only the API's own parameters, not the Placard check's inputs", () => {
+    const query = readFinderQuery({ size: "285-50R20", loadIndex: "119", speedSymbol: "S", gawrFront: "3000", vehicle: "passenger-car" });
+    expect(Object.fromEntries(alternativesSearch(query, { loadIndex: null, loadIndexDual: null }))).toEqual({
+      size: "285-50R20",
+      loadIndex: "119",
+      speedSymbol: "S",
+    });
+  });
+
+  it("turns the address's short flags into the API's true", () => {
+    const query = readFinderQuery({ size: "285-50R20", loadIndex: "119", speedSymbol: "S", inStock: "1", threePeak: "1" });
+    const search = alternativesSearch(query, { loadIndex: null, loadIndexDual: null });
+    expect([search.get("inStock"), search.get("threePeak")]).toEqual(["true", "true"]);
+  });
+
+  it("raises the load index to the Placard check's minimum, never lowers it", () => {
+    const query = readFinderQuery({ size: "285-50R20", loadIndex: "119", speedSymbol: "S" });
+    expect(alternativesSearch(query, { loadIndex: 121, loadIndexDual: null }).get("loadIndex")).toBe("121");
+    expect(alternativesSearch(query, { loadIndex: 110, loadIndexDual: null }).get("loadIndex")).toBe("119");
+  });
+});
+
+describe("the Placard check in the finder", () => {
+  it("converts pounds from the label before checking: 6,000 lb rear ÷ 2 × 1.10 on a truck with P-metric tires", () => {
+    const query = readFinderQuery({ size: "P265/70R17", loadIndex: "113", speedSymbol: "S", gawrRear: "6000", vehicle: "mpv-truck-trailer" });
+    const original = readOriginal(query);
+    expect(original.ok && original.passengerTire).toBe(true);
+    // 6,000 lb = 2,721.6 kg; ÷ 2 = 1,360.8 kg; × 1.10 = 1,496.9 kg → 122 (1,500 kg) (ISO 4000-1 table; FMVSS 120 S5.1.2).
+    expect(placardFor(query, true, "metric")?.minLoadIndex).toBe(122);
+  });
+
+  it("needs the size, load index and speed symbol before it can read the current tire", () => {
+    expect(readOriginal(readFinderQuery({ size: "285-50R20" })).ok).toBe(false);
+  });
+});
