@@ -1,8 +1,61 @@
 import type { Metadata } from "next";
-import { ComingSoon } from "@/components/ui/coming-soon";
+import { connection } from "next/server";
+import { getDb } from "@/db/client";
+import { PlusForm } from "@/components/plus/plus-form";
+import { PlusGroups } from "@/components/plus/plus-groups";
+import { PageIntro } from "@/components/ui/page-intro";
+import { SafetyCautions } from "@/components/ui/safety-cautions";
+import { readShopTolerance } from "@/lib/catalog/shop-tolerance";
+import { answerPlus, plusQuerySchema } from "@/lib/plus/plus-request";
 
-export const metadata: Metadata = { title: "Plus planner" };
+export const metadata: Metadata = {
+  title: "Plus planner",
+  description: "Sizes on a smaller or larger wheel that keep the overall diameter within tolerance, and which of them the shop stocks.",
+};
 
-export default function PlusPlannerPage() {
-  return <ComingSoon title="Plus planner" summary="See which sizes on a smaller or larger wheel keep your overall diameter within tolerance." />;
+const wheelCautions = [
+  "A different wheel must suit the vehicle: bolt pattern, centre bore, offset and the wheel's own load rating.",
+  "Check clearance to brakes, suspension and bodywork at full steering lock and full compression.",
+  "The theoretical rim width is a guide; the tire maker's approved rim widths decide, and so does a qualified fitter.",
+];
+
+type SearchParams = Promise<Record<string, string | string[] | undefined>>;
+
+export default async function PlusPlannerPage({ searchParams }: { searchParams: SearchParams }) {
+  await connection();
+  const params = Object.fromEntries(Object.entries(await searchParams).map(([key, value]) => [key, Array.isArray(value) ? value[0] : value]));
+  const query = plusQuerySchema.safeParse(params);
+  const db = await getDb();
+  const defaultTolerancePct = await readShopTolerance(db);
+  const answer = query.success ? await answerPlus(db, query.data) : null;
+  const values = query.success ? query.data : { size: typeof params.size === "string" ? params.size : undefined };
+  return (
+    <section className="flex flex-col gap-6">
+      <PageIntro eyebrow="Plus planner" title="Bigger (or smaller) wheels, same overall size">
+        <p>Every size on a wheel one inch smaller to three inches larger whose overall diameter stays within tolerance of the current one.</p>
+      </PageIntro>
+      <PlusForm values={values} defaultTolerancePct={defaultTolerancePct} />
+      {answer && !answer.ok ? (
+        <p role="alert" className="rounded border-l-4 border-danger bg-sheet p-4">
+          {answer.message}
+        </p>
+      ) : null}
+      {!query.success && params.size ? (
+        <p role="alert" className="rounded border-l-4 border-danger bg-sheet p-4">
+          {query.error.issues[0]?.message ?? "Check the values above."}
+        </p>
+      ) : null}
+      {answer?.ok ? (
+        <>
+          <p className="text-ink-soft">
+            {answer.plan.candidates.length} sizes within ±{answer.plan.tolerancePct} % of {answer.plan.original.designation} (
+            {Math.round(answer.plan.original.overallDiameterMm)} mm). A lower sidewall rides firmer and protects the wheel less. Not every size is
+            made: &ldquo;In the catalog&rdquo; says which the shop can supply.
+          </p>
+          <PlusGroups plan={answer.plan} speedSymbol={query.success ? query.data.speedSymbol : undefined} />
+        </>
+      ) : null}
+      <SafetyCautions extra={wheelCautions} />
+    </section>
+  );
 }

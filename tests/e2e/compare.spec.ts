@@ -1,5 +1,7 @@
-import { expect, test } from "@playwright/test";
+import { expect, type Page, test } from "@playwright/test";
 import { expectNoAxeViolations } from "./helpers/axe";
+
+const sizeBox = (page: Page, name: string) => page.getByRole("textbox", { name, exact: true });
 
 test.describe("Side-by-side", () => {
   test.use({ locale: "en-GB" });
@@ -7,7 +9,7 @@ test.describe("Side-by-side", () => {
   test("adds, reorders and removes sizes, and the address always holds the set", async ({ page }) => {
     await page.goto("/compare?sizes=265-70R17");
     await page.getByRole("button", { name: "Add a size" }).click();
-    await page.getByLabel("Size 2").fill("285/70R17");
+    await sizeBox(page, "Size 2").fill("285/70R17");
     await expect(page).toHaveURL(/sizes=265-70R17%2C285-70R17|sizes=265-70R17,285-70R17/);
     // 285/70R17 is 830.8 mm against 802.8 mm: +3.5 %, and the speedometer reads below the true speed.
     await expect(page.getByRole("row", { name: /Diameter change/ })).toContainText("+3.5 %");
@@ -15,15 +17,15 @@ test.describe("Side-by-side", () => {
     await expect(page.locator('svg[role="img"]').filter({ visible: true }).locator('[data-part="overall"]')).toHaveCount(2);
 
     await page.getByRole("button", { name: "Add a size" }).click();
-    await page.getByLabel("Size 3").fill("255/75R17");
+    await sizeBox(page, "Size 3").fill("255/75R17");
     await page.getByRole("button", { name: "Move size 3 up" }).click();
     await expect(page).toHaveURL(/265-70R17%2C255-75R17%2C285-70R17|265-70R17,255-75R17,285-70R17/);
     await page.getByRole("button", { name: "Remove size 1" }).click();
-    await expect(page.getByLabel("Reference size (the one the speedometer is set for)")).toHaveValue("255/75R17");
+    await expect(sizeBox(page, "Reference size (the one the speedometer is set for)")).toHaveValue("255/75R17");
 
     await page.reload();
-    await expect(page.getByLabel("Reference size (the one the speedometer is set for)")).toHaveValue("255/75R17");
-    await expect(page.getByLabel("Size 2")).toHaveValue("285/70R17");
+    await expect(sizeBox(page, "Reference size (the one the speedometer is set for)")).toHaveValue("255/75R17");
+    await expect(sizeBox(page, "Size 2")).toHaveValue("285/70R17");
   });
 
   test("reproduces the encyclopedia's speedometer example: 185/70R14 → 195/50R15 reads 6.7 % high", async ({ page }) => {
