@@ -1,0 +1,64 @@
+import { NextRequest } from "next/server";
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+import { GET } from "@/app/api/v1/plus/route";
+import { getDatabaseHandle, getDb } from "@/db/client";
+import { stockItem } from "@/db/schema";
+import { speedSymbolRank } from "@/lib/tire";
+
+// Outside a Next.js request `connection()` throws; here every call is a request of its own.
+vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typeof import("next/server")>()), connection: async () => undefined }));
+
+async function plus(query: string) {
+  const response = await GET(new NextRequest(`http://localhost/api/v1/plus?${query}`));
+  return { status: response.status, body: await response.json() };
+}
+
+beforeAll(async () => {
+  vi.stubEnv("DATABASE_URL", "");
+  vi.stubEnv("PGLITE_DATA_DIR", "memory://");
+  vi.stubEnv("DEMO_SEED", "on");
+  await getDb();
+});
+afterAll(async () => {
+  await (await getDatabaseHandle()).close();
+  vi.unstubAllEnvs();
+});
+
+describe("GET /api/v1/plus", () => {
+  it("answers the published contract, the original listed with plus 0", async () => {
+    const { status, body } = await plus("size=205-55R16&loadIndex=91&speedSymbol=V");
+    expect(status).toBe(200);
+    expect(body.original.designation).toBe("205/55R16");
+    // 16 × 25.4 + 2 × 205 × 0.55 = 631.9 mm (nominal geometry).
+    expect(body.original.overallDiameterMm).toBeCloseTo(631.9, 9);
+    expect(body.tolerancePct).toBe(3);
+    expect(Object.keys(body.candidates[0]).sort()).toEqual(
+      ["aspectRatio", "catalogMatches", "designation", "diameterDiffPct", "minLoadIndex", "overallDiameterMm", "plus", "rimDiameterIn", "sectionWidthMm", "theoreticalRimWidthIn"].sort(),
+    );
+    expect(body.candidates.find((c: { designation: string }) => c.designation === "205/55R16")).toMatchObject({ plus: 0, diameterDiffPct: 0, minLoadIndex: 91 });
+  });
+
+  it("counts catalog tires of exactly each size, of the original's service type, load and speed at least as given", async () => {
+    const { body } = await plus("size=205-55R16&loadIndex=91&speedSymbol=V&tolerancePct=2");
+    const rows = await (await getDb())
+      .select({ designation: stockItem.designation, serviceType: stockItem.serviceType, loadIndex: stockItem.loadIndex, speedRank: stockItem.speedRank, retired: stockItem.retired })
+      .from(stockItem);
+    const minRank = speedSymbolRank("V");
+    for (const candidate of body.candidates as { designation: string; catalogMatches: number }[]) {
+      const expected = rows.filter(
+        (row) => row.designation === candidate.designation && row.serviceType === "passenger" && row.loadIndex >= 91 && row.speedRank >= minRank && !row.retired,
+      ).length;
+      expect(candidate.catalogMatches, candidate.designation).toBe(expected);
+    }
+    expect(body.candidates.some((c: { catalogMatches: number }) => c.catalogMatches > 0)).toBe(true);
+  });
+
+  it("gives null minimums without a load index, and refuses bad input with the published codes", async () => {
+    expect((await plus("size=205-55R16")).body.candidates[0].minLoadIndex).toBeNull();
+    expect((await plus("")).body.error.code).toBe("missing_parameter");
+    expect((await plus("size=banana")).status).toBe(422);
+    expect((await plus("size=205-55R16&loadIndex=300")).body.error.code).toBe("unknown_load_index");
+    expect((await plus("size=205-55R16&speedSymbol=X")).body.error.code).toBe("unknown_speed_symbol");
+    expect((await plus("size=205-55R16&tolerancePct=9")).body.error.code).toBe("invalid_parameter");
+  });
+});
