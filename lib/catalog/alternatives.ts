@@ -1,12 +1,13 @@
-import { and, asc, count, desc, gte, lt, lte, sql, type SQL } from "drizzle-orm";
+import { and, asc, count, desc, gte, lt, lte, sql } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { stockItem } from "@/db/schema";
 import { encodeAlternativesCursor, type AlternativesCursor, type AlternativesSort } from "./cursor";
-import { findNearMisses } from "./near-misses";
+import { NEAR_MISS_LIMIT, nearMissQuery } from "./near-misses";
 import { nearestRows, type Walk } from "./nearest-rows";
 import type { Original } from "./original";
 import { failedRules, qualifyingReasons } from "./reasons";
-import { ruleSql, skuPlainOrder, sortKeySql, type CatalogFilters, type RuleSql } from "./rule-sql";
+import { finderShape, finderValues, placeholder, ruleSql, skuPlainOrder, sortKeySql, type CatalogFilters, type RuleSql } from "./rule-sql";
+import { cachedStatement } from "./statement-cache";
 import { toTire, type Tire } from "./tire";
 
 export interface AlternativesOptions extends CatalogFilters {
@@ -38,24 +39,49 @@ export interface Alternatives {
 // Float rounding in the percentage is far below a micrometre; the index bound only needs to be a little wider.
 const BOUND_SLACK_MM = 1e-6;
 
+const pagePlaceholder = (name: "limit" | "cursorKey" | "cursorPriceCents" | "cursorSku" | "upFromMm" | "downToMm") => sql.placeholder(name);
+
 /**
- * The walks that give one page in order. Sorted by diameter, each side of the original is walked
- * outwards (nearest first, then price, then SKU), starting past the cursor; other sorts read every
- * qualifying tire and keep the first.
+ * One page in order. Sorted by diameter, each side of the original is walked outwards (nearest
+ * first, then price, then SKU), starting past the cursor; other sorts read every qualifying tire
+ * and keep the first.
  */
-function pageWalks(rules: RuleSql, qualifying: SQL | undefined, sort: AlternativesSort, sortKey: SQL<number>, cursor: AlternativesCursor | null): [Walk, ...Walk[]] {
+function pageQuery(db: Database, rules: RuleSql, sort: AlternativesSort, afterCursor: boolean) {
+  const qualifying = and(rules.eligible, rules.diameterFits, rules.loadIndexHolds, rules.speedHolds, rules.loadRangeHolds);
+  const sortKey = sortKeySql(sort, rules.diffPct);
   const tieOrder = [asc(stockItem.priceCents), skuPlainOrder];
-  const after = cursor
-    ? sql`(${sortKey}, ${stockItem.priceCents}, ${skuPlainOrder}) > (${cursor.key}::float8, ${cursor.priceCents}::integer, ${cursor.sku}::text collate "C")`
+  const after = afterCursor
+    ? sql`(${sortKey}, ${stockItem.priceCents}, ${skuPlainOrder}) > (${pagePlaceholder("cursorKey")}::float8, ${pagePlaceholder("cursorPriceCents")}::integer, ${pagePlaceholder("cursorSku")}::text collate "C")`
     : undefined;
-  if (sort !== "diameter") return [{ where: and(qualifying, after), orderBy: [sortKey, ...tieOrder] }];
   const od = stockItem.overallDiameterMm;
-  const reference = rules.reference;
-  const reached = ((cursor?.key ?? 0) / 100) * reference - BOUND_SLACK_MM;
-  return [
-    { where: and(qualifying, after, gte(od, Math.max(reference, reference + reached))), orderBy: [asc(od), ...tieOrder] },
-    { where: and(qualifying, after, lt(od, reference), lte(od, reference - reached)), orderBy: [desc(od), ...tieOrder] },
-  ];
+  const walks: [Walk, ...Walk[]] =
+    sort === "diameter"
+      ? [
+          { where: and(qualifying, after, gte(od, placeholder("reference")), gte(od, pagePlaceholder("upFromMm"))), orderBy: [asc(od), ...tieOrder] },
+          { where: and(qualifying, after, lt(od, placeholder("reference")), lte(od, pagePlaceholder("downToMm"))), orderBy: [desc(od), ...tieOrder] },
+        ]
+      : [{ where: and(qualifying, after), orderBy: [sortKey, ...tieOrder] }];
+  return nearestRows(db, walks, sortKey, rules.diffPct, pagePlaceholder("limit"));
+}
+
+function countQuery(db: Database, rules: RuleSql) {
+  return db
+    .select({ total: count() })
+    .from(stockItem)
+    .where(and(rules.eligible, rules.diameterFits, rules.loadIndexHolds, rules.speedHolds, rules.loadRangeHolds));
+}
+
+/** Where each side's walk starts: past the cursor's distance from the original's diameter. */
+function pageValues(options: AlternativesOptions, referenceMm: number) {
+  const reachedMm = ((options.cursor?.key ?? 0) / 100) * referenceMm - BOUND_SLACK_MM;
+  return {
+    limit: options.limit + 1,
+    cursorKey: options.cursor?.key,
+    cursorPriceCents: options.cursor?.priceCents,
+    cursorSku: options.cursor?.sku,
+    upFromMm: referenceMm + reachedMm,
+    downToMm: referenceMm - reachedMm,
+  };
 }
 
 /**
@@ -63,14 +89,18 @@ function pageWalks(rules: RuleSql, qualifying: SQL | undefined, sort: Alternativ
  * them, how many qualify in all, and the nearest tires that fail exactly one of rules 2–5.
  */
 export async function findAlternatives(db: Database, original: Original, options: AlternativesOptions): Promise<Alternatives> {
-  const rules = ruleSql(original, options.tolerancePct, options);
-  const qualifying = and(rules.eligible, rules.diameterFits, rules.loadIndexHolds, rules.speedHolds, rules.loadRangeHolds);
-  const sortKey = sortKeySql(options.sort, rules.diffPct);
-
-  const walks = pageWalks(rules, qualifying, options.sort, sortKey, options.cursor);
-  const rows = await nearestRows(db, walks, sortKey, rules.diffPct, options.limit + 1);
-  const [counted] = await db.select({ total: count() }).from(stockItem).where(qualifying);
-  const nearMisses = await findNearMisses(db, rules);
+  const shape = finderShape(original, options);
+  const values = finderValues(original, options.tolerancePct, options);
+  const shapeKey = JSON.stringify(shape);
+  const cursorKind = options.cursor ? "after" : "first";
+  const rows = await cachedStatement(db, `page ${options.sort} ${cursorKind} ${shapeKey}`, () =>
+    pageQuery(db, ruleSql(shape), options.sort, options.cursor !== null),
+  ).execute({ ...values, ...pageValues(options, values.reference) });
+  const [counted] = await cachedStatement(db, `count ${shapeKey}`, () => countQuery(db, ruleSql(shape))).execute(values);
+  const nearMisses = await cachedStatement(db, `near ${shapeKey}`, () => nearMissQuery(db, ruleSql(shape))).execute({
+    ...values,
+    nearMissLimit: NEAR_MISS_LIMIT,
+  });
 
   const page = rows.slice(0, options.limit);
   const last = page.at(-1);

@@ -2,7 +2,7 @@ import { and, asc, desc, gt, gte, lt, lte, sql, type SQL } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { stockItem } from "@/db/schema";
 import { nearestRows } from "./nearest-rows";
-import { skuPlainOrder, type RuleSql } from "./rule-sql";
+import { placeholder, skuPlainOrder, type RuleSql } from "./rule-sql";
 
 export const NEAR_MISS_LIMIT = 20;
 
@@ -20,9 +20,9 @@ function exactlyOneFails(conditions: readonly SQL[]): SQL {
  * diameter first, then price, then SKU. Within the tolerance they fail one of rules 3–5; beyond it
  * they meet all three. Each side of the original is walked outwards until enough are found.
  */
-export function findNearMisses(db: Database, rules: RuleSql) {
+export function nearMissQuery(db: Database, rules: RuleSql) {
   const od = stockItem.overallDiameterMm;
-  const { minMm, maxMm } = rules.band;
+  const [reference, minMm, maxMm] = [placeholder("reference"), placeholder("minMm"), placeholder("maxMm")];
   const others = [rules.loadIndexHolds, rules.speedHolds, rules.loadRangeHolds];
   const oneOfOthersFails = exactlyOneFails(others);
   const upwards = [asc(od), asc(stockItem.priceCents), skuPlainOrder];
@@ -30,13 +30,13 @@ export function findNearMisses(db: Database, rules: RuleSql) {
   return nearestRows(
     db,
     [
-      { where: and(rules.eligible, gte(od, rules.reference), lte(od, maxMm), oneOfOthersFails), orderBy: upwards },
-      { where: and(rules.eligible, lt(od, rules.reference), gte(od, minMm), oneOfOthersFails), orderBy: downwards },
+      { where: and(rules.eligible, gte(od, reference), lte(od, maxMm), oneOfOthersFails), orderBy: upwards },
+      { where: and(rules.eligible, lt(od, reference), gte(od, minMm), oneOfOthersFails), orderBy: downwards },
       { where: and(rules.eligible, gt(od, maxMm), ...others), orderBy: upwards },
       { where: and(rules.eligible, lt(od, minMm), ...others), orderBy: downwards },
     ],
     sql<number>`abs(${rules.diffPct})`,
     rules.diffPct,
-    NEAR_MISS_LIMIT,
+    sql.placeholder("nearMissLimit"),
   );
 }

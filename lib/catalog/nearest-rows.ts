@@ -1,4 +1,4 @@
-import { asc, eq, sql, type SQL } from "drizzle-orm";
+import { asc, eq, sql, type Placeholder, type SQL } from "drizzle-orm";
 import { unionAll } from "drizzle-orm/pg-core";
 import type { Database } from "@/db/client";
 import { brand, stockItem, tireLine } from "@/db/schema";
@@ -18,7 +18,7 @@ export interface Walk {
  * finder indexes reads about `limit` rows per walk however large the catalog is; only the rows kept
  * are joined to their line and brand.
  */
-export async function nearestRows(db: Database, walks: readonly [Walk, ...Walk[]], sortKey: SQL<number>, diffPct: SQL<number>, limit: number) {
+export function nearestRows(db: Database, walks: readonly [Walk, ...Walk[]], sortKey: SQL<number>, diffPct: SQL<number>, limit: Placeholder) {
   const walkQuery = (walk: Walk) =>
     db
       .select({

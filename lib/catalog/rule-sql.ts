@@ -18,70 +18,114 @@ export interface CatalogFilters {
   inStock?: boolean;
 }
 
-/** The rules of equal-or-better as SQL conditions over stock_item, for one original. */
+const LINE_FILTERS = ["season", "terrain", "threePeak", "brand"] as const;
+
+/**
+ * What the finder's statements look like for a search: which rules and filters apply, never their
+ * values. Statements are built once per shape, with placeholders, and reused (see statement-cache).
+ */
+export interface FinderShape {
+  /** False for a temporary spare: nothing replaces it. */
+  hasCandidates: boolean;
+  runFlatOnly: boolean;
+  dualIndex: boolean;
+  loadRange: boolean;
+  lineFilters: (typeof LINE_FILTERS)[number][];
+  minPrice: boolean;
+  maxPrice: boolean;
+  inStock: "any" | "yes" | "no";
+}
+
+export function finderShape(original: Original, filters: CatalogFilters): FinderShape {
+  return {
+    hasCandidates: original.serviceType !== "T",
+    runFlatOnly: original.runFlat,
+    dualIndex: original.loadIndexDual !== null,
+    loadRange: original.loadRangePly !== null,
+    lineFilters: LINE_FILTERS.filter((name) => filters[name] !== undefined),
+    minPrice: filters.minPriceCents !== undefined,
+    maxPrice: filters.maxPriceCents !== undefined,
+    inStock: filters.inStock === undefined ? "any" : filters.inStock ? "yes" : "no",
+  };
+}
+
+/** The values the placeholders of a shape's statements take for one search. */
+export function finderValues(original: Original, tolerancePct: number, filters: CatalogFilters) {
+  const band = toleranceBand(original.overallDiameterMm, tolerancePct);
+  return {
+    rim: original.rimDiameterIn,
+    construction: original.construction,
+    serviceType: original.serviceType,
+    reference: original.overallDiameterMm,
+    minMm: band.minMm,
+    maxMm: band.maxMm,
+    loadIndex: original.loadIndex,
+    loadIndexDual: original.loadIndexDual,
+    speedRank: original.speedRank,
+    loadRangePly: original.loadRangePly,
+    season: filters.season,
+    terrain: filters.terrain,
+    threePeak: filters.threePeak,
+    brand: filters.brand,
+    minPriceCents: filters.minPriceCents,
+    maxPriceCents: filters.maxPriceCents,
+  };
+}
+
+export type FinderValues = ReturnType<typeof finderValues>;
+
+export const placeholder = (name: keyof FinderValues) => sql.placeholder(name);
+const float = (name: keyof FinderValues) => sql`${placeholder(name)}::float8`;
+
+/** The rules of equal-or-better as SQL conditions over stock_item, for one shape of search. */
 export interface RuleSql {
-  /** The original's overall diameter, mm. */
-  reference: number;
-  /** Signed (candidate − original) ÷ original × 100, computed as the tire core computes it. */
+  /** Signed (candidate − original) ÷ original × 100, in the order of operations the tire core uses. */
   diffPct: SQL<number>;
   /** Rules 1, 6 and 7, retired items left out, and the filters: what every result and near miss meets. */
   eligible: SQL;
-  /** Rule 2 as the exact range of diameters it accepts (see toleranceBand), so that the finder index serves it. */
-  band: { minMm: number; maxMm: number };
+  /** Rule 2, as the exact range of diameters it accepts (toleranceBand), so that the finder indexes serve it. */
   diameterFits: SQL;
   loadIndexHolds: SQL;
   speedHolds: SQL;
   loadRangeHolds: SQL;
 }
 
-const float = (value: number) => sql`${value}::float8`;
-
 /** Filters on the line or brand, as a set of lines, so that the finder reads stock_item alone. */
-function lineFilter(filters: CatalogFilters): SQL | undefined {
-  const conditions = [
-    filters.season === undefined ? undefined : eq(tireLine.season, filters.season),
-    filters.terrain === undefined ? undefined : eq(tireLine.terrain, filters.terrain),
-    filters.threePeak === undefined ? undefined : eq(tireLine.threePeak, filters.threePeak),
-    filters.brand === undefined ? undefined : sql`lower(${brand.name}) = lower(${filters.brand})`,
-  ].filter((condition) => condition !== undefined);
-  if (conditions.length === 0) return undefined;
+function lineFilter(shape: FinderShape): SQL | undefined {
+  if (shape.lineFilters.length === 0) return undefined;
+  const byFilter = {
+    season: eq(tireLine.season, placeholder("season")),
+    terrain: eq(tireLine.terrain, placeholder("terrain")),
+    threePeak: eq(tireLine.threePeak, placeholder("threePeak")),
+    brand: sql`lower(${brand.name}) = lower(${placeholder("brand")})`,
+  };
+  const conditions = shape.lineFilters.map((name) => byFilter[name]);
   return sql`${stockItem.lineId} in (select ${tireLine.id} from ${tireLine} inner join ${brand} on ${ofBrand} where ${and(...conditions)})`;
 }
 
-function filterConditions(filters: CatalogFilters): (SQL | undefined)[] {
-  return [
-    lineFilter(filters),
-    filters.minPriceCents === undefined ? undefined : gte(stockItem.priceCents, filters.minPriceCents),
-    filters.maxPriceCents === undefined ? undefined : lte(stockItem.priceCents, filters.maxPriceCents),
-    filters.inStock === undefined ? undefined : filters.inStock ? gt(stockItem.quantityOnHand, 0) : eq(stockItem.quantityOnHand, 0),
-  ];
-}
-
-export function ruleSql(original: Original, tolerancePct: number, filters: CatalogFilters): RuleSql {
-  const reference = original.overallDiameterMm;
-  const band = toleranceBand(reference, tolerancePct);
-  const dual = original.loadIndexDual;
-  const ply = original.loadRangePly;
+export function ruleSql(shape: FinderShape): RuleSql {
+  const stockFilter = { any: undefined, yes: gt(stockItem.quantityOnHand, 0), no: eq(stockItem.quantityOnHand, 0) }[shape.inStock];
   return {
-    reference,
-    diffPct: sql<number>`((${stockItem.overallDiameterMm} - ${float(reference)}) / ${float(reference)} * 100)`,
+    diffPct: sql<number>`((${stockItem.overallDiameterMm} - ${float("reference")}) / ${float("reference")} * 100)`,
     eligible: and(
       not(stockItem.retired),
-      eq(stockItem.rimDiameterIn, original.rimDiameterIn),
-      eq(stockItem.construction, original.construction),
+      eq(stockItem.rimDiameterIn, placeholder("rim")),
+      eq(stockItem.construction, placeholder("construction")),
       // A temporary spare is never a candidate, not even for another temporary spare.
-      original.serviceType === "T" ? sql`false` : eq(stockItem.serviceType, original.serviceType),
-      original.runFlat ? eq(stockItem.runFlat, true) : undefined,
-      ...filterConditions(filters),
+      shape.hasCandidates ? eq(stockItem.serviceType, placeholder("serviceType")) : sql`false`,
+      shape.runFlatOnly ? eq(stockItem.runFlat, true) : undefined,
+      lineFilter(shape),
+      shape.minPrice ? gte(stockItem.priceCents, placeholder("minPriceCents")) : undefined,
+      shape.maxPrice ? lte(stockItem.priceCents, placeholder("maxPriceCents")) : undefined,
+      stockFilter,
     ) as SQL,
-    band,
-    diameterFits: between(stockItem.overallDiameterMm, band.minMm, band.maxMm),
+    diameterFits: between(stockItem.overallDiameterMm, placeholder("minMm"), placeholder("maxMm")),
     loadIndexHolds: and(
-      gte(stockItem.loadIndex, original.loadIndex),
-      dual === null ? undefined : or(isNull(stockItem.loadIndexDual), gte(stockItem.loadIndexDual, dual)),
+      gte(stockItem.loadIndex, placeholder("loadIndex")),
+      shape.dualIndex ? or(isNull(stockItem.loadIndexDual), gte(stockItem.loadIndexDual, placeholder("loadIndexDual"))) : undefined,
     ) as SQL,
-    speedHolds: gte(stockItem.speedRank, original.speedRank),
-    loadRangeHolds: ply === null ? sql`true` : sql`coalesce(${stockItem.loadRangePly} >= ${ply}, false)`,
+    speedHolds: gte(stockItem.speedRank, placeholder("speedRank")),
+    loadRangeHolds: shape.loadRange ? sql`coalesce(${stockItem.loadRangePly} >= ${placeholder("loadRangePly")}, false)` : sql`true`,
   };
 }
 
