@@ -10,6 +10,7 @@ import pg from "pg";
 import { readServerEnv } from "@/lib/env/server-env";
 import * as schema from "./schema";
 import { seedDemoDataIfEmpty } from "./seed";
+import { seedDemoAccounts } from "./seed/accounts";
 
 export type Database = PgDatabase<PgQueryResultHKT, typeof schema>;
 export type DatabaseKind = "pglite" | "postgres";
@@ -59,7 +60,10 @@ async function openFromEnvironment(): Promise<DatabaseHandle> {
   const handle = await openDatabase({ url: env.DATABASE_URL, dataDir: env.PGLITE_DATA_DIR });
   try {
     await migrateDatabase(handle);
-    if (env.DEMO_SEED === "on") await seedDemoDataIfEmpty(handle.db);
+    if (env.DEMO_SEED === "on") {
+      await seedDemoDataIfEmpty(handle.db);
+      await seedDemoAccounts(handle.db);
+    }
     return handle;
   } catch (error) {
     await handle.close().catch(() => undefined);

@@ -1,5 +1,6 @@
 import { migrateDatabase, openDatabase } from "./client";
 import { seedDemoData } from "./seed";
+import { seedDemoAccounts } from "./seed/accounts";
 import { readServerEnv } from "@/lib/env/server-env";
 
 // Re-seeds the demo data on demand. With PGlite, stop the dev server first: one process per data folder.
@@ -8,6 +9,7 @@ const handle = await openDatabase({ url: env.DATABASE_URL, dataDir: env.PGLITE_D
 try {
   await migrateDatabase(handle);
   await seedDemoData(handle.db);
+  await seedDemoAccounts(handle.db);
   console.log(`Demo data seeded into ${handle.kind === "postgres" ? "the PostgreSQL server" : env.PGLITE_DATA_DIR}.`);
 } finally {
   await handle.close();

@@ -1,2 +1,3 @@
 export * from "./shop";
 export * from "./catalog";
+export * from "./auth";

@@ -7,12 +7,14 @@ export const apiErrorStatus = {
   unauthenticated: 401,
   forbidden: 403,
   not_found: 404,
+  already_exists: 409,
   gone: 410,
   too_large: 413,
   too_long: 414,
   unreadable: 422,
   unknown_load_index: 422,
   unknown_speed_symbol: 422,
+  unknown_line: 422,
   rate_limited: 429,
 } as const;
 

@@ -2,9 +2,12 @@ import { connection, NextResponse, type NextRequest } from "next/server";
 import { getDb } from "@/db/client";
 import { apiError } from "@/lib/api/errors";
 import { parseQuery } from "@/lib/api/query";
+import { withRoute } from "@/lib/auth/guard";
 import { catalogQuerySchema, DEFAULT_PAGE_SIZE } from "@/lib/catalog/api-queries";
 import { listCatalog } from "@/lib/catalog/catalog-page";
 import { decodeCatalogCursor } from "@/lib/catalog/cursor";
+import { newStockItemSchema } from "@/lib/catalog/stock-edit";
+import { createStockItem } from "@/lib/catalog/stock-writes";
 
 export async function GET(request: NextRequest) {
   await connection();
@@ -17,3 +20,9 @@ export async function GET(request: NextRequest) {
   const page = await listCatalog(await getDb(), { afterSku, limit: query.value.limit ?? DEFAULT_PAGE_SIZE });
   return NextResponse.json(page);
 }
+
+/** Staff add a stock item to a line the catalog already has → 201 Tire. */
+export const POST = withRoute({ role: "staff", body: newStockItemSchema }, async ({ db, body }) => {
+  const result = await createStockItem(db, body);
+  return result.ok ? NextResponse.json(result.tire, { status: 201 }) : apiError(result.code, result.message);
+});

@@ -1,0 +1,21 @@
+import { z } from "zod";
+import { stockItemInputSchema } from "./stock-row";
+
+const name = z.string().trim().min(1).max(100);
+
+/** POST /api/v1/catalog: a new stock item in a line the catalog already has. */
+export const newStockItemSchema = stockItemInputSchema.extend({ brand: name, line: name }).strict();
+
+/** PATCH /api/v1/catalog/{sku}: any of the fields but the SKU; a line is looked up in the item's brand unless a brand is given. */
+export const stockItemChangesSchema = newStockItemSchema
+  .omit({ sku: true })
+  .extend({ extraLoad: z.boolean() })
+  .partial()
+  .strict()
+  .refine((changes) => Object.keys(changes).length > 0, { message: "name at least one field to change" });
+
+/** The `{sku}` in a catalog item's address. */
+export const skuParamsSchema = z.object({ sku: z.string().regex(/^[!-~]{1,64}$/) });
+
+export type NewStockItemBody = z.infer<typeof newStockItemSchema>;
+export type StockItemChanges = z.infer<typeof stockItemChangesSchema>;

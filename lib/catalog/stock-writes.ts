@@ -1,0 +1,90 @@
+import { and, eq, sql } from "drizzle-orm";
+import type { Database } from "@/db/client";
+import { brand, stockItem, tireLine } from "@/db/schema";
+import type { ApiErrorCode } from "@/lib/api/errors";
+import { ofBrand, ofLine } from "./catalog-select";
+import type { NewStockItemBody, StockItemChanges } from "./stock-edit";
+import { buildStockRow, type StockItemInput, type StockLine } from "./stock-row";
+import { tireColumns, toTire, type Tire } from "./tire";
+
+export type StockWriteResult = { ok: true; tire: Tire } | { ok: false; code: ApiErrorCode; message: string };
+
+const refuse = (code: ApiErrorCode, message: string): StockWriteResult => ({ ok: false, code, message });
+const unknownLine = (brandName: string, lineName: string) =>
+  refuse("unknown_line", `The catalog has no line "${lineName}" from the brand "${brandName}"; add the line first.`);
+
+/** A brand's line by name, in any letter case. */
+async function findLine(db: Database, brandName: string, lineName: string): Promise<StockLine | null> {
+  const [line] = await db
+    .select({ id: tireLine.id, runFlat: tireLine.runFlat })
+    .from(tireLine)
+    .innerJoin(brand, ofBrand)
+    .where(and(sql`lower(${brand.name}) = lower(${brandName})`, sql`lower(${tireLine.name}) = lower(${lineName})`))
+    .limit(1);
+  return line ?? null;
+}
+
+/** A current (not retired) item as a Tire, with what an edit starts from. */
+async function findCurrent(db: Database, sku: string) {
+  const [row] = await db
+    .select({ ...tireColumns, lineId: stockItem.lineId, lineRunFlat: tireLine.runFlat })
+    .from(stockItem)
+    .innerJoin(tireLine, ofLine)
+    .innerJoin(brand, ofBrand)
+    .where(and(eq(stockItem.sku, sku), eq(stockItem.retired, false)));
+  return row ?? null;
+}
+
+async function currentTire(db: Database, sku: string): Promise<StockWriteResult> {
+  const row = await findCurrent(db, sku);
+  return row ? { ok: true, tire: toTire(row) } : refuse("not_found", `No current catalog item has the SKU "${sku}".`);
+}
+
+/** Adds an item to a line the catalog has, through the same write path as the demo seed. */
+export async function createStockItem(db: Database, body: NewStockItemBody): Promise<StockWriteResult> {
+  const { brand: brandName, line: lineName, ...input } = body;
+  const line = await findLine(db, brandName, lineName);
+  if (!line) return unknownLine(brandName, lineName);
+  const built = buildStockRow(input, line);
+  if (!built.ok) return refuse("invalid_parameter", `The field "${built.problem.field}" is invalid: ${built.problem.reason}.`);
+  const inserted = await db.insert(stockItem).values(built.row).onConflictDoNothing({ target: stockItem.sku }).returning({ id: stockItem.id });
+  if (inserted.length === 0) return refuse("already_exists", `The SKU "${built.row.sku}" is taken (retired items keep theirs).`);
+  return currentTire(db, built.row.sku);
+}
+
+/** Changes a current item; the row is rebuilt and checked as a whole, as if it were new. */
+export async function updateStockItem(db: Database, sku: string, changes: StockItemChanges): Promise<StockWriteResult> {
+  return db.transaction(async (tx) => {
+    const current = await findCurrent(tx, sku);
+    if (!current) return refuse("not_found", `No current catalog item has the SKU "${sku}".`);
+    const brandName = changes.brand ?? current.brand;
+    const lineName = changes.line ?? current.line;
+    const line = changes.brand || changes.line ? await findLine(tx, brandName, lineName) : { id: current.lineId, runFlat: current.lineRunFlat };
+    if (!line) return unknownLine(brandName, lineName);
+    const input: StockItemInput = {
+      sku,
+      designation: changes.designation ?? current.designation,
+      loadIndex: changes.loadIndex ?? current.loadIndex,
+      loadIndexDual: changes.loadIndexDual === undefined ? current.loadIndexDual : changes.loadIndexDual,
+      speedSymbol: changes.speedSymbol ?? current.speedSymbol,
+      loadRange: changes.loadRange === undefined ? current.loadRange : changes.loadRange,
+      extraLoad: changes.extraLoad ?? current.extraLoad,
+      priceCents: changes.priceCents ?? current.priceCents,
+      quantity: changes.quantity ?? current.quantityOnHand,
+    };
+    const built = buildStockRow(input, line);
+    if (!built.ok) return refuse("invalid_parameter", `The field "${built.problem.field}" is invalid: ${built.problem.reason}.`);
+    await tx.update(stockItem).set({ ...built.row, updatedAt: new Date() }).where(eq(stockItem.sku, sku));
+    return currentTire(tx, sku);
+  });
+}
+
+/** Retires an item: it leaves the catalog and the finder but keeps its row (and its SKU). */
+export async function retireStockItem(db: Database, sku: string): Promise<boolean> {
+  const retired = await db
+    .update(stockItem)
+    .set({ retired: true, updatedAt: new Date() })
+    .where(and(eq(stockItem.sku, sku), eq(stockItem.retired, false)))
+    .returning({ id: stockItem.id });
+  return retired.length > 0;
+}

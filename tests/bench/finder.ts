@@ -1,0 +1,122 @@
+/**
+ * Replacement finder speed. Seeds 1,000 and then 50,000 stock items into a fresh embedded database and
+ * times 500 alternatives searches (one page plus its total and near misses) for random originals.
+ * Targets: p95 ≤ 10 ms at 50,000 items, and p95(50,000) ÷ p95(1,000) ≤ 1.5.
+ *
+ *   npm run bench:finder
+ *   npm run bench:finder -- --server http://localhost:3000   # also time the HTTP route of a running server
+ */
+import { sql } from "drizzle-orm";
+import { migrateDatabase, openDatabase, type Database } from "../../db/client";
+import { clearCatalog, seedCatalog } from "../../db/seed/catalog";
+import { SIZE_OFFERS, type SizeOffer } from "../../db/seed/catalog-sizes";
+import { seededRandom, type Random } from "../../db/seed/random";
+import { findAlternatives } from "../../lib/catalog/alternatives";
+import { readOriginal, type OriginalInput } from "../../lib/catalog/original";
+import { readShopTolerance } from "../../lib/catalog/shop-tolerance";
+
+const SEARCHES = 500;
+const WARM_UP = 50;
+const HTTP_REQUESTS = 200;
+const CATALOG_SIZES = [1_000, 50_000];
+
+function percentile(sorted: readonly number[], p: number): number {
+  return sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))] ?? Number.NaN;
+}
+
+/** An original as a customer would bring it: a stocked size, a load index near the usual, a common speed rating. */
+function randomOriginal(random: Random): OriginalInput {
+  const weighted = SIZE_OFFERS.flatMap((offer) => Array<SizeOffer>(offer.popularity).fill(offer));
+  const offer = random.pick(weighted);
+  const range = offer.loadRanges ? random.pick(offer.loadRanges) : undefined;
+  const baseIndex = range?.[1] ?? offer.standardLoad ?? offer.service?.[0] ?? 100;
+  const heavy = offer.group === "lt" || offer.group === "flotation" || offer.group === "trailer" || offer.group === "van";
+  return {
+    size: offer.designation,
+    loadIndex: baseIndex - random.int(0, 3),
+    speedSymbol: random.pick(heavy ? ["Q", "R", "S", "T"] : ["S", "T", "H", "V", "W"]),
+    loadRange: range?.[0],
+  };
+}
+
+async function timeSearches(db: Database, random: Random, count: number): Promise<number[]> {
+  const times: number[] = [];
+  for (let i = 0; i < count; i++) {
+    const read = readOriginal(randomOriginal(random));
+    if (!read.ok) throw new Error(read.message);
+    const start = performance.now();
+    const tolerancePct = await readShopTolerance(db);
+    await findAlternatives(db, read.original, { tolerancePct, sort: "diameter", limit: 50, cursor: null });
+    times.push(performance.now() - start);
+  }
+  return times.sort((a, b) => a - b);
+}
+
+async function benchCatalogs(): Promise<void> {
+  const handle = await openDatabase({ dataDir: "memory://" });
+  await migrateDatabase(handle);
+  const p95s: number[] = [];
+  for (const itemCount of CATALOG_SIZES) {
+    const seedStart = performance.now();
+    await handle.db.transaction(async (tx) => {
+      await clearCatalog(tx);
+      await seedCatalog(tx, { itemCount, seed: 7 });
+    });
+    await handle.db.execute(sql`vacuum analyze`);
+    const seedMs = performance.now() - seedStart;
+    const random = seededRandom(11);
+    await timeSearches(handle.db, random, WARM_UP);
+    // CPU time tells the finder's own cost apart from waiting for a busy machine.
+    const cpuStart = process.cpuUsage();
+    const times = await timeSearches(handle.db, random, SEARCHES);
+    const cpu = process.cpuUsage(cpuStart);
+    const cpuMsPerSearch = (cpu.user + cpu.system) / 1000 / SEARCHES;
+    const p50 = percentile(times, 50);
+    const p95 = percentile(times, 95);
+    p95s.push(p95);
+    console.log(
+      `${itemCount.toLocaleString("en-US").padStart(6)} items (seeded in ${(seedMs / 1000).toFixed(1)} s): ` +
+        `p50 ${p50.toFixed(2)} ms, p95 ${p95.toFixed(2)} ms, p95/p50 ${(p95 / p50).toFixed(2)}, ` +
+        `CPU ${cpuMsPerSearch.toFixed(2)} ms per search (${SEARCHES} searches)`,
+    );
+  }
+  await handle.close();
+  const [small, large] = p95s as [number, number];
+  console.log(`p95 at 50,000 ÷ p95 at 1,000 = ${(large / small).toFixed(2)} (target ≤ 1.5); p95 at 50,000 target ≤ 10 ms`);
+}
+
+async function timeRequests(urls: readonly string[]): Promise<number[]> {
+  const times: number[] = [];
+  for (const url of urls) {
+    const start = performance.now();
+    const response = await fetch(url);
+    await response.arrayBuffer();
+    if (!response.ok) throw new Error(`${url} answered ${response.status}`);
+    times.push(performance.now() - start);
+  }
+  return times.sort((a, b) => a - b);
+}
+
+async function benchServer(base: string): Promise<void> {
+  const random = seededRandom(13);
+  const alternatives = Array.from({ length: HTTP_REQUESTS }, () => {
+    const original = randomOriginal(random);
+    const query = new URLSearchParams({ size: original.size, loadIndex: String(original.loadIndex), speedSymbol: original.speedSymbol ?? "T" });
+    if (original.loadRange) query.set("loadRange", original.loadRange);
+    return new URL(`/api/v1/alternatives?${query}`, base).toString();
+  });
+  const health = Array.from({ length: HTTP_REQUESTS }, () => new URL("/api/health", base).toString());
+  await timeRequests([...alternatives.slice(0, 20), ...health.slice(0, 20)]);
+  const alternativesTimes = await timeRequests(alternatives);
+  const healthTimes = await timeRequests(health);
+  console.log(`${base}: GET /api/v1/alternatives p50 ${percentile(alternativesTimes, 50).toFixed(2)} ms, p95 ${percentile(alternativesTimes, 95).toFixed(2)} ms`);
+  console.log(`${base}: GET /api/health          p50 ${percentile(healthTimes, 50).toFixed(2)} ms, p95 ${percentile(healthTimes, 95).toFixed(2)} ms (${HTTP_REQUESTS} requests each)`);
+}
+
+const serverFlag = process.argv.indexOf("--server");
+const server = serverFlag >= 0 ? process.argv[serverFlag + 1] : undefined;
+if (serverFlag >= 0 && !server) throw new Error("--server needs a URL, e.g. --server http://localhost:3000");
+
+await benchCatalogs();
+if (server) await benchServer(server);
+else console.log("HTTP route not timed: pass --server http://localhost:PORT to time a running production server.");

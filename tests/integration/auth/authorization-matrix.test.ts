@@ -1,0 +1,79 @@
+import { readdirSync } from "node:fs";
+import path from "node:path";
+import type { NextRequest } from "next/server";
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+import { getDatabaseHandle, getDb } from "@/db/client";
+import { seedDemoAccounts } from "@/db/seed/accounts";
+import { callRoute, signIn } from "../helpers/auth-session";
+
+vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typeof import("next/server")>()), connection: async () => undefined }));
+
+type Who = "anonymous" | "customer" | "staff" | "admin";
+type Handler = (request: NextRequest, context: { params: Promise<Record<string, string>> }) => Promise<Response>;
+
+/** Route files anyone may call; the auth library's own endpoints check their own requests. */
+const PUBLIC_ROUTE_FILES = [
+  "auth/[...all]/route.ts",
+  "health/route.ts",
+  "v1/alternatives/route.ts",
+  "v1/catalog/route.ts#GET",
+  "v1/compare/route.ts",
+  "v1/decode/route.ts",
+  "v1/plus/route.ts",
+];
+
+/**
+ * Every protected handler, called so that nothing changes once authorization passes (an invalid
+ * body, an unknown SKU): the status an allowed caller gets shows the request went past the guard.
+ */
+const MATRIX: { file: string; method: string; path: string; body?: unknown; params?: Record<string, string>; expected: Record<Who, number> }[] = [
+  { file: "v1/catalog/route.ts", method: "POST", path: "/api/v1/catalog", body: {}, expected: { anonymous: 401, customer: 403, staff: 400, admin: 400 } },
+  {
+    file: "v1/catalog/[sku]/route.ts", method: "PATCH", path: "/api/v1/catalog/NO-SUCH-SKU", params: { sku: "NO-SUCH-SKU" }, body: { priceCents: 100 },
+    expected: { anonymous: 401, customer: 403, staff: 404, admin: 404 },
+  },
+  {
+    file: "v1/catalog/[sku]/route.ts", method: "DELETE", path: "/api/v1/catalog/NO-SUCH-SKU", params: { sku: "NO-SUCH-SKU" },
+    expected: { anonymous: 401, customer: 403, staff: 404, admin: 404 },
+  },
+];
+
+const apiFolder = path.join(process.cwd(), "app", "api");
+const routeFiles = (readdirSync(apiFolder, { recursive: true }) as string[])
+  .map((file) => file.split(path.sep).join("/"))
+  .filter((file) => /(^|\/)route\.tsx?$/.test(file));
+
+const cookies: Partial<Record<Who, string>> = {};
+
+beforeAll(async () => {
+  vi.stubEnv("DATABASE_URL", "");
+  vi.stubEnv("PGLITE_DATA_DIR", "memory://");
+  vi.stubEnv("DEMO_SEED", "off");
+  await seedDemoAccounts(await getDb());
+  for (const who of ["customer", "staff", "admin"] as const) cookies[who] = await signIn(`${who}@sidewise.test`, "sidewise-demo");
+});
+afterAll(async () => {
+  await (await getDatabaseHandle()).close();
+  vi.unstubAllEnvs();
+});
+
+describe("authorization matrix", () => {
+  it("lists every route file under app/api, as public or in the matrix", () => {
+    const listed = new Set([...PUBLIC_ROUTE_FILES.map((entry) => entry.split("#")[0]), ...MATRIX.map((row) => row.file)]);
+    expect(routeFiles.filter((file) => !listed.has(file))).toEqual([]);
+    expect([...listed].filter((file) => !routeFiles.includes(file as string))).toEqual([]);
+  });
+
+  it.each(MATRIX.flatMap((row) => (["anonymous", "customer", "staff", "admin"] as const).map((who) => ({ ...row, who }))))(
+    "$method $path as $who → $expected.$who",
+    async ({ file, method, path: url, body, params, who, expected }) => {
+      const routeModule = (await import(/* @vite-ignore */ path.join(apiFolder, file))) as Record<string, Handler | undefined>;
+      const handler = routeModule[method];
+      if (!handler) throw new Error(`${file} exports no ${method}`);
+      const response = await callRoute(handler, method, url, { cookie: cookies[who], body, params });
+      expect(response.status).toBe(expected[who]);
+      if (response.status === 401) expect((await response.json()).error.code).toBe("unauthenticated");
+      if (response.status === 403) expect((await response.json()).error.code).toBe("forbidden");
+    },
+  );
+});

@@ -1,0 +1,46 @@
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+import { GET as authGet } from "@/app/api/auth/[...all]/route";
+import { getDatabaseHandle, getDb } from "@/db/client";
+import { account, user } from "@/db/schema";
+import { seedDemoAccounts } from "@/db/seed/accounts";
+import { callRoute, signIn } from "../helpers/auth-session";
+
+vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typeof import("next/server")>()), connection: async () => undefined }));
+
+beforeAll(async () => {
+  vi.stubEnv("DATABASE_URL", "");
+  vi.stubEnv("PGLITE_DATA_DIR", "memory://");
+  vi.stubEnv("DEMO_SEED", "off");
+  await seedDemoAccounts(await getDb());
+});
+afterAll(async () => {
+  await (await getDatabaseHandle()).close();
+  vi.unstubAllEnvs();
+});
+
+describe("demo accounts", () => {
+  it("exist once each with their roles, even when seeded again", async () => {
+    const db = await getDb();
+    await seedDemoAccounts(db);
+    const rows = await db.select({ email: user.email, role: user.role }).from(user).orderBy(user.email);
+    expect(rows).toEqual([
+      { email: "admin@sidewise.test", role: "admin" },
+      { email: "customer@sidewise.test", role: "customer" },
+      { email: "staff@sidewise.test", role: "staff" },
+    ]);
+    const hashes = await db.select({ password: account.password }).from(account);
+    expect(hashes.every((row) => row.password !== null && !row.password.includes("sidewise-demo"))).toBe(true);
+  });
+
+  it("sign in with the demo password and get a session that names the role, never a secret", async () => {
+    const cookie = await signIn("staff@sidewise.test", "sidewise-demo");
+    const response = await callRoute(authGet, "GET", "/api/auth/get-session", { cookie });
+    const body = await response.json();
+    expect(body.user).toMatchObject({ email: "staff@sidewise.test", role: "staff" });
+    expect(JSON.stringify(body)).not.toMatch(/password/i);
+  });
+
+  it("refuse a wrong password", async () => {
+    await expect(signIn("staff@sidewise.test", "not-the-password")).rejects.toThrow(/401/);
+  });
+});
