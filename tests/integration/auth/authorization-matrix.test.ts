@@ -64,14 +64,14 @@ describe("authorization matrix", () => {
     expect([...listed].filter((file) => !routeFiles.includes(file as string))).toEqual([]);
   });
 
-  it.each(MATRIX.flatMap((row) => (["anonymous", "customer", "staff", "admin"] as const).map((who) => ({ ...row, who }))))(
-    "$method $path as $who → $expected.$who",
-    async ({ file, method, path: url, body, params, who, expected }) => {
+  it.each(MATRIX.flatMap((row) => (["anonymous", "customer", "staff", "admin"] as const).map((who) => ({ ...row, who, status: row.expected[who] }))))(
+    "$method $path as $who → $status",
+    async ({ file, method, path: url, body, params, who, status }) => {
       const routeModule = (await import(/* @vite-ignore */ path.join(apiFolder, file))) as Record<string, Handler | undefined>;
       const handler = routeModule[method];
       if (!handler) throw new Error(`${file} exports no ${method}`);
       const response = await callRoute(handler, method, url, { cookie: cookies[who], body, params });
-      expect(response.status).toBe(expected[who]);
+      expect(response.status).toBe(status);
       if (response.status === 401) expect((await response.json()).error.code).toBe("unauthenticated");
       if (response.status === 403) expect((await response.json()).error.code).toBe("forbidden");
     },
