@@ -4,6 +4,7 @@ import { LazyMotion, m, MotionConfig } from "framer-motion";
 import { useId } from "react";
 import { formatLength, type UnitSystem } from "@/lib/tire/display";
 import { Dimension } from "./dimension";
+import { loadMotionFeatures } from "./motion-features-loader";
 import { type DrawingArrangement, type DrawnTire, layoutDrawing, tireLineStyles } from "./drawing-layout";
 
 export type DrawingPart = "overall" | "rim" | "sectionWidth" | "sidewall";
@@ -19,7 +20,6 @@ interface TireDrawingProps {
 }
 
 const transition = { type: "spring", stiffness: 140, damping: 22 } as const;
-const loadMotionFeatures = () => import("./motion-features").then((features) => features.default);
 
 /** Side view and cross-section of one to four tires, drawn in millimetres to one scale. */
 export function TireDrawing({ tires, units, title, description, arrangement, highlight = null, className }: TireDrawingProps) {
