@@ -62,6 +62,7 @@ export default defineConfig({
       PGLITE_DATA_DIR: e2eDataDir,
       DATABASE_URL: "",
       DEMO_SEED: "on",
+      BETTER_AUTH_URL: baseURL,
       NEXT_TELEMETRY_DISABLED: "1",
     },
   },

@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { AccountMenu } from "@/components/auth/account-menu";
 import { BrandMark } from "./brand-mark";
 import { NavLinks } from "./nav-links";
 
@@ -13,6 +14,9 @@ export function SiteHeader() {
         <nav aria-label="Main" className="-mx-2 min-w-0">
           <NavLinks />
         </nav>
+        <div className="pb-2 sm:ml-auto sm:pb-0">
+          <AccountMenu />
+        </div>
       </div>
     </header>
   );

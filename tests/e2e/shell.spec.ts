@@ -7,7 +7,6 @@ const shellPages = [
   { path: "/plus", heading: "Bigger (or smaller) wheels, same overall size" },
   { path: "/replace", heading: "Equal-or-better tires in stock" },
   { path: "/learn", heading: "Sidewall school" },
-  { path: "/counter", heading: "Counter" },
 ];
 
 test.describe("the app shell", () => {

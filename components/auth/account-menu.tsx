@@ -1,0 +1,58 @@
+"use client";
+
+import Link from "next/link";
+import { useRouter } from "next/navigation";
+import { useEffect, useState } from "react";
+import { postAuth } from "./post-auth";
+
+type SessionState = "loading" | "signed-out" | { name: string };
+
+const linkClass = "inline-flex min-h-11 items-center px-2 font-semibold text-accent underline-offset-4 hover:underline";
+
+/** Sign in, or the signed-in person's account link and a sign-out button; read in the browser so pages stay static. */
+export function AccountMenu() {
+  const router = useRouter();
+  const [state, setState] = useState<SessionState>("loading");
+
+  useEffect(() => {
+    let live = true;
+    fetch("/api/auth/get-session")
+      .then((response) => (response.ok ? response.json() : null))
+      .then((session: { user?: { name?: unknown } } | null) => {
+        if (!live) return;
+        const name = session?.user?.name;
+        setState(typeof name === "string" ? { name } : "signed-out");
+      })
+      .catch(() => live && setState("signed-out"));
+    return () => {
+      live = false;
+    };
+  }, []);
+
+  async function signOut() {
+    await postAuth("sign-out", {});
+    setState("signed-out");
+    router.push("/");
+    router.refresh();
+  }
+
+  if (state === "loading") return <div className="min-h-11" aria-hidden="true" />;
+  if (state === "signed-out") {
+    return (
+      <Link href="/sign-in" className={linkClass}>
+        Sign in
+      </Link>
+    );
+  }
+  return (
+    <div className="flex items-center gap-1">
+      <Link href="/account" className={linkClass}>
+        <span className="sr-only">Account of </span>
+        {state.name}
+      </Link>
+      <button type="button" onClick={signOut} className="min-h-11 rounded border border-rule px-3 font-semibold">
+        Sign out
+      </button>
+    </div>
+  );
+}

@@ -1,0 +1,50 @@
+"use client";
+
+import { useState, type FormEvent, type ReactNode } from "react";
+import { fieldErrors, type FieldErrors } from "@/lib/auth/form-schemas";
+import { authForms, type AuthFormKind } from "./form-kinds";
+import { postAuth } from "./post-auth";
+import { TextField } from "./text-field";
+
+/**
+ * A sign-in or sign-up form: checked in the browser for a quick answer next to each field, then sent
+ * to the sign-in service, which checks again. On success the whole page reloads at `next`.
+ */
+export function AuthForm({ kind, next, children }: { kind: AuthFormKind; next: string; children?: ReactNode }) {
+  const { fields, schema, endpoint, submitLabel } = authForms[kind];
+  const [errors, setErrors] = useState<FieldErrors>({});
+  const [busy, setBusy] = useState(false);
+
+  async function submit(event: FormEvent<HTMLFormElement>) {
+    event.preventDefault();
+    const parsed = schema.safeParse(Object.fromEntries(new FormData(event.currentTarget)));
+    if (!parsed.success) {
+      setErrors(fieldErrors(parsed.error));
+      return;
+    }
+    setErrors({});
+    setBusy(true);
+    const result = await postAuth(endpoint, parsed.data);
+    if (result.ok) {
+      window.location.assign(next);
+      return;
+    }
+    setBusy(false);
+    setErrors({ form: result.message });
+  }
+
+  return (
+    <form noValidate onSubmit={submit} className="flex max-w-md flex-col gap-4">
+      {fields.map((field) => (
+        <TextField key={field.name} {...field} required error={errors[field.name]} />
+      ))}
+      <div role="alert" className="min-h-6 text-danger">
+        {errors.form ?? ""}
+      </div>
+      <button type="submit" disabled={busy} className="min-h-11 rounded bg-accent px-4 font-semibold text-sheet disabled:opacity-60">
+        {busy ? "Please wait…" : submitLabel}
+      </button>
+      {children}
+    </form>
+  );
+}

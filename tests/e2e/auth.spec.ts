@@ -1,0 +1,38 @@
+import { expect, test, type Page } from "@playwright/test";
+import { expectNoAxeViolations } from "./helpers/axe";
+
+async function signIn(page: Page, email: string) {
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill("sidewise-demo");
+  await page.getByRole("button", { name: "Sign in" }).click();
+}
+
+test.describe("accounts", () => {
+  test("the sign-in page has no accessibility violations and explains a missing field", async ({ page }) => {
+    await page.goto("/sign-in");
+    await expect(page.getByRole("heading", { level: 1, name: "Sign in" })).toBeVisible();
+    await expectNoAxeViolations(page);
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await expect(page.getByText("Enter an e-mail address")).toBeVisible();
+    await expect(page.getByLabel("E-mail")).toHaveAttribute("aria-invalid", "true");
+  });
+
+  test("staff are sent to sign in on the way to the Counter, and reach it", async ({ page }) => {
+    await page.goto("/counter");
+    await expect(page).toHaveURL(/\/sign-in\?next=%2Fcounter$/);
+    await signIn(page, "staff@sidewise.test");
+    await expect(page).toHaveURL(/\/counter$/);
+    await expect(page.getByRole("heading", { level: 1, name: "Counter" })).toBeVisible();
+    await page.getByRole("button", { name: "Sign out" }).click();
+    await expect(page.getByRole("link", { name: "Sign in" })).toBeVisible();
+  });
+
+  test("a customer is refused the Counter but sees their account", async ({ page }) => {
+    await page.goto("/sign-in?next=/account");
+    await signIn(page, "customer@sidewise.test");
+    await expect(page).toHaveURL(/\/account$/);
+    await expect(page.getByText("customer@sidewise.test")).toBeVisible();
+    await page.goto("/counter");
+    await expect(page.getByRole("heading", { level: 1, name: "The Counter is for shop staff" })).toBeVisible();
+  });
+});
