@@ -3,7 +3,10 @@ import { redirect } from "next/navigation";
 import { hasRole, type Role } from "./roles";
 import { getSessionUser, type SessionUser } from "./session";
 
-export type PageAccess = { allowed: true; user: SessionUser } | { allowed: false; user: SessionUser };
+export interface PageAccess {
+  allowed: boolean;
+  user: SessionUser;
+}
 
 /**
  * For a server page: the signed-in user, checked on every request. Nobody signed in → sent to sign in
