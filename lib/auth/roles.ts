@@ -17,6 +17,6 @@ const rank: Record<Role, number> = { customer: 0, staff: 1, admin: 2 };
 
 /** Roles are ordered: admin includes staff, staff includes customer. An unknown role grants nothing. */
 export function hasRole(userRole: string | null | undefined, needed: Role): boolean {
-  if (userRole === null || userRole === undefined || !(userRole in rank)) return false;
+  if (typeof userRole !== "string" || !Object.hasOwn(rank, userRole)) return false;
   return rank[userRole as Role] >= rank[needed];
 }
