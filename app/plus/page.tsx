@@ -50,7 +50,8 @@ export default async function PlusPlannerPage({ searchParams }: { searchParams: 
           <p className="text-ink-soft">
             {answer.plan.candidates.length} sizes within ±{answer.plan.tolerancePct} % of {answer.plan.original.designation} (
             {Math.round(answer.plan.original.overallDiameterMm)} mm). A lower sidewall rides firmer and protects the wheel less. Not every size is
-            made: &ldquo;In the catalog&rdquo; says which the shop can supply.
+            made: &ldquo;In the catalog&rdquo; says which the shop can supply. The rim width is the theoretical one: section width × a factor set by
+            the aspect ratio (UN Regulation No. 30, §6.1.1.1), rounded to the half inch.
           </p>
           <PlusGroups plan={answer.plan} speedSymbol={query.success ? query.data.speedSymbol : undefined} />
         </>

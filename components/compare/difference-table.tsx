@@ -8,7 +8,7 @@ function signedLength(mm: number, units: UnitSystem): string {
 }
 
 const rows: [string, (size: ComparedSize, units: UnitSystem) => string][] = [
-  ["Overall diameter", (size, units) => formatLength(size.overallDiameterMm, units)],
+  ["Overall diameter", (size, units) => `${formatLength(size.overallDiameterMm, units)} (${formatLength(size.overallDiameterMm, units === "metric" ? "imperial" : "metric")})`],
   ["Diameter change", (size) => formatSignedPercent(size.diameterDiffPct)],
   ["Section width", (size, units) => formatLength(size.sectionWidthMm, units)],
   ["Sidewall height", (size, units) => formatLength(size.sidewallMm, units)],
