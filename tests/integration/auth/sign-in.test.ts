@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { GET as authGet } from "@/app/api/auth/[...all]/route";
+import { eq } from "drizzle-orm";
+import { GET as authGet, POST as authPost } from "@/app/api/auth/[...all]/route";
 import { getDatabaseHandle, getDb } from "@/db/client";
 import { account, user } from "@/db/schema";
 import { seedDemoAccounts } from "@/db/seed/accounts";
@@ -42,5 +43,14 @@ describe("demo accounts", () => {
 
   it("refuse a wrong password", async () => {
     await expect(signIn("staff@sidewise.test", "not-the-password")).rejects.toThrow(/401/);
+  });
+
+  it("give a new account the customer role, and refuse a sign-up that asks for another", async () => {
+    const body = { name: "Pim Castellan", email: "pim@sidewise.test", password: "long-enough-1" };
+    const roleOf = async () => (await (await getDb()).select({ role: user.role }).from(user).where(eq(user.email, body.email)))[0];
+    const asAdmin = await callRoute(authPost, "POST", "/api/auth/sign-up/email", { body: { ...body, role: "admin" } });
+    expect([asAdmin.status, await roleOf()]).toEqual([400, undefined]);
+    const plain = await callRoute(authPost, "POST", "/api/auth/sign-up/email", { body });
+    expect([plain.status, await roleOf()]).toEqual([200, { role: "customer" }]);
   });
 });
