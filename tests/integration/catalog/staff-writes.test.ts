@@ -108,6 +108,11 @@ describe("staff catalog writes", () => {
     expect(response.body.error.code).toBe(code);
   });
 
+  it("refuse a body over 64 KB with 413 too_large", async () => {
+    const { status, body } = await post({ ...newItem, sku: "X-2", line: "x".repeat(70_000) });
+    expect([status, body.error.code]).toEqual([413, "too_large"]);
+  });
+
   it("answer unknown SKUs with 404 not_found", async () => {
     expect((await change("NO-SUCH-SKU", { priceCents: 1 })).status).toBe(404);
     expect((await remove("NO-SUCH-SKU")).status).toBe(404);
