@@ -2,7 +2,8 @@ import { and, asc, count, desc, gte, lt, lte, sql } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { stockItem } from "@/db/schema";
 import { encodeAlternativesCursor, type AlternativesCursor, type AlternativesSort } from "./cursor";
-import { NEAR_MISS_LIMIT, nearMissQuery } from "./near-misses";
+import { finderAnswerSchema } from "./finder-answer";
+import { NEAR_MISS_LIMIT, nearMissRows } from "./near-misses";
 import { nearestRows, type Walk } from "./nearest-rows";
 import type { Original } from "./original";
 import { failedRules, qualifyingReasons } from "./reasons";
@@ -64,11 +65,18 @@ function pageQuery(db: Database, rules: RuleSql, sort: AlternativesSort, afterCu
   return nearestRows(db, walks, sortKey, rules.diffPct, pagePlaceholder("limit"));
 }
 
-function countQuery(db: Database, rules: RuleSql) {
-  return db
+/**
+ * The finder's one statement for a shape of search: a page of results, how many qualify in all and
+ * the near misses, as one JSON value (one round trip, rows read by JSON.parse rather than field by field).
+ */
+function finderStatement(db: Database, rules: RuleSql, sort: AlternativesSort, afterCursor: boolean) {
+  const total = db
     .select({ total: count() })
     .from(stockItem)
     .where(and(rules.eligible, rules.diameterFits, rules.loadIndexHolds, rules.speedHolds, rules.loadRangeHolds));
+  const answer = sql`json_build_object('results', (${pageQuery(db, rules, sort, afterCursor)}), 'total', (${total}), 'nearMisses', (${nearMissRows(db, rules)}))`;
+  // A statement of one row: its whole answer is the single JSON value.
+  return db.select({ answer }).from(sql`(values (1)) as "single_row"`);
 }
 
 /** Where each side's walk starts: past the cursor's distance from the original's diameter. */
@@ -91,16 +99,11 @@ function pageValues(options: AlternativesOptions, referenceMm: number) {
 export async function findAlternatives(db: Database, original: Original, options: AlternativesOptions): Promise<Alternatives> {
   const shape = finderShape(original, options);
   const values = finderValues(original, options.tolerancePct, options);
-  const shapeKey = JSON.stringify(shape);
-  const cursorKind = options.cursor ? "after" : "first";
-  const rows = await cachedStatement(db, `page ${options.sort} ${cursorKind} ${shapeKey}`, () =>
-    pageQuery(db, ruleSql(shape), options.sort, options.cursor !== null),
-  ).execute({ ...values, ...pageValues(options, values.reference) });
-  const [counted] = await cachedStatement(db, `count ${shapeKey}`, () => countQuery(db, ruleSql(shape))).execute(values);
-  const nearMisses = await cachedStatement(db, `near ${shapeKey}`, () => nearMissQuery(db, ruleSql(shape))).execute({
-    ...values,
-    nearMissLimit: NEAR_MISS_LIMIT,
-  });
+  const statement = cachedStatement(db, `${options.sort} ${options.cursor ? "after" : "first"} ${JSON.stringify(shape)}`, () =>
+    finderStatement(db, ruleSql(shape), options.sort, options.cursor !== null),
+  );
+  const [row] = await statement.execute({ ...values, ...pageValues(options, values.reference), nearMissLimit: NEAR_MISS_LIMIT });
+  const { results: rows, total, nearMisses } = finderAnswerSchema.parse(row?.answer);
 
   const page = rows.slice(0, options.limit);
   const last = page.at(-1);
@@ -114,7 +117,7 @@ export async function findAlternatives(db: Database, original: Original, options
       loadRange: original.loadRange,
     },
     tolerancePct: options.tolerancePct,
-    total: counted?.total ?? 0,
+    total,
     results: page.map((row) => ({ ...toTire(row), diameterDiffPct: row.diffPct, reasons: qualifyingReasons(original, row, row.diffPct) })),
     nextCursor: hasMore ? encodeAlternativesCursor({ sort: options.sort, key: last.sortKey, priceCents: last.priceCents, sku: last.sku }) : null,
     nearMisses: nearMisses.map((row) => ({

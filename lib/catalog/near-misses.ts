@@ -6,13 +6,17 @@ import { placeholder, skuPlainOrder, type RuleSql } from "./rule-sql";
 
 export const NEAR_MISS_LIMIT = 20;
 
-/** Exactly one of the conditions fails, counted rather than spelled out case by case, which keeps planning cheap. */
+/**
+ * Exactly one of the conditions fails: not all hold, and at most one fails. Counting keeps planning
+ * cheap (spelling out each case makes the planner weigh an index path per case), and leading with
+ * "not all hold" lets it expect enough rows to walk the finder index in order rather than sort.
+ */
 function exactlyOneFails(conditions: readonly SQL[]): SQL {
   const failures = sql.join(
     conditions.map((condition) => sql`(not (${condition}))::int`),
     sql` + `,
   );
-  return sql`${failures} = 1`;
+  return sql`not (${and(...conditions)}) and ${failures} <= 1`;
 }
 
 /**
@@ -20,7 +24,7 @@ function exactlyOneFails(conditions: readonly SQL[]): SQL {
  * diameter first, then price, then SKU. Within the tolerance they fail one of rules 3–5; beyond it
  * they meet all three. Each side of the original is walked outwards until enough are found.
  */
-export function nearMissQuery(db: Database, rules: RuleSql) {
+export function nearMissRows(db: Database, rules: RuleSql) {
   const od = stockItem.overallDiameterMm;
   const [reference, minMm, maxMm] = [placeholder("reference"), placeholder("minMm"), placeholder("maxMm")];
   const others = [rules.loadIndexHolds, rules.speedHolds, rules.loadRangeHolds];

@@ -1,4 +1,4 @@
-import { asc, eq, sql, type Placeholder, type SQL } from "drizzle-orm";
+import { eq, sql, type Placeholder, type SQL } from "drizzle-orm";
 import { unionAll } from "drizzle-orm/pg-core";
 import type { Database } from "@/db/client";
 import { brand, stockItem, tireLine } from "@/db/schema";
@@ -13,10 +13,10 @@ export interface Walk {
 }
 
 /**
- * The first `limit` rows by (sort key, price, SKU in plain character order), taken from walks whose
- * own order agrees with it. Walking the diameter outwards on each side of the original along the
- * finder indexes reads about `limit` rows per walk however large the catalog is; only the rows kept
- * are joined to their line and brand.
+ * The first `limit` rows by (sort key, price, SKU in plain character order), as one JSON array of
+ * candidate rows (see finder-answer), taken from walks whose own order agrees with it. Walking the
+ * diameter outwards on each side of the original along the finder indexes reads about `limit` rows
+ * per walk however large the catalog is; only the rows kept are joined to their line and brand.
  */
 export function nearestRows(db: Database, walks: readonly [Walk, ...Walk[]], sortKey: SQL<number>, diffPct: SQL<number>, limit: Placeholder) {
   const walkQuery = (walk: Walk) =>
@@ -34,13 +34,20 @@ export function nearestRows(db: Database, walks: readonly [Walk, ...Walk[]], sor
       .orderBy(...walk.orderBy)
       .limit(limit);
   const [first, second, ...rest] = walks.map(walkQuery);
-  const walked = (first && second ? unionAll(first, second, ...rest) : walkQuery(walks[0])).as("walked");
-  const { lineId, plainSku, ...rowColumns } = walked._.selectedFields;
+  const nearest =
+    first && second
+      ? unionAll(first, second, ...rest)
+          // plain_sku keeps the C collation of both walks.
+          .orderBy(sql.raw(`"sort_key", "price_cents", "plain_sku"`))
+          .limit(limit)
+      : walkQuery(walks[0]);
+  const walked = nearest.as("walked");
+  const { lineId, plainSku, ...stockFields } = walked._.selectedFields;
+  const fields = Object.entries({ ...stockFields, ...tireLineColumns }).map(([key, value]) => sql`${sql.raw(`'${key}'`)}, ${value}`);
+  const orderedRows = sql`json_agg(json_build_object(${sql.join(fields, sql`, `)}) order by ${walked.sortKey}, ${walked.priceCents}, ${plainSku} collate "C")`;
   return db
-    .select({ ...rowColumns, ...tireLineColumns })
+    .select({ rows: sql`coalesce(${orderedRows}, '[]'::json)` })
     .from(walked)
     .innerJoin(tireLine, eq(lineId, tireLine.id))
-    .innerJoin(brand, ofBrand)
-    .orderBy(asc(walked.sortKey), asc(walked.priceCents), sql`${plainSku} collate "C"`)
-    .limit(limit);
+    .innerJoin(brand, ofBrand);
 }
