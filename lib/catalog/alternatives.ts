@@ -99,11 +99,11 @@ function pageValues(options: AlternativesOptions, referenceMm: number) {
 export async function findAlternatives(db: Database, original: Original, options: AlternativesOptions): Promise<Alternatives> {
   const shape = finderShape(original, options);
   const values = finderValues(original, options.tolerancePct, options);
-  const statement = cachedStatement(db, `${options.sort} ${options.cursor ? "after" : "first"} ${JSON.stringify(shape)}`, () =>
+  const run = cachedStatement(db, `${options.sort} ${options.cursor ? "after" : "first"} ${JSON.stringify(shape)}`, () =>
     finderStatement(db, ruleSql(shape), options.sort, options.cursor !== null),
   );
-  const [row] = await statement.execute({ ...values, ...pageValues(options, values.reference), nearMissLimit: NEAR_MISS_LIMIT });
-  const { results: rows, total, nearMisses } = finderAnswerSchema.parse(row?.answer);
+  const answer = await run({ ...values, ...pageValues(options, values.reference), nearMissLimit: NEAR_MISS_LIMIT });
+  const { results: rows, total, nearMisses } = finderAnswerSchema.parse(answer);
 
   const page = rows.slice(0, options.limit);
   const last = page.at(-1);
