@@ -39,14 +39,14 @@ export function AccountMenu() {
   if (state === "loading") return <div className="min-h-11" aria-hidden="true" />;
   if (state === "signed-out") {
     return (
-      <Link href="/sign-in" className={linkClass}>
+      <Link href="/sign-in" prefetch={false} className={linkClass}>
         Sign in
       </Link>
     );
   }
   return (
     <div className="flex items-center gap-1">
-      <Link href="/account" className={linkClass}>
+      <Link href="/account" prefetch={false} className={linkClass}>
         <span className="sr-only">Account of </span>
         {state.name}
       </Link>
