@@ -26,6 +26,8 @@ test.describe("the Sidewall reader", () => {
   test("sends no request while typing", async ({ page }) => {
     await page.goto("/");
     await page.waitForLoadState("networkidle");
+    // The header asks once whether someone is signed in; let that settle before listening.
+    await expect(page.getByRole("link", { name: "Sign in" })).toBeAttached();
     // Decoding must not reach the server: no document, fetch or XHR request may leave the page.
     // (A code-split script loaded once, such as the animation engine, is not a decoding request.)
     const requests: string[] = [];
