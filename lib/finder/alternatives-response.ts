@@ -5,7 +5,7 @@ export type NearMiss = Tire & { diameterDiffPct: number; failed: string[] };
 
 /** The body of GET /api/v1/alternatives. */
 export interface AlternativesResponse {
-  original: { designation: string; overallDiameterMm: number; loadIndex: number; speedSymbol: string; loadRange: string | null };
+  original: { designation: string; overallDiameterMm: number; loadIndex: number; speedSymbol: string | null; loadRange: string | null };
   tolerancePct: number;
   total: number;
   results: Candidate[];
