@@ -1,3 +1,4 @@
 export * from "./shop";
 export * from "./catalog";
 export * from "./auth";
+export * from "./audit";

@@ -2,6 +2,7 @@ import { and, eq, sql } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { brand, stockItem, tireLine } from "@/db/schema";
 import type { ApiErrorCode } from "@/lib/api/errors";
+import { changedFields, recordAudit, type Actor } from "@/lib/audit/record";
 import { ofBrand, ofLine } from "./catalog-select";
 import type { NewStockItemBody, StockItemChanges } from "./stock-edit";
 import { buildStockRow, type StockItemInput, type StockLine } from "./stock-row";
@@ -12,6 +13,14 @@ export type StockWriteResult = { ok: true; tire: Tire } | { ok: false; code: Api
 const refuse = (code: ApiErrorCode, message: string): StockWriteResult => ({ ok: false, code, message });
 const unknownLine = (brandName: string, lineName: string) =>
   refuse("unknown_line", `The catalog has no line "${lineName}" from the brand "${brandName}"; add the line first.`);
+
+const AUDITED_FIELDS = ["priceCents", "quantityOnHand", "designation", "loadIndex", "loadIndexDual", "speedSymbol", "loadRange", "extraLoad", "lineId"] as const;
+
+function describeChanges(changes: ReturnType<typeof changedFields>): string {
+  return Object.entries(changes)
+    .map(([field, { from, to }]) => `${field} ${String(from)} → ${String(to)}`)
+    .join("; ");
+}
 
 /** A brand's line by name, in any letter case. */
 async function findLine(db: Database, brandName: string, lineName: string): Promise<StockLine | null> {
@@ -41,19 +50,24 @@ async function currentTire(db: Database, sku: string): Promise<StockWriteResult>
 }
 
 /** Adds an item to a line the catalog has, through the same write path as the demo seed. */
-export async function createStockItem(db: Database, body: NewStockItemBody): Promise<StockWriteResult> {
+export async function createStockItem(db: Database, body: NewStockItemBody, actor: Actor): Promise<StockWriteResult> {
   const { brand: brandName, line: lineName, ...input } = body;
-  const line = await findLine(db, brandName, lineName);
-  if (!line) return unknownLine(brandName, lineName);
-  const built = buildStockRow(input, line);
-  if (!built.ok) return refuse("invalid_parameter", `The field "${built.problem.field}" is invalid: ${built.problem.reason}.`);
-  const inserted = await db.insert(stockItem).values(built.row).onConflictDoNothing({ target: stockItem.sku }).returning({ id: stockItem.id });
-  if (inserted.length === 0) return refuse("already_exists", `The SKU "${built.row.sku}" is taken (retired items keep theirs).`);
-  return currentTire(db, built.row.sku);
+  return db.transaction(async (tx) => {
+    const line = await findLine(tx, brandName, lineName);
+    if (!line) return unknownLine(brandName, lineName);
+    const built = buildStockRow(input, line);
+    if (!built.ok) return refuse("invalid_parameter", `The field "${built.problem.field}" is invalid: ${built.problem.reason}.`);
+    const { row } = built;
+    const inserted = await tx.insert(stockItem).values(row).onConflictDoNothing({ target: stockItem.sku }).returning({ id: stockItem.id });
+    if (inserted.length === 0) return refuse("already_exists", `The SKU "${row.sku}" is taken (retired items keep theirs).`);
+    const summary = `Added ${row.designation} (${brandName} ${lineName}) at ${row.priceCents} cents, ${row.quantityOnHand} on hand`;
+    await recordAudit(tx, actor, [{ action: "item_added", subject: row.sku, summary }]);
+    return currentTire(tx, row.sku);
+  });
 }
 
 /** Changes a current item; the row is rebuilt and checked as a whole, as if it were new. */
-export async function updateStockItem(db: Database, sku: string, changes: StockItemChanges): Promise<StockWriteResult> {
+export async function updateStockItem(db: Database, sku: string, changes: StockItemChanges, actor: Actor): Promise<StockWriteResult> {
   return db.transaction(async (tx) => {
     const current = await findCurrent(tx, sku);
     if (!current) return refuse("not_found", `No current catalog item has the SKU "${sku}".`);
@@ -75,16 +89,25 @@ export async function updateStockItem(db: Database, sku: string, changes: StockI
     const built = buildStockRow(input, line);
     if (!built.ok) return refuse("invalid_parameter", `The field "${built.problem.field}" is invalid: ${built.problem.reason}.`);
     await tx.update(stockItem).set({ ...built.row, updatedAt: new Date() }).where(eq(stockItem.sku, sku));
+    const audited = changedFields(current, { ...current, ...built.row }, AUDITED_FIELDS);
+    if (Object.keys(audited).length > 0) {
+      await recordAudit(tx, actor, [{ action: "item_changed", subject: sku, summary: describeChanges(audited), changes: audited }]);
+    }
     return currentTire(tx, sku);
   });
 }
 
 /** Retires an item: it leaves the catalog and the finder but keeps its row (and its SKU). */
-export async function retireStockItem(db: Database, sku: string): Promise<boolean> {
-  const retired = await db
-    .update(stockItem)
-    .set({ retired: true, updatedAt: new Date() })
-    .where(and(eq(stockItem.sku, sku), eq(stockItem.retired, false)))
-    .returning({ id: stockItem.id });
-  return retired.length > 0;
+export async function retireStockItem(db: Database, sku: string, actor: Actor): Promise<boolean> {
+  return db.transaction(async (tx) => {
+    const retired = await tx
+      .update(stockItem)
+      .set({ retired: true, updatedAt: new Date() })
+      .where(and(eq(stockItem.sku, sku), eq(stockItem.retired, false)))
+      .returning({ designation: stockItem.designation });
+    const [item] = retired;
+    if (!item) return false;
+    await recordAudit(tx, actor, [{ action: "item_retired", subject: sku, summary: `Retired ${item.designation}` }]);
+    return true;
+  });
 }
