@@ -1,0 +1,17 @@
+import type { ReactNode } from "react";
+import { headers } from "next/headers";
+import { CounterNav } from "@/components/counter/counter-nav";
+import { hasRole } from "@/lib/auth/roles";
+import { getSessionUser } from "@/lib/auth/session";
+
+/** The Counter's section tabs, for staff and admins; each page still checks access itself. */
+export default async function CounterLayout({ children }: { children: ReactNode }) {
+  const user = await getSessionUser(await headers());
+  const isStaff = hasRole(user?.role, "staff");
+  return (
+    <>
+      {isStaff ? <CounterNav isAdmin={hasRole(user?.role, "admin")} /> : null}
+      {children}
+    </>
+  );
+}
