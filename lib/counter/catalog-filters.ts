@@ -1,5 +1,6 @@
 import { and, asc, desc, eq, gt, ilike, or, sql, type SQL } from "drizzle-orm";
 import { z } from "zod";
+import { containsPattern } from "@/lib/search/contains-pattern";
 import { brand, SEASONS, stockItem, TERRAINS, tireLine } from "@/db/schema";
 
 export const CATALOG_TABLE_SORTS = ["sku", "brand", "size", "loadIndex", "speed", "price", "quantity"] as const;
@@ -27,14 +28,12 @@ export const catalogFiltersSchema = z.object({
 
 export type CatalogFilters = z.infer<typeof catalogFiltersSchema>;
 
-const escapeLike = (text: string) => text.replace(/[\\%_]/g, (character) => `\\${character}`);
-
 /** The WHERE clause for the filters; join stock_item to tire_line and brand to use it. */
 export function catalogFilterWhere(filters: CatalogFilters): SQL | undefined {
   const conditions: (SQL | undefined)[] = [eq(stockItem.retired, false)];
   if (filters.q) {
-    const pattern = `%${escapeLike(filters.q)}%`;
-    const compactSize = `%${escapeLike(filters.q.toUpperCase().replace(/\s+/g, ""))}%`;
+    const pattern = containsPattern(filters.q);
+    const compactSize = containsPattern(filters.q.toUpperCase().replace(/\s+/g, ""));
     conditions.push(
       or(ilike(stockItem.sku, pattern), ilike(stockItem.designation, compactSize), ilike(brand.name, pattern), ilike(tireLine.name, pattern)),
     );
