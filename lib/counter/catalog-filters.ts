@@ -59,8 +59,11 @@ const sortColumns: Record<CatalogTableSort, SortColumn[]> = {
   quantity: [stockItem.quantityOnHand],
 };
 
-/** ORDER BY for the table: the chosen columns, then the SKU so that pages never shuffle on ties. */
+/**
+ * ORDER BY for the table: the chosen columns, then the SKU so that pages never shuffle on ties, in
+ * plain character order so that PGlite and PostgreSQL agree.
+ */
 export function catalogOrderBy(filters: CatalogFilters): SQL[] {
   const direction = filters.dir === "desc" ? desc : asc;
-  return [...sortColumns[filters.sort].map((column) => direction(column)), direction(stockItem.sku)];
+  return [...sortColumns[filters.sort].map((column) => direction(column)), direction(sql`${stockItem.sku} collate "C"`)];
 }
