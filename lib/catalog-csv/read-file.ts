@@ -1,0 +1,119 @@
+import Papa from "papaparse";
+import {
+  CATALOG_CSV_COLUMN_NAMES,
+  isCatalogCsvColumnName,
+  normalizeHeaderName,
+  REQUIRED_CATALOG_CSV_COLUMNS,
+  type CatalogCsvColumnName,
+  type CatalogCsvRecord,
+  type CsvRefusal,
+} from "./columns";
+import { readCsvRow, type CatalogCsvRow } from "./read-row";
+
+export type CatalogCsvFile =
+  /** Not a CSV at all (binary, empty, no header row, another separator): `message` says what to do. */
+  | { ok: false; message: string }
+  /**
+   * The rows that read cleanly and the refusals, in file order. When `headerRefused`, the header
+   * itself is wrong (refusals on line 1) and no row was read.
+   */
+  | { ok: true; rows: CatalogCsvRow[]; refusals: CsvRefusal[]; headerRefused: boolean; rowCount: number };
+
+const EXPORT_AS_CSV = "export one from your spreadsheet as CSV (comma-separated), or start from the template";
+const unreadable = (problem: string): CatalogCsvFile => ({ ok: false, message: `${problem}: ${EXPORT_AS_CSV}.` });
+
+/** NUL characters, or undecodable bytes, only turn up in pictures, workbooks and other binary files. */
+function looksBinary(text: string): boolean {
+  const start = text.slice(0, 4096);
+  const undecodable = start.split("\uFFFD").length - 1;
+  return start.includes("\u0000") || undecodable > start.length / 100;
+}
+
+const isBlank = (cells: readonly string[]) => cells.every((cell) => cell.trim() === "");
+
+/**
+ * Reads a whole catalog CSV: the header, then every row through readCsvRow. A SKU that appears twice
+ * is refused on its later line. Line numbers are the row numbers a spreadsheet shows (header = 1).
+ * Pure, so the upload screen previews exactly what the server will do.
+ */
+export function readCatalogCsv(fileText: string): CatalogCsvFile {
+  const text = fileText.replace(/^\uFEFF/, "");
+  if (text.trim() === "") return unreadable("This file is empty");
+  if (looksBinary(text)) return unreadable("This file is not a CSV (it looks like a picture, a workbook or another binary file)");
+
+  const parsed = Papa.parse<string[]>(text, { delimiter: ",", skipEmptyLines: false });
+  const unclosedQuote = parsed.errors.find((error) => error.type === "Quotes");
+  if (unclosedQuote) {
+    return unreadable(`This file is not a CSV that can be read to the end (a quote opened on line ${(unclosedQuote.row ?? 0) + 1} never closes)`);
+  }
+  const [headerCells = [], ...dataRows] = parsed.data;
+  const header = headerCells.map(normalizeHeaderName);
+  if (!header.some(isCatalogCsvColumnName)) {
+    const separator = /;/.test(headerCells.join("")) ? "semicolons" : /\t/.test(headerCells.join("")) ? "tabs" : null;
+    return separator
+      ? unreadable(`This file is not a comma-separated CSV (its columns are separated by ${separator})`)
+      : unreadable(`This file is not a CSV with a header row (its first line should name the columns ${CATALOG_CSV_COLUMN_NAMES.join(", ")})`);
+  }
+
+  const headerRefusals = checkHeader(headerCells, header);
+  if (headerRefusals.length > 0) {
+    return { ok: true, rows: [], refusals: headerRefusals, headerRefused: true, rowCount: dataRows.filter((cells) => !isBlank(cells)).length };
+  }
+
+  const rows: CatalogCsvRow[] = [];
+  const refusals: CsvRefusal[] = [];
+  const lineOfSku = new Map<string, number>();
+  let rowCount = 0;
+  dataRows.forEach((cells, index) => {
+    if (isBlank(cells)) return;
+    rowCount += 1;
+    const line = index + 2;
+    const extra = cells.slice(header.length);
+    if (cells.length < header.length || !isBlank(extra)) {
+      refusals.push({
+        line,
+        column: "",
+        reason: `the row has ${cells.length} cells but the header names ${header.length} columns; put a value that contains a comma in double quotes`,
+      });
+      return;
+    }
+    const record: CatalogCsvRecord = {};
+    header.forEach((name, i) => {
+      if (isCatalogCsvColumnName(name)) record[name] = cells[i] ?? "";
+    });
+    const read = readCsvRow(record, line);
+    if (!read.ok) {
+      refusals.push(...read.refusals);
+      return;
+    }
+    const sku = read.row.item.sku;
+    const earlier = lineOfSku.get(sku);
+    if (earlier !== undefined) {
+      refusals.push({ line, column: "sku", reason: `SKU "${sku}" is already on line ${earlier} of this file; each SKU may appear once` });
+      return;
+    }
+    lineOfSku.set(sku, line);
+    rows.push(read.row);
+  });
+  return { ok: true, rows, refusals, headerRefused: false, rowCount };
+}
+
+/** Missing required columns, columns the catalog does not read, and columns named twice; an unnamed column is ignored. */
+function checkHeader(headerCells: readonly string[], header: readonly string[]): CsvRefusal[] {
+  const refusals: CsvRefusal[] = [];
+  const seen = new Set<CatalogCsvColumnName>();
+  header.forEach((name, i) => {
+    if (name === "") return;
+    if (!isCatalogCsvColumnName(name)) {
+      refusals.push({ line: 1, column: headerCells[i]?.trim() ?? name, reason: `the column "${headerCells[i]?.trim()}" is not one the catalog reads; remove it, or rename it to one of ${CATALOG_CSV_COLUMN_NAMES.join(", ")}` });
+    } else if (seen.has(name)) {
+      refusals.push({ line: 1, column: name, reason: `the column ${name} appears twice in the header row; keep one` });
+    } else {
+      seen.add(name);
+    }
+  });
+  for (const name of REQUIRED_CATALOG_CSV_COLUMNS) {
+    if (!seen.has(name)) refusals.push({ line: 1, column: name, reason: `the required column ${name} is missing from the header row; add it` });
+  }
+  return refusals;
+}
