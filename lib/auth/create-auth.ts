@@ -4,6 +4,8 @@ import { nextCookies } from "better-auth/next-js";
 import { admin } from "better-auth/plugins";
 import type { Database } from "@/db/client";
 import * as schema from "@/db/schema";
+import { passwordResetEmail, RESET_LINK_LIFETIME_SECONDS } from "@/lib/email/password-reset-email";
+import { sendEmail } from "@/lib/email/send-email";
 import { readAuthEnv } from "./auth-env";
 import { ac, roles } from "./roles";
 
@@ -14,7 +16,18 @@ export function createAuth(db: Database) {
     baseURL,
     secret,
     database: drizzleAdapter(db, { provider: "pg", schema }),
-    emailAndPassword: { enabled: true, minPasswordLength: 8, maxPasswordLength: 128 },
+    emailAndPassword: {
+      enabled: true,
+      minPasswordLength: 8,
+      maxPasswordLength: 128,
+      resetPasswordTokenExpiresIn: RESET_LINK_LIFETIME_SECONDS,
+      revokeSessionsOnPasswordReset: true,
+      // Not awaited: the answer must take as long for an unknown address as for a known one.
+      // sendEmail never throws and logs its own failures.
+      sendResetPassword: async ({ user, url }) => {
+        void sendEmail({ to: user.email, ...passwordResetEmail({ name: user.name, link: url }) });
+      },
+    },
     telemetry: { enabled: false },
     plugins: [admin({ ac, roles, defaultRole: "customer", adminRoles: ["admin"] }), nextCookies()],
   });

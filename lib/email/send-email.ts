@@ -1,0 +1,36 @@
+import { Resend } from "resend";
+import { z } from "zod";
+import { readEmailEnv } from "./email-env";
+
+const emailSchema = z.object({
+  to: z.union([z.email(), z.array(z.email()).min(1).max(50)]),
+  subject: z.string().trim().min(1).max(300),
+  text: z.string().min(1),
+  html: z.string().min(1).optional(),
+  replyTo: z.email().optional(),
+});
+
+export type OutgoingEmail = z.input<typeof emailSchema>;
+export type SendEmailResult = { ok: true; id: string } | { ok: false; message: string };
+
+function failed(message: string): SendEmailResult {
+  console.error(`E-mail not sent: ${message}`);
+  return { ok: false, message };
+}
+
+/** The one way the product sends e-mail. Never throws: a failure is logged and answered as a message. */
+export async function sendEmail(email: OutgoingEmail): Promise<SendEmailResult> {
+  const parsed = emailSchema.safeParse(email);
+  if (!parsed.success) return failed(`invalid e-mail: ${parsed.error.issues.map((i) => `${i.path.join(".")}: ${i.message}`).join("; ")}`);
+  const env = readEmailEnv();
+  if (!env.ok) return failed(env.message);
+  try {
+    // Created per send: the SDK throws at construction when there is no key.
+    const resend = new Resend(env.apiKey, env.baseUrl ? { baseUrl: env.baseUrl } : undefined);
+    const { data, error } = await resend.emails.send({ from: env.from, ...parsed.data });
+    if (error) return failed(`${error.name}: ${error.message}`);
+    return { ok: true, id: data.id };
+  } catch (error) {
+    return failed(error instanceof Error ? error.message : String(error));
+  }
+}

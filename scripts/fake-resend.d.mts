@@ -1,0 +1,28 @@
+export const DEFAULT_FAKE_RESEND_PORT: number;
+
+/** One e-mail as the fake received it: the SDK's request body, plus the id it answered and when. */
+export interface ReceivedEmail {
+  id: string;
+  created_at: string;
+  from: string;
+  to: string | string[];
+  subject: string;
+  text?: string;
+  html?: string;
+  reply_to?: string | string[];
+  [field: string]: unknown;
+}
+
+export interface FakeResend {
+  url: string;
+  port: number;
+  /** Newest first. */
+  received: () => ReceivedEmail[];
+  close: () => Promise<void>;
+}
+
+export function startFakeResend(options?: {
+  port?: number;
+  host?: string;
+  failWith?: { statusCode: number; name: string; message: string };
+}): Promise<FakeResend>;
