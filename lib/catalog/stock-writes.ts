@@ -2,6 +2,7 @@ import { and, eq, sql } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { brand, stockItem, tireLine } from "@/db/schema";
 import type { ApiErrorCode } from "@/lib/api/errors";
+import { formatPrice } from "@/lib/shop/money";
 import { changedFields, recordAudit, type Actor } from "@/lib/audit/record";
 import { ofBrand, ofLine } from "./catalog-select";
 import type { NewStockItemBody, StockItemChanges } from "./stock-edit";
@@ -16,9 +17,24 @@ const unknownLine = (brandName: string, lineName: string) =>
 
 const AUDITED_FIELDS = ["priceCents", "quantityOnHand", "designation", "loadIndex", "loadIndexDual", "speedSymbol", "loadRange", "extraLoad", "lineId"] as const;
 
+const fieldLabels: Record<(typeof AUDITED_FIELDS)[number], string> = {
+  priceCents: "price",
+  quantityOnHand: "quantity",
+  designation: "size",
+  loadIndex: "load index",
+  loadIndexDual: "dual load index",
+  speedSymbol: "speed symbol",
+  loadRange: "load range",
+  extraLoad: "extra load",
+  lineId: "line",
+};
+
+const shown = (field: string, value: unknown) => (value === null ? "none" : field === "priceCents" ? formatPrice(Number(value)) : String(value));
+
+/** "price $159.00 → $149.00; quantity 4 → 2" */
 function describeChanges(changes: ReturnType<typeof changedFields>): string {
   return Object.entries(changes)
-    .map(([field, { from, to }]) => `${field} ${String(from)} → ${String(to)}`)
+    .map(([field, { from, to }]) => `${fieldLabels[field as keyof typeof fieldLabels] ?? field} ${shown(field, from)} → ${shown(field, to)}`)
     .join("; ");
 }
 
@@ -60,7 +76,7 @@ export async function createStockItem(db: Database, body: NewStockItemBody, acto
     const { row } = built;
     const inserted = await tx.insert(stockItem).values(row).onConflictDoNothing({ target: stockItem.sku }).returning({ id: stockItem.id });
     if (inserted.length === 0) return refuse("already_exists", `The SKU "${row.sku}" is taken (retired items keep theirs).`);
-    const summary = `Added ${row.designation} (${brandName} ${lineName}) at ${row.priceCents} cents, ${row.quantityOnHand} on hand`;
+    const summary = `Added ${row.designation} (${brandName} ${lineName}) at ${formatPrice(row.priceCents)}, ${row.quantityOnHand} on hand`;
     await recordAudit(tx, actor, [{ action: "item_added", subject: row.sku, summary }]);
     return currentTire(tx, row.sku);
   });

@@ -1,4 +1,4 @@
-import { readdirSync } from "node:fs";
+import { readdirSync, readFileSync } from "node:fs";
 import path from "node:path";
 import type { NextRequest } from "next/server";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
@@ -7,6 +7,10 @@ import { seedDemoAccounts } from "@/db/seed/accounts";
 import { callRoute, signIn } from "../helpers/auth-session";
 
 vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typeof import("next/server")>()), connection: async () => undefined }));
+// Server actions read the caller's cookie through next/headers; here it is whoever the test says.
+const actionCaller = vi.hoisted(() => ({ cookie: undefined as string | undefined }));
+vi.mock("next/headers", () => ({ headers: async () => new Headers(actionCaller.cookie ? { cookie: actionCaller.cookie } : {}) }));
+vi.mock("next/cache", () => ({ revalidatePath: () => undefined }));
 
 type Who = "anonymous" | "customer" | "staff" | "admin";
 type Handler = (request: NextRequest, context: { params: Promise<Record<string, string>> }) => Promise<Response>;
@@ -37,6 +41,25 @@ const MATRIX: { file: string; method: string; path: string; body?: unknown; para
     expected: { anonymous: 401, customer: 403, staff: 404, admin: 404 },
   },
 ];
+
+/**
+ * Every server action, called with input that changes nothing once authorization passes; the
+ * status it answers uses the API's numbers.
+ */
+const ACTION_MATRIX: { file: string; action: string; input: unknown; expected: Record<Who, number> }[] = [
+  {
+    file: "lib/team/actions.ts", action: "changeRole", input: { userId: "no-such-account", role: "staff" },
+    expected: { anonymous: 401, customer: 403, staff: 403, admin: 404 },
+  },
+];
+
+/** Modules that start with the "use server" directive, in the folders that may hold server actions. */
+const actionFiles = ["app", "lib", "components"].flatMap((folder) =>
+  (readdirSync(path.join(process.cwd(), folder), { recursive: true }) as string[])
+    .filter((file) => /\.tsx?$/.test(file))
+    .map((file) => path.join(folder, file).split(path.sep).join("/"))
+    .filter((file) => /^\s*["']use server["']/.test(readFileSync(path.join(process.cwd(), file), "utf8"))),
+);
 
 const apiFolder = path.join(process.cwd(), "app", "api");
 const routeFiles = (readdirSync(apiFolder, { recursive: true }) as string[])
@@ -74,6 +97,27 @@ describe("authorization matrix", () => {
       expect(response.status).toBe(status);
       if (response.status === 401) expect((await response.json()).error.code).toBe("unauthenticated");
       if (response.status === 403) expect((await response.json()).error.code).toBe("forbidden");
+    },
+  );
+
+  it("lists every server action", async () => {
+    const listed = new Set(ACTION_MATRIX.map((row) => `${row.file}#${row.action}`));
+    const exported: string[] = [];
+    for (const file of actionFiles) {
+      const actions = (await import(/* @vite-ignore */ path.join(process.cwd(), file))) as Record<string, unknown>;
+      exported.push(...Object.keys(actions).map((name) => `${file}#${name}`));
+    }
+    expect(exported.filter((entry) => !listed.has(entry))).toEqual([]);
+    expect([...listed].filter((entry) => !exported.includes(entry))).toEqual([]);
+  });
+
+  it.each(ACTION_MATRIX.flatMap((row) => (["anonymous", "customer", "staff", "admin"] as const).map((who) => ({ ...row, who, status: row.expected[who] }))))(
+    "server action $action as $who → $status",
+    async ({ file, action, input, who, status }) => {
+      const actions = (await import(/* @vite-ignore */ path.join(process.cwd(), file))) as Record<string, (input: unknown) => Promise<{ ok: boolean; status?: number }>>;
+      actionCaller.cookie = cookies[who];
+      const result = await actions[action]!(input);
+      expect(result.ok ? 200 : result.status).toBe(status);
     },
   );
 });

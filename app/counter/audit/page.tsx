@@ -1,0 +1,24 @@
+import type { Metadata } from "next";
+import { AuditLog } from "@/components/counter/audit-log";
+import { CounterRefusal } from "@/components/counter/counter-refusal";
+import { PageIntro } from "@/components/ui/page-intro";
+import { getDb } from "@/db/client";
+import { requirePageUser } from "@/lib/auth/page-user";
+import { auditQuerySchema, listAuditEvents } from "@/lib/audit/queries";
+
+export const metadata: Metadata = { title: "Audit log · Counter", robots: { index: false } };
+
+export default async function AuditPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+  const access = await requirePageUser("/counter/audit", "admin");
+  if (!access.allowed) return <CounterRefusal user={access.user} needed="admin" />;
+  const query = auditQuerySchema.parse(await searchParams);
+  const listing = await listAuditEvents(await getDb(), query);
+  return (
+    <section>
+      <PageIntro eyebrow="Counter · Admin" title="Audit log">
+        <p>Who changed what and when: prices and quantities, items added or retired, catalog imports and role changes.</p>
+      </PageIntro>
+      <AuditLog listing={listing} query={query} />
+    </section>
+  );
+}
