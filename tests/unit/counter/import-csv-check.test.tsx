@@ -1,0 +1,53 @@
+// @vitest-environment jsdom
+import { describe, expect, it } from "vitest";
+import { checkCsvFile, fileRefusal, LISTED_PROBLEM_COUNT, type CsvCheck } from "@/components/counter/import-csv-check";
+import { catalogCsv, csvFile } from "./import-csv-fixtures";
+
+describe("checking a catalog CSV in the browser", () => {
+  it("refuses a file that is not a CSV, one over 5 MB and an empty one, saying what to do", () => {
+    expect(fileRefusal(new File(["x"], "stock.xlsx", { type: "application/vnd.ms-excel" }))).toMatch(/not a CSV file\. Save the sheet as CSV/);
+    const big = new File(["x"], "big.csv", { type: "text/csv" });
+    Object.defineProperty(big, "size", { value: 6 * 1024 * 1024 });
+    expect(fileRefusal(big)).toMatch(/6\.0 MB; the limit is 5 MB\. Split it/);
+    expect(fileRefusal(new File([""], "empty.csv"))).toMatch(/is empty/);
+    expect(fileRefusal(csvFile(catalogCsv(1)))).toBeNull();
+  });
+
+  it("reads a large file in chunks, reporting growing progress, and counts valid rows and problems", async () => {
+    const updates: CsvCheck[] = [];
+    const text = catalogCsv(3000, { badLines: [5, 2500] });
+    const check = await checkCsvFile(csvFile(text), (update) => updates.push(update));
+    expect(updates.length).toBeGreaterThan(2);
+    const fractions = updates.map((update) => update.fraction);
+    expect(fractions).toEqual([...fractions].sort((a, b) => a - b));
+    expect(updates[0]!.done).toBe(false);
+    expect(check).toMatchObject({ done: true, fraction: 1, rowsRead: 3000, validRows: 2998, problemRows: 2, problemCount: 2 });
+    expect(check.previewRows).toHaveLength(10);
+    expect(check.fields[0]).toBe("sku");
+    // Load index 0–279 is the span of the ISO 4000-1 load-index table.
+    expect(check.problems[0]).toMatchObject({ line: 5, column: "load_index" });
+    expect(check.problems[0]!.reason).toMatch(/999/);
+  });
+
+  it("lists at most the first problems but counts them all", async () => {
+    const badLines = Array.from({ length: 30 }, (_, index) => index + 2);
+    const check = await checkCsvFile(csvFile(catalogCsv(40, { badLines })), () => {});
+    expect(check.problems).toHaveLength(LISTED_PROBLEM_COUNT);
+    expect(check.problemCount).toBe(30);
+  });
+
+  it("reads headers in any letter case and skips blank lines without losing line numbers", async () => {
+    const text = catalogCsv(4, { badLines: [4] }).replace(/^[^\n]*/, (header) => header.toUpperCase().replaceAll("_", " ")).replace("\n", "\n\n");
+    const check = await checkCsvFile(csvFile(text), () => {});
+    expect(check.rowsRead).toBe(4);
+    expect(check.problems.map((problem) => problem.line)).toEqual([5]);
+  });
+
+  it("stops at a header without the required columns and names each missing one", async () => {
+    const check = await checkCsvFile(csvFile("sku,brand\nA-1,Quensal\n"), () => {});
+    expect(check.headerRefused).toBe(true);
+    expect(check.rowsRead).toBe(0);
+    expect(check.problems.map((problem) => problem.column)).toContain("size");
+    expect(check.problems.every((problem) => problem.line === 1)).toBe(true);
+  });
+});
