@@ -1,0 +1,50 @@
+"use client";
+
+import { useState, type FormEvent } from "react";
+import { fieldErrors, type FieldErrors } from "@/lib/auth/form-schemas";
+import { RESET_LINK_LIFETIME_SECONDS } from "@/lib/email/password-reset-email";
+import { forgotPasswordSchema } from "./password-reset-schemas";
+import { postAuth } from "./post-auth";
+import { TextField } from "./text-field";
+
+/** Asks for a reset link. The answer is the same whether or not an account uses the address. */
+export function ForgotPasswordForm() {
+  const [errors, setErrors] = useState<FieldErrors>({});
+  const [busy, setBusy] = useState(false);
+  const [sentTo, setSentTo] = useState<string | null>(null);
+
+  async function submit(event: FormEvent<HTMLFormElement>) {
+    event.preventDefault();
+    const parsed = forgotPasswordSchema.safeParse(Object.fromEntries(new FormData(event.currentTarget)));
+    if (!parsed.success) {
+      setErrors(fieldErrors(parsed.error));
+      return;
+    }
+    setErrors({});
+    setBusy(true);
+    const result = await postAuth("request-password-reset", { email: parsed.data.email, redirectTo: "/reset-password" });
+    setBusy(false);
+    if (result.ok) setSentTo(parsed.data.email);
+    else setErrors({ form: result.message });
+  }
+
+  return (
+    <form noValidate onSubmit={submit} className="flex max-w-md flex-col gap-4">
+      <TextField name="email" label="E-mail" type="email" autoComplete="email" required error={errors.email} />
+      <div role="status" className={sentTo ? "rounded border border-accent bg-accent-soft px-4 py-3" : undefined}>
+        {sentTo ? (
+          <>
+            <p className="font-semibold">If an account uses {sentTo}, we&apos;ve sent a link to it.</p>
+            <p className="mt-1">The link works for {RESET_LINK_LIFETIME_SECONDS / 60} minutes. Nothing there? Check the spam folder, or the address, and ask again.</p>
+          </>
+        ) : null}
+      </div>
+      <div role="alert" className="min-h-6 text-danger">
+        {errors.form ?? ""}
+      </div>
+      <button type="submit" disabled={busy} className="min-h-11 rounded bg-accent px-4 font-semibold text-sheet disabled:opacity-60">
+        {busy ? "Please wait…" : sentTo ? "Send the link again" : "Send me a link"}
+      </button>
+    </form>
+  );
+}

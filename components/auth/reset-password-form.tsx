@@ -1,0 +1,66 @@
+"use client";
+
+import Link from "next/link";
+import { useRouter } from "next/navigation";
+import { useState, type FormEvent } from "react";
+import { fieldErrors, type FieldErrors } from "@/lib/auth/form-schemas";
+import { resetPasswordSchema } from "./password-reset-schemas";
+import { postAuth } from "./post-auth";
+import { TextField } from "./text-field";
+
+/** Sets a new password with the token from a reset link, then sends the person to sign in with it. */
+export function ResetPasswordForm({ token }: { token: string }) {
+  const router = useRouter();
+  const [errors, setErrors] = useState<FieldErrors>({});
+  const [busy, setBusy] = useState(false);
+  const [linkRefused, setLinkRefused] = useState(false);
+
+  async function submit(event: FormEvent<HTMLFormElement>) {
+    event.preventDefault();
+    const parsed = resetPasswordSchema.safeParse(Object.fromEntries(new FormData(event.currentTarget)));
+    if (!parsed.success) {
+      setErrors(fieldErrors(parsed.error));
+      return;
+    }
+    setErrors({});
+    setBusy(true);
+    const result = await postAuth("reset-password", { newPassword: parsed.data.newPassword, token });
+    if (result.ok) {
+      router.push("/sign-in?reset=done");
+      return;
+    }
+    setBusy(false);
+    if (result.code === "INVALID_TOKEN") setLinkRefused(true);
+    else setErrors({ form: result.message });
+  }
+
+  return (
+    <form noValidate onSubmit={submit} className="flex max-w-md flex-col gap-4">
+      <TextField
+        name="newPassword"
+        label="New password (at least 8 characters)"
+        type="password"
+        autoComplete="new-password"
+        required
+        error={errors.newPassword}
+      />
+      <TextField name="confirmPassword" label="New password again" type="password" autoComplete="new-password" required error={errors.confirmPassword} />
+      <div role="alert" className="min-h-6 text-danger">
+        {linkRefused ? (
+          <>
+            This link has expired or was already used.{" "}
+            <Link href="/forgot-password" className="inline-flex min-h-11 items-center font-semibold underline underline-offset-4">
+              Ask for a new link
+            </Link>
+            .
+          </>
+        ) : (
+          (errors.form ?? "")
+        )}
+      </div>
+      <button type="submit" disabled={busy} className="min-h-11 rounded bg-accent px-4 font-semibold text-sheet disabled:opacity-60">
+        {busy ? "Please wait…" : "Set the new password"}
+      </button>
+    </form>
+  );
+}
