@@ -1,0 +1,31 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { connection } from "next/server";
+import { getDb } from "@/db/client";
+import { CounterRefusal } from "@/components/counter/counter-refusal";
+import { ItemForm } from "@/components/counter/item-form";
+import { PageIntro } from "@/components/ui/page-intro";
+import { requirePageUser } from "@/lib/auth/page-user";
+import { listBrandsWithLines } from "@/lib/counter/queries";
+
+export const metadata: Metadata = { title: "Counter · New item", robots: { index: false } };
+
+const EMPTY = { sku: "", brand: "", line: "", designation: "", loadIndex: "", loadIndexDual: "", speedSymbol: "", loadRange: "", extraLoad: false, priceCents: "", quantity: "0" };
+
+export default async function NewItemPage() {
+  const access = await requirePageUser("/counter/items/new", "staff");
+  if (!access.allowed) return <CounterRefusal user={access.user} needed="staff" />;
+  await connection();
+  const brands = await listBrandsWithLines(await getDb());
+  return (
+    <section>
+      <Link href="/counter" prefetch={false} className="inline-flex min-h-11 items-center font-semibold text-accent underline underline-offset-4">
+        ← Back to the catalog
+      </Link>
+      <PageIntro eyebrow="Counter · catalog" title="Add an item">
+        <p>A size of a line the catalog already has. The size is read by the tire core as you type.</p>
+      </PageIntro>
+      <ItemForm brands={brands} initial={EMPTY} />
+    </section>
+  );
+}

@@ -1,0 +1,46 @@
+/** "189.99", "$189", "1,250.5" → whole cents; null when the text is not an amount of dollars. */
+export function parseDollars(text: string): number | null {
+  const match = /^\$?\s*(\d{1,8})(?:\.(\d{0,2}))?$/.exec(text.trim().replace(/,/g, ""));
+  if (!match) return null;
+  return Number(match[1]) * 100 + Number((match[2] ?? "").padEnd(2, "0"));
+}
+
+/** Cents as the price inputs show them: 18999 → "189.99". */
+export const dollarsText = (cents: number): string => (cents / 100).toFixed(2);
+
+/** A count or an index typed as digits only; null for anything else. */
+export function parseWholeNumber(text: string): number | null {
+  return /^\d{1,9}$/.test(text.trim()) ? Number(text.trim()) : null;
+}
+
+export type CatalogWriteResult = { ok: true } | { ok: false; field: string | null; message: string };
+
+/**
+ * Sends a write to the catalog API and reads its refusal: which field it blames (from
+ * `The field "loadIndex" is invalid: …`) and the message to show.
+ */
+export async function sendCatalogWrite(method: "POST" | "PATCH" | "DELETE", path: string, body?: unknown): Promise<CatalogWriteResult> {
+  let response: Response;
+  try {
+    response = await fetch(path, {
+      method,
+      headers: body === undefined ? undefined : { "content-type": "application/json" },
+      body: body === undefined ? undefined : JSON.stringify(body),
+    });
+  } catch {
+    return { ok: false, field: null, message: "The shop's server could not be reached. Check the connection and try again." };
+  }
+  if (response.ok) return { ok: true };
+  const refusal = (await response.json().catch(() => null)) as { error?: { code?: string; message?: string } } | null;
+  const message = refusal?.error?.message ?? `The server answered ${response.status}. Try again.`;
+  const named = /^The field "(\w+)"/.exec(message)?.[1] ?? null;
+  const field = named ?? ({ unknown_line: "line", already_exists: "sku" } as Record<string, string>)[refusal?.error?.code ?? ""] ?? null;
+  return { ok: false, field, message };
+}
+
+/** The item form's fields, named as the catalog API names them (the price is typed in dollars). */
+export const ITEM_FIELDS = ["sku", "brand", "line", "designation", "loadIndex", "loadIndexDual", "speedSymbol", "loadRange", "extraLoad", "priceCents", "quantity"] as const;
+export type ItemField = (typeof ITEM_FIELDS)[number];
+
+export type ItemFormValues = Record<Exclude<ItemField, "extraLoad">, string> & { extraLoad: boolean };
+export type ItemFormErrors = Partial<Record<ItemField | "form", string>>;
