@@ -1,6 +1,6 @@
 import Papa from "papaparse";
-import { normalizeHeaderName, REQUIRED_CATALOG_CSV_COLUMNS, type CatalogCsvRecord, type CsvRefusal } from "@/lib/catalog-csv/columns";
-import { readCsvRow } from "@/lib/catalog-csv/read-row";
+import type { CsvRefusal } from "@/lib/catalog-csv/columns";
+import { readCatalogCsv } from "@/lib/catalog-csv/read-file";
 
 export const CSV_LIMIT_BYTES = 5 * 1024 * 1024;
 export const PREVIEW_ROW_COUNT = 10;
@@ -9,6 +9,7 @@ const CHUNK_CHARACTERS = 64 * 1024;
 
 /** What the browser has found in a CSV so far; `done` once the whole file has been read. */
 export interface CsvCheck {
+  /** The header cells as the file writes them. */
   fields: string[];
   previewRows: string[][];
   rowsRead: number;
@@ -17,6 +18,8 @@ export interface CsvCheck {
   /** The first problems found, at most LISTED_PROBLEM_COUNT of them. */
   problems: CsvRefusal[];
   problemCount: number;
+  /** Set when the file cannot be read as a catalog CSV at all: what is wrong and what to do. */
+  unreadable: string | null;
   /** True when the header row itself is wrong: no row can be read until it is fixed. */
   headerRefused: boolean;
   fraction: number;
@@ -38,21 +41,6 @@ export function fileRefusal(file: File): string | null {
   return null;
 }
 
-function checkCsvHeader(fields: readonly string[]): CsvRefusal[] {
-  return REQUIRED_CATALOG_CSV_COLUMNS.filter((column) => !fields.includes(column)).map((column) => ({
-    line: 1,
-    column,
-    reason: `the header has no ${column} column; add it (see the columns and the template)`,
-  }));
-}
-
-const isBlank = (record: CatalogCsvRecord) =>
-  Object.values(record).every((value) => value === undefined || value === null || String(value).trim() === "");
-
-function emptyCheck(): CsvCheck {
-  return { fields: [], previewRows: [], rowsRead: 0, validRows: 0, problemRows: 0, problems: [], problemCount: 0, headerRefused: false, fraction: 0, done: false };
-}
-
 function noteProblems(check: CsvCheck, refusals: readonly CsvRefusal[]) {
   check.problemCount += refusals.length;
   const room = LISTED_PROBLEM_COUNT - check.problems.length;
@@ -60,60 +48,82 @@ function noteProblems(check: CsvCheck, refusals: readonly CsvRefusal[]) {
 }
 
 /**
- * Reads a CSV in chunks with the same row checks as the server, reporting after each chunk and
- * giving the page a turn to repaint in between. Line numbers count the header as line 1.
+ * Checks one batch of rows with the server's own file reader, as a small file under the same header,
+ * so the preview refuses exactly what the import will. Only a SKU repeated across batches needs
+ * noting here. `firstLine` is the file line of the batch's first row.
+ */
+function checkBatch(check: CsvCheck, header: string[], cells: string[][], firstLine: number, lineOfSku: Map<string, number>) {
+  const read = readCatalogCsv(Papa.unparse([header, ...cells], { newline: "\n" }));
+  if (!read.ok) return;
+  const shift = firstLine - 2;
+  const refusals = read.refusals.map((refusal) => ({ ...refusal, line: refusal.line + shift }));
+  for (const row of read.rows) {
+    const line = row.line + shift;
+    const earlier = lineOfSku.get(row.item.sku);
+    if (earlier === undefined) lineOfSku.set(row.item.sku, line);
+    else refusals.push({ line, column: "sku", reason: `SKU "${row.item.sku}" is already on line ${earlier} of this file; each SKU may appear once` });
+  }
+  const refusedRows = new Set(refusals.map((refusal) => refusal.line)).size;
+  check.rowsRead += read.rowCount;
+  check.problemRows += refusedRows;
+  check.validRows += read.rowCount - refusedRows;
+  noteProblems(check, refusals.sort((a, b) => a.line - b.line));
+}
+
+/**
+ * Reads a CSV in chunks, reporting after each one and giving the page a turn to repaint in between.
+ * Line numbers are those a spreadsheet shows, the header being line 1.
  */
 export async function checkCsvFile(file: File, onProgress: (check: CsvCheck) => void, signal?: AbortSignal): Promise<CsvCheck> {
   const text = await file.text();
-  const check = emptyCheck();
-  let recordIndex = 0;
+  const check: CsvCheck = {
+    fields: [], previewRows: [], rowsRead: 0, validRows: 0, problemRows: 0, problems: [], problemCount: 0,
+    unreadable: null, headerRefused: false, fraction: 0, done: false,
+  };
+  const lineOfSku = new Map<string, number>();
+  let nextLine = 1;
+  const snapshot = () => onProgress({ ...check, problems: [...check.problems], previewRows: [...check.previewRows] });
 
   return new Promise((resolve) => {
-    const finish = () => {
-      check.done = true;
-      check.fraction = 1;
-      onProgress({ ...check });
-      resolve(check);
-    };
-    Papa.parse<CatalogCsvRecord>(text, {
-      header: true,
-      transformHeader: normalizeHeaderName,
+    Papa.parse<string[]>(text, {
       delimiter: ",",
       chunkSize: CHUNK_CHARACTERS,
-      chunk(results: Papa.ParseResult<CatalogCsvRecord>, parser: Papa.Parser) {
-        if (check.fields.length === 0) {
-          check.fields = results.meta.fields ?? [];
-          const headerProblems = checkCsvHeader(check.fields);
-          if (headerProblems.length > 0) {
+      chunk(results: Papa.ParseResult<string[]>, parser: Papa.Parser) {
+        let cells = results.data;
+        if (nextLine === 1) {
+          check.fields = cells[0] ?? [];
+          cells = cells.slice(1);
+          nextLine = 2;
+          const header = readCatalogCsv(Papa.unparse([check.fields], { newline: "\n" }));
+          if (!header.ok) check.unreadable = header.message;
+          else if (header.headerRefused) {
             check.headerRefused = true;
-            noteProblems(check, headerProblems);
-            parser.abort();
-            return;
+            noteProblems(check, header.refusals);
           }
+          if (check.unreadable || check.headerRefused) return parser.abort();
         }
-        for (const record of results.data) {
-          const line = recordIndex + 2;
-          recordIndex += 1;
-          if (isBlank(record)) continue;
-          check.rowsRead += 1;
-          if (check.previewRows.length < PREVIEW_ROW_COUNT) check.previewRows.push(check.fields.map((field) => (record as Record<string, string | undefined>)[field] ?? ""));
-          const result = readCsvRow(record, line);
-          if (result.ok) check.validRows += 1;
-          else {
-            check.problemRows += 1;
-            noteProblems(check, result.refusals);
-          }
+        if (results.errors.some((error) => error.type === "Quotes")) {
+          check.unreadable = `A double quote (") opens a cell after line ${nextLine - 1} and never closes, so the file cannot be read to the end. Close the quote, or export the file again from the spreadsheet as CSV.`;
+          return parser.abort();
+        }
+        checkBatch(check, check.fields, cells, nextLine, lineOfSku);
+        nextLine += cells.length;
+        for (const row of cells) {
+          if (check.previewRows.length >= PREVIEW_ROW_COUNT) break;
+          if (row.some((cell) => cell.trim() !== "")) check.previewRows.push(row);
         }
         check.fraction = Math.min(1, results.meta.cursor / Math.max(1, text.length));
-        onProgress({ ...check, problems: [...check.problems], previewRows: [...check.previewRows] });
-        if (signal?.aborted) {
-          parser.abort();
-          return;
-        }
+        snapshot();
+        if (signal?.aborted) return parser.abort();
         parser.pause();
         setTimeout(() => parser.resume(), 0);
       },
-      complete: finish,
+      complete() {
+        check.done = true;
+        check.fraction = 1;
+        snapshot();
+        resolve(check);
+      },
     });
   });
 }

@@ -26,6 +26,7 @@ function uploadText(fraction: number | null): string {
 
 /** What stops the file from being imported as it stands, or null when the Import button may be used. */
 function blocker(check: CsvCheck): string | null {
+  if (check.unreadable) return check.unreadable;
   if (check.headerRefused) return "The header row is not right, so no row can be read. Fix the header (see the columns beside), then choose the file again.";
   if (check.rowsRead === 0) return "The file has no rows under its header. Add the stock items, one per row, then choose the file again.";
   return null;

@@ -50,4 +50,17 @@ describe("checking a catalog CSV in the browser", () => {
     expect(check.problems.map((problem) => problem.column)).toContain("size");
     expect(check.problems.every((problem) => problem.line === 1)).toBe(true);
   });
+
+  it("refuses a SKU repeated anywhere in the file, also across chunks, on its later line", async () => {
+    const text = `${catalogCsv(3000)}TST-00000,Quensal,Aldermoor Tour,225/65R17,102,,H,,no,159.00,8\n`;
+    const check = await checkCsvFile(csvFile(text), () => {});
+    expect(check.problems).toEqual([{ line: 3002, column: "sku", reason: 'SKU "TST-00000" is already on line 2 of this file; each SKU may appear once' }]);
+  });
+
+  it("says when a file is not a comma-separated CSV, and when a quote never closes", async () => {
+    const semicolons = await checkCsvFile(csvFile("sku;brand;line\nA;B;C\n"), () => {});
+    expect(semicolons.unreadable).toMatch(/separated by semicolons/);
+    const quote = await checkCsvFile(csvFile(`${catalogCsv(2)}"TST-9,Quensal\n`), () => {});
+    expect(quote.unreadable).toMatch(/never closes/);
+  });
 });
