@@ -1,4 +1,5 @@
-import { buildStockRow, type StockItemInput, type StockRowProblem } from "@/lib/catalog/stock-row";
+import type { NewStockItem } from "@/db/schema";
+import { buildStockRow, type StockItemInput, type StockLine, type StockRowProblem } from "@/lib/catalog/stock-row";
 import { isLoadRange, isSpeedSymbol, LOAD_INDEX_MAX, LOAD_INDEX_MIN } from "@/lib/tire";
 import type { CatalogCsvColumnName, CatalogCsvRecord, CsvRefusal } from "./columns";
 import { centsToDollars, dollarsToCents, MAX_PRICE_CENTS } from "./money";
@@ -10,8 +11,8 @@ export interface CatalogCsvRow {
   brand: string;
   tireLine: string;
   item: StockItemInput;
-  /** The size as the catalog stores it: "225/65r17" reads as "225/65R17". */
-  designation: string;
+  /** The row buildStockRow made from it, on a placeholder line: turn it into the real one with `onLine`. */
+  stockRow: NewStockItem;
 }
 
 export type CsvRowResult = { ok: true; row: CatalogCsvRow } | { ok: false; refusals: CsvRefusal[] };
@@ -29,7 +30,7 @@ const COLUMN_OF_FIELD: Record<keyof StockItemInput, CatalogCsvColumnName> = {
 };
 
 // Lines are checked against their brand when the file is imported; any line will do to check the tire itself.
-const PLACEHOLDER_LINE = { id: 0, runFlat: false };
+const PLACEHOLDER_LINE: StockLine = { id: 0, runFlat: false };
 const SKU = /^[!-~]{1,64}$/;
 const WHOLE = /^\d{1,10}$/;
 const AMOUNT_SHAPE = /^\$?\d+(\.\d{1,2})?$/;
@@ -104,7 +105,15 @@ export function readCsvRow(record: CatalogCsvRecord, line: number): CsvRowResult
   };
   const built = buildStockRow(item, PLACEHOLDER_LINE);
   if (!built.ok) return { ok: false, refusals: [{ line, column: COLUMN_OF_FIELD[built.problem.field], reason: explain(built.problem, item) }] };
-  return { ok: true, row: { line, brand, tireLine, item, designation: built.row.designation } };
+  return { ok: true, row: { line, brand, tireLine, item, stockRow: built.row } };
+}
+
+/**
+ * The row on its real line, without building it again: buildStockRow only takes the line's id and
+ * whether the line is run-flat (an item is run-flat when its size or its line is).
+ */
+export function onLine(row: CatalogCsvRow, line: StockLine): NewStockItem {
+  return { ...row.stockRow, lineId: line.id, runFlat: row.stockRow.runFlat || line.runFlat };
 }
 
 /** The write path's reason, with the value and an example where a person needs one to fix the cell. */

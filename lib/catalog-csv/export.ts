@@ -1,0 +1,38 @@
+import { sql } from "drizzle-orm";
+import type { Database } from "@/db/client";
+import { brand, stockItem, tireLine } from "@/db/schema";
+import { ofBrand, ofLine } from "@/lib/catalog/catalog-select";
+import { catalogFilterWhere, type CatalogFilters } from "@/lib/counter/catalog-filters";
+import { writeCatalogCsv } from "./write-file";
+
+/**
+ * The current items the Counter's filters select, as a catalog CSV in SKU order (plain character
+ * order, the same on every server). Sort and page are ignored: the export holds every match.
+ */
+export async function exportCatalogCsv(db: Database, filters: CatalogFilters): Promise<string> {
+  const items = await db
+    .select({
+      sku: stockItem.sku,
+      brand: brand.name,
+      line: tireLine.name,
+      designation: stockItem.designation,
+      loadIndex: stockItem.loadIndex,
+      loadIndexDual: stockItem.loadIndexDual,
+      speedSymbol: stockItem.speedSymbol,
+      loadRange: stockItem.loadRange,
+      extraLoad: stockItem.extraLoad,
+      priceCents: stockItem.priceCents,
+      quantityOnHand: stockItem.quantityOnHand,
+    })
+    .from(stockItem)
+    .innerJoin(tireLine, ofLine)
+    .innerJoin(brand, ofBrand)
+    .where(catalogFilterWhere(filters))
+    .orderBy(sql`${stockItem.sku} collate "C"`);
+  return writeCatalogCsv(items);
+}
+
+/** sidewise-catalog-2026-03-01.csv */
+export function exportFileName(today: Date): string {
+  return `sidewise-catalog-${today.toISOString().slice(0, 10)}.csv`;
+}

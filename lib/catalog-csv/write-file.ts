@@ -1,0 +1,46 @@
+import Papa from "papaparse";
+import { CATALOG_CSV_COLUMN_NAMES, type CatalogCsvColumnName } from "./columns";
+import { centsToDollars } from "./money";
+
+/** A catalog item as the CSV writes it. */
+export interface CatalogCsvItem {
+  sku: string;
+  brand: string;
+  line: string;
+  designation: string;
+  loadIndex: number;
+  loadIndexDual: number | null;
+  speedSymbol: string;
+  loadRange: string | null;
+  extraLoad: boolean;
+  priceCents: number;
+  quantityOnHand: number;
+}
+
+function cells(item: CatalogCsvItem): Record<CatalogCsvColumnName, string> {
+  return {
+    sku: item.sku,
+    brand: item.brand,
+    line: item.line,
+    size: item.designation,
+    load_index: String(item.loadIndex),
+    load_index_dual: item.loadIndexDual === null ? "" : String(item.loadIndexDual),
+    speed_symbol: item.speedSymbol,
+    load_range: item.loadRange ?? "",
+    extra_load: item.extraLoad ? "yes" : "no",
+    price: centsToDollars(item.priceCents),
+    quantity: String(item.quantityOnHand),
+  };
+}
+
+/**
+ * The catalog CSV for these items, in the column order of the template, with CRLF line ends as
+ * spreadsheets write them. A cell that starts like a formula gets an apostrophe in front, which the
+ * import takes off again, so the file re-imports unchanged.
+ */
+export function writeCatalogCsv(items: readonly CatalogCsvItem[]): string {
+  return Papa.unparse(
+    { fields: [...CATALOG_CSV_COLUMN_NAMES], data: items.map((item) => CATALOG_CSV_COLUMN_NAMES.map((column) => cells(item)[column])) },
+    { escapeFormulae: /^[=+\-@]/, newline: "\r\n" },
+  );
+}
