@@ -9,6 +9,7 @@ import {
   type CsvRefusal,
 } from "./columns";
 import { readCsvRow, type CatalogCsvRow } from "./read-row";
+import { EXPORT_AS_CSV } from "./upload";
 
 export type CatalogCsvFile =
   /** Not a CSV at all (binary, empty, no header row, another separator): `message` says what to do. */
@@ -19,7 +20,6 @@ export type CatalogCsvFile =
    */
   | { ok: true; rows: CatalogCsvRow[]; refusals: CsvRefusal[]; headerRefused: boolean; rowCount: number };
 
-const EXPORT_AS_CSV = "export one from your spreadsheet as CSV (comma-separated), or start from the template";
 const unreadable = (problem: string): CatalogCsvFile => ({ ok: false, message: `${problem}: ${EXPORT_AS_CSV}.` });
 
 /** NUL characters, or undecodable bytes, only turn up in pictures, workbooks and other binary files. */
