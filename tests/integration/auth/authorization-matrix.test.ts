@@ -40,6 +40,8 @@ const MATRIX: { file: string; method: string; path: string; body?: unknown; para
     file: "v1/catalog/[sku]/route.ts", method: "DELETE", path: "/api/v1/catalog/NO-SUCH-SKU", params: { sku: "NO-SUCH-SKU" },
     expected: { anonymous: 401, customer: 403, staff: 404, admin: 404 },
   },
+  { file: "v1/catalog/import/route.ts", method: "POST", path: "/api/v1/catalog/import", expected: { anonymous: 401, customer: 403, staff: 400, admin: 400 } },
+  { file: "v1/catalog/export/route.ts", method: "GET", path: "/api/v1/catalog/export", expected: { anonymous: 401, customer: 403, staff: 200, admin: 200 } },
 ];
 
 /**
