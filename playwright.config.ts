@@ -5,6 +5,9 @@ import { defineConfig, devices } from "@playwright/test";
 
 const port = Number(process.env.E2E_PORT ?? 3210);
 const baseURL = `http://localhost:${port}`;
+// The app's e-mail goes to a fake of the e-mail service; tests read its inbox at GET <url>/emails.
+const fakeResendUrl = `http://127.0.0.1:${Number(process.env.E2E_FAKE_RESEND_PORT ?? 3226)}`;
+process.env.E2E_FAKE_RESEND_URL = fakeResendUrl;
 
 function findChromium(): string {
   const candidates = [process.env.CHROMIUM_PATH, "/usr/bin/chromium", "/usr/bin/chromium-browser"].filter(
@@ -52,18 +55,29 @@ export default defineConfig({
     { name: "phone", use: { ...devices["Pixel 7"], viewport: { width: 360, height: 780 }, defaultBrowserType: "chromium" } },
     { name: "desktop", use: { ...devices["Desktop Chrome"], viewport: { width: 1280, height: 900 } } },
   ],
-  webServer: {
-    command: `npm run build && node node_modules/next/dist/bin/next start -p ${port}`,
-    url: `${baseURL}/api/health`,
-    timeout: 300_000,
-    reuseExistingServer: !process.env.CI,
-    stdout: "pipe",
-    env: {
-      PGLITE_DATA_DIR: e2eDataDir,
-      DATABASE_URL: "",
-      DEMO_SEED: "on",
-      BETTER_AUTH_URL: baseURL,
-      NEXT_TELEMETRY_DISABLED: "1",
+  webServer: [
+    {
+      command: "node scripts/fake-resend.mjs",
+      url: `${fakeResendUrl}/emails`,
+      reuseExistingServer: !process.env.CI,
+      env: { FAKE_RESEND_PORT: new URL(fakeResendUrl).port },
     },
-  },
+    {
+      command: `npm run build && node node_modules/next/dist/bin/next start -p ${port}`,
+      url: `${baseURL}/api/health`,
+      timeout: 300_000,
+      reuseExistingServer: !process.env.CI,
+      stdout: "pipe",
+      env: {
+        PGLITE_DATA_DIR: e2eDataDir,
+        DATABASE_URL: "",
+        DEMO_SEED: "on",
+        BETTER_AUTH_URL: baseURL,
+        NEXT_TELEMETRY_DISABLED: "1",
+        RESEND_BASE_URL: fakeResendUrl,
+        RESEND_API_KEY: "",
+        EMAIL_FROM: "",
+      },
+    },
+  ],
 });
