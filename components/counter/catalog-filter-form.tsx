@@ -68,7 +68,7 @@ export function CatalogFilterForm({ filters, brands }: { filters: CatalogFilters
       {filters.sort !== "sku" ? <input type="hidden" name="sort" value={filters.sort} /> : null}
       {filters.dir !== "asc" ? <input type="hidden" name="dir" value={filters.dir} /> : null}
       <div className="flex items-end gap-4 sm:col-span-2 lg:col-span-1">
-        <button type="submit" className="min-h-11 rounded bg-accent px-4 font-semibold text-sheet hover:opacity-90">
+        <button type="submit" className="min-h-11 rounded bg-accent px-4 font-semibold whitespace-nowrap text-sheet hover:opacity-90">
           Show items
         </button>
         <Link href="/counter" prefetch={false} className="inline-flex min-h-11 items-center font-semibold text-accent underline underline-offset-4">

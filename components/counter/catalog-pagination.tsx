@@ -2,7 +2,7 @@ import Link from "next/link";
 import type { CatalogFilters } from "@/lib/counter/catalog-filters";
 import { catalogQueryString } from "@/lib/counter/catalog-table";
 
-const linkClass = "inline-flex min-h-11 min-w-11 items-center justify-center rounded border border-rule bg-sheet px-3 font-semibold";
+const linkClass = "inline-flex min-h-11 min-w-11 items-center justify-center rounded border px-3 font-semibold";
 
 /** Page numbers to offer: the first, the last, and two either side of the current one. */
 export function pagesAround(page: number, pageCount: number): (number | "gap")[] {
@@ -20,11 +20,11 @@ export function CatalogPagination({ filters, pageCount }: { filters: CatalogFilt
       <ul className="flex flex-wrap items-center gap-2">
         <li>
           {page > 1 ? (
-            <Link href={href(page - 1)} prefetch={false} className={`${linkClass} text-accent`}>
+            <Link href={href(page - 1)} prefetch={false} className={`${linkClass} border-rule bg-sheet text-accent`}>
               Previous
             </Link>
           ) : (
-            <span className={`${linkClass} text-ink-soft`} aria-disabled="true">Previous</span>
+            <span className={`${linkClass} border-rule text-ink-soft`} aria-disabled="true">Previous</span>
           )}
         </li>
         {pagesAround(page, pageCount).map((n, index) =>
@@ -35,7 +35,7 @@ export function CatalogPagination({ filters, pageCount }: { filters: CatalogFilt
           ) : (
             <li key={n}>
               <Link href={href(n)} prefetch={false} aria-current={n === page ? "page" : undefined} aria-label={`Page ${n}`}
-                className={`${linkClass} ${n === page ? "border-accent bg-accent text-sheet" : "text-accent"}`}>
+                className={`${linkClass} ${n === page ? "border-accent bg-accent text-sheet" : "border-rule bg-sheet text-accent"}`}>
                 {n}
               </Link>
             </li>
@@ -43,11 +43,11 @@ export function CatalogPagination({ filters, pageCount }: { filters: CatalogFilt
         )}
         <li>
           {page < pageCount ? (
-            <Link href={href(page + 1)} prefetch={false} className={`${linkClass} text-accent`}>
+            <Link href={href(page + 1)} prefetch={false} className={`${linkClass} border-rule bg-sheet text-accent`}>
               Next
             </Link>
           ) : (
-            <span className={`${linkClass} text-ink-soft`} aria-disabled="true">Next</span>
+            <span className={`${linkClass} border-rule text-ink-soft`} aria-disabled="true">Next</span>
           )}
         </li>
       </ul>

@@ -9,17 +9,17 @@ interface Column {
   numeric?: boolean;
 }
 
+// Price and quantity come early, so that a phone shows them without scrolling sideways.
 const COLUMNS: Column[] = [
   { label: "SKU", sort: "sku" },
-  { label: "Brand and line", sort: "brand" },
   { label: "Size", sort: "size" },
+  { label: "Price", sort: "price", numeric: true },
+  { label: "Quantity", sort: "quantity", numeric: true },
   { label: "Load index", sort: "loadIndex", numeric: true },
   { label: "Speed", sort: "speed" },
   { label: "Load range / XL" },
+  { label: "Brand and line", sort: "brand" },
   { label: "Season · terrain" },
-  { label: "Price", sort: "price", numeric: true },
-  { label: "Quantity", sort: "quantity", numeric: true },
-  { label: "Item" },
 ];
 
 function SortHeader({ column, filters }: { column: Column; filters: CatalogFilters }) {
@@ -45,7 +45,7 @@ function loadRangeText(row: CatalogTableRow): string {
   return row.extraLoad ? "XL" : "Standard load";
 }
 
-/** One page of catalog items; price and quantity change in place, the rest in the item's form. */
+/** One page of catalog items; price and quantity change in place, the rest in the item's form (its SKU links there). */
 export function CatalogTable({ rows, filters }: { rows: CatalogTableRow[]; filters: CatalogFilters }) {
   return (
     <div role="region" aria-label="Catalog items (scrolls sideways on narrow screens)" tabIndex={0} className="overflow-x-auto rounded border border-rule bg-sheet">
@@ -60,32 +60,30 @@ export function CatalogTable({ rows, filters }: { rows: CatalogTableRow[]; filte
         <tbody>
           {rows.map((row) => (
             <tr key={row.sku} data-sku={row.sku} className="border-b border-grid align-top last:border-b-0">
-              <th scope="row" className="px-3 py-2 text-left font-mono font-normal break-all">
-                {row.sku}
+              <th scope="row" className="px-1 py-1 text-left font-normal">
+                <Link href={`/counter/items/${encodeURIComponent(row.sku)}`} prefetch={false} className="inline-flex min-h-11 items-center px-2 font-mono whitespace-nowrap text-accent underline underline-offset-4">
+                  <span className="sr-only">Edit </span>
+                  {row.sku}
+                </Link>
               </th>
-              <td className="px-3 py-2">
-                <span className="font-semibold">{row.brand}</span> {row.line}
-              </td>
-              <td className="px-3 py-2 font-mono whitespace-nowrap">{row.designation}</td>
-              <td className="px-3 py-2 text-right font-mono">
-                {row.loadIndex}
-                {row.loadIndexDual === null ? "" : `/${row.loadIndexDual}`}
-              </td>
-              <td className="px-3 py-2 font-mono">{row.speedSymbol}</td>
-              <td className="px-3 py-2">{loadRangeText(row)}</td>
-              <td className="px-3 py-2">
-                {row.season} · {row.terrain}
-              </td>
+              <td className="px-3 py-3 font-mono whitespace-nowrap">{row.designation}</td>
               <td className="px-3 py-1">
                 <CatalogInlineEdit sku={row.sku} field="priceCents" value={row.priceCents} label={`Price of ${row.sku} in dollars`} />
               </td>
               <td className="px-3 py-1">
                 <CatalogInlineEdit sku={row.sku} field="quantity" value={row.quantity} label={`Quantity of ${row.sku} on hand`} />
               </td>
-              <td className="px-3 py-1">
-                <Link href={`/counter/items/${encodeURIComponent(row.sku)}`} prefetch={false} className="inline-flex min-h-11 items-center font-semibold text-accent underline underline-offset-4">
-                  Edit<span className="sr-only"> {row.sku}</span>
-                </Link>
+              <td className="px-3 py-3 text-right font-mono">
+                {row.loadIndex}
+                {row.loadIndexDual === null ? "" : `/${row.loadIndexDual}`}
+              </td>
+              <td className="px-3 py-3 font-mono">{row.speedSymbol}</td>
+              <td className="px-3 py-3">{loadRangeText(row)}</td>
+              <td className="px-3 py-3">
+                <span className="font-semibold">{row.brand}</span> {row.line}
+              </td>
+              <td className="px-3 py-3">
+                {row.season} · {row.terrain}
               </td>
             </tr>
           ))}
