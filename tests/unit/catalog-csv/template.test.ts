@@ -1,0 +1,30 @@
+import { readFileSync } from "node:fs";
+import path from "node:path";
+import { describe, expect, it } from "vitest";
+import { DEMO_BRANDS } from "@/db/seed/catalog-lines";
+import { CATALOG_CSV_COLUMN_NAMES, CATALOG_CSV_COLUMNS } from "@/lib/catalog-csv/columns";
+import { readCatalogCsv } from "@/lib/catalog-csv/read-file";
+import { readCsvRow } from "@/lib/catalog-csv/read-row";
+
+const template = readFileSync(path.join(process.cwd(), "public", "downloads", "sidewise-catalog-template.csv"), "utf8");
+
+describe("the catalog CSV template", () => {
+  it("has the column list as its header", () => {
+    expect(template.split(/\r?\n/)[0]).toBe(CATALOG_CSV_COLUMN_NAMES.join(","));
+  });
+
+  it("has example rows that read without refusal, in lines the demo catalog has", () => {
+    const read = readCatalogCsv(template);
+    if (!read.ok) throw new Error(read.message);
+    expect(read.refusals).toEqual([]);
+    expect(read.rows.length).toBeGreaterThanOrEqual(2);
+    const demoLines = new Set(DEMO_BRANDS.flatMap((brand) => brand.lines.map(([line]) => `${brand.name}/${line}`)));
+    for (const row of read.rows) expect(demoLines.has(`${row.brand}/${row.tireLine}`), `${row.brand} ${row.tireLine}`).toBe(true);
+  });
+
+  it("describes every column with an example that reads", () => {
+    const example = Object.fromEntries(CATALOG_CSV_COLUMNS.map((column) => [column.name, column.example]));
+    expect(readCsvRow(example, 2)).toMatchObject({ ok: true });
+    expect(CATALOG_CSV_COLUMNS.every((column) => column.meaning.length > 10)).toBe(true);
+  });
+});
