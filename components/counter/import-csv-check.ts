@@ -1,8 +1,8 @@
 import Papa from "papaparse";
 import type { CsvRefusal } from "@/lib/catalog-csv/columns";
 import { readCatalogCsv } from "@/lib/catalog-csv/read-file";
+import { MAX_IMPORT_BYTES, MAX_IMPORT_SIZE_TEXT, notCsvFileMessage } from "@/lib/catalog-csv/upload";
 
-export const CSV_LIMIT_BYTES = 5 * 1024 * 1024;
 export const PREVIEW_ROW_COUNT = 10;
 export const LISTED_PROBLEM_COUNT = 20;
 const CHUNK_CHARACTERS = 64 * 1024;
@@ -28,16 +28,14 @@ export interface CsvCheck {
 
 const megabytes = (bytes: number) => (bytes / (1024 * 1024)).toFixed(1);
 
-/** Why a chosen file cannot be imported at all, or null when it may be read. */
+/** Why a chosen file cannot be imported at all, by the import's own rules, or null when it may be read. */
 export function fileRefusal(file: File): string | null {
-  const looksLikeCsv = /\.csv$/i.test(file.name) || file.type === "text/csv";
-  if (!looksLikeCsv) {
-    return `“${file.name}” is not a CSV file. Save the sheet as CSV (comma-separated values) and choose that file.`;
+  const notCsv = notCsvFileMessage(file);
+  if (notCsv) return notCsv;
+  if (file.size > MAX_IMPORT_BYTES) {
+    return `"${file.name}" is ${megabytes(file.size)} MB; the limit is ${MAX_IMPORT_SIZE_TEXT}. Split it into smaller CSV files and import them one by one.`;
   }
-  if (file.size > CSV_LIMIT_BYTES) {
-    return `“${file.name}” is ${megabytes(file.size)} MB; the limit is 5 MB. Split it into smaller CSV files and import them one by one.`;
-  }
-  if (file.size === 0) return `“${file.name}” is empty. Choose a CSV with a header row and at least one row.`;
+  if (file.size === 0) return `"${file.name}" is empty. Choose a CSV with a header row and at least one row.`;
   return null;
 }
 

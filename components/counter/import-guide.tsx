@@ -24,7 +24,6 @@ export function ImportGuide() {
             <tr className="border-b border-rule">
               <th scope="col" className="px-3 py-2 font-semibold">Column</th>
               <th scope="col" className="px-3 py-2 font-semibold">What it holds</th>
-              <th scope="col" className="px-3 py-2 font-semibold">Example</th>
             </tr>
           </thead>
           <tbody>
@@ -34,8 +33,10 @@ export function ImportGuide() {
                   {column.name}
                   <span className="block font-sans text-xs font-normal text-ink-soft">{column.required ? "required" : "optional"}</span>
                 </th>
-                <td className="px-3 py-2">{column.meaning}</td>
-                <td className="px-3 py-2 font-mono whitespace-nowrap">{column.example || "(empty)"}</td>
+                <td className="px-3 py-2">
+                  {column.meaning}
+                  {column.example ? <span className="mt-1 block text-ink-soft">Example: <span className="font-mono text-ink">{column.example}</span></span> : null}
+                </td>
               </tr>
             ))}
           </tbody>

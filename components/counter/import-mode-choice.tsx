@@ -1,4 +1,4 @@
-import type { ImportMode } from "./import-upload";
+import type { ImportMode } from "@/lib/catalog-csv/import-report";
 
 const choices: { mode: ImportMode; label: string; detail: string }[] = [
   { mode: "all-or-nothing", label: "All or nothing (recommended)", detail: "If any row is refused, nothing is written." },

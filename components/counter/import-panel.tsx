@@ -1,6 +1,7 @@
 "use client";
 
 import { useEffect, useRef, useState } from "react";
+import type { ImportMode } from "@/lib/catalog-csv/import-report";
 import { formatInteger } from "@/lib/tire";
 import { checkCsvFile, fileRefusal, type CsvCheck } from "./import-csv-check";
 import { ImportDropZone } from "./import-drop-zone";
@@ -8,7 +9,7 @@ import { ImportModeChoice } from "./import-mode-choice";
 import { ImportPreview } from "./import-preview";
 import { ImportProgress } from "./import-progress";
 import { ImportReport } from "./import-report";
-import { uploadCatalogCsv, type ImportMode, type ImportReport as Report } from "./import-upload";
+import { uploadCatalogCsv, type ImportReport as Report } from "./import-upload";
 
 type Upload = { state: "idle" } | { state: "sending"; fraction: number | null } | { state: "failed"; message: string };
 

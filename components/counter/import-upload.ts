@@ -1,7 +1,5 @@
 import { z } from "zod";
-
-export const IMPORT_MODES = ["all-or-nothing", "valid-rows"] as const;
-export type ImportMode = (typeof IMPORT_MODES)[number];
+import type { ImportMode } from "@/lib/catalog-csv/import-report";
 
 const importReportSchema = z.object({
   added: z.number().int().min(0),

@@ -15,7 +15,7 @@ export default async function CounterImportPage() {
       <PageIntro eyebrow="Counter" title="Import & export">
         <p>Add or update many stock items at once from a CSV file. The file is read and checked here first; nothing is written until you press Import.</p>
       </PageIntro>
-      <div className="grid gap-10 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+      <div className="grid grid-cols-1 gap-10 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
         <ImportPanel />
         <ImportGuide />
       </div>

@@ -5,7 +5,8 @@ import { catalogCsv, csvFile } from "./import-csv-fixtures";
 
 describe("checking a catalog CSV in the browser", () => {
   it("refuses a file that is not a CSV, one over 5 MB and an empty one, saying what to do", () => {
-    expect(fileRefusal(new File(["x"], "stock.xlsx", { type: "application/vnd.ms-excel" }))).toMatch(/not a CSV file\. Save the sheet as CSV/);
+    expect(fileRefusal(new File(["x"], "stock.xlsx"))).toMatch(/is a spreadsheet workbook, not a CSV file: export one from your spreadsheet as CSV/);
+    expect(fileRefusal(new File(["x"], "scan.png", { type: "image/png" }))).toMatch(/is a picture, not a CSV file/);
     const big = new File(["x"], "big.csv", { type: "text/csv" });
     Object.defineProperty(big, "size", { value: 6 * 1024 * 1024 });
     expect(fileRefusal(big)).toMatch(/6\.0 MB; the limit is 5 MB\. Split it/);

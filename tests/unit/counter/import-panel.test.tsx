@@ -50,7 +50,7 @@ describe("the import panel", () => {
   it("refuses a file that is not a CSV at once, with what to do", () => {
     render(<ImportPanel />);
     choose(new File(["a"], "stock.xlsx", { type: "application/octet-stream" }));
-    expect(screen.getByRole("alert").textContent).toMatch(/“stock.xlsx” is not a CSV file/);
+    expect(screen.getByRole("alert").textContent).toMatch(/"stock.xlsx" is a spreadsheet workbook, not a CSV file/);
     expect(screen.getByLabelText(/choose a file/).getAttribute("aria-invalid")).toBe("true");
     expect(screen.queryByRole("progressbar")).toBeNull();
   });
