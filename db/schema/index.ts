@@ -2,3 +2,4 @@ export * from "./shop";
 export * from "./catalog";
 export * from "./auth";
 export * from "./audit";
+export * from "./fit-cards";

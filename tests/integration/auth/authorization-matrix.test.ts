@@ -23,6 +23,7 @@ const PUBLIC_ROUTE_FILES = [
   "v1/catalog/route.ts#GET",
   "v1/compare/route.ts",
   "v1/decode/route.ts",
+  "v1/fit-cards/[slug]/route.ts#GET",
   "v1/plus/route.ts",
 ];
 
@@ -31,6 +32,11 @@ const PUBLIC_ROUTE_FILES = [
  * body, an unknown SKU): the status an allowed caller gets shows the request went past the guard.
  */
 const MATRIX: { file: string; method: string; path: string; body?: unknown; params?: Record<string, string>; expected: Record<Who, number> }[] = [
+  { file: "v1/fit-cards/route.ts", method: "POST", path: "/api/v1/fit-cards", body: {}, expected: { anonymous: 401, customer: 400, staff: 400, admin: 400 } },
+  {
+    file: "v1/fit-cards/[slug]/route.ts", method: "DELETE", path: `/api/v1/fit-cards/${"N".repeat(24)}`, params: { slug: "N".repeat(24) },
+    expected: { anonymous: 401, customer: 404, staff: 404, admin: 404 },
+  },
   { file: "v1/catalog/route.ts", method: "POST", path: "/api/v1/catalog", body: {}, expected: { anonymous: 401, customer: 403, staff: 400, admin: 400 } },
   {
     file: "v1/catalog/[sku]/route.ts", method: "PATCH", path: "/api/v1/catalog/NO-SUCH-SKU", params: { sku: "NO-SUCH-SKU" }, body: { priceCents: 100 },

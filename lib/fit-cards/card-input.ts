@@ -1,0 +1,30 @@
+import { z } from "zod";
+import { LOAD_RANGES } from "@/lib/tire";
+import { MAX_COMPARED_SIZES } from "@/lib/compare/read-sizes";
+import { FIT_CARD_SLUG_PATTERN } from "./slug";
+
+export const MAX_CARD_TIRES = 6;
+export const MAX_NOTE_LENGTH = 1000;
+
+/**
+ * POST /api/v1/fit-cards. Sizes, load index and speed symbol are checked for form here and read
+ * by the tire core when the card is made (unreadable → 422).
+ */
+export const newFitCardSchema = z
+  .object({
+    sizes: z.array(z.string().trim().min(1).max(40)).min(1).max(MAX_COMPARED_SIZES),
+    skus: z.array(z.string().regex(/^[!-~]{1,64}$/)).max(MAX_CARD_TIRES).default([]),
+    loadIndex: z.number().int().min(0).max(279),
+    speedSymbol: z.string().trim().min(1).max(3),
+    loadRange: z.enum(LOAD_RANGES).optional(),
+    tolerancePct: z.number().min(1).max(5).optional(),
+    note: z.string().trim().max(MAX_NOTE_LENGTH).optional(),
+    expiresInDays: z.number().int().min(1).max(365).optional(),
+  })
+  .strict()
+  .refine((card) => new Set(card.skus).size === card.skus.length, { message: "name each SKU once", path: ["skus"] });
+
+export type NewFitCard = z.infer<typeof newFitCardSchema>;
+
+/** The `{slug}` in a card's address. */
+export const fitCardParamsSchema = z.object({ slug: z.string().regex(FIT_CARD_SLUG_PATTERN) });

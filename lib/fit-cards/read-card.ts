@@ -1,0 +1,71 @@
+import { asc, eq } from "drizzle-orm";
+import type { Database } from "@/db/client";
+import { brand, fitCard, fitCardTire, stockItem, tireLine } from "@/db/schema";
+import { ofBrand, ofLine, ruleFactColumns } from "@/lib/catalog/catalog-select";
+import { readOriginal } from "@/lib/catalog/original";
+import { tireColumns, toTire, type Tire } from "@/lib/catalog/tire";
+import type { LoadRange } from "@/lib/tire";
+import { cardTireVerdict, type TireVerdict } from "./tire-verdict";
+
+/** A chosen tire as the public card shows it: live price and stock beside the price when saved. */
+export type CardTire = Tire & TireVerdict & { priceCentsAtSave: number; stillStocked: boolean };
+
+/** GET /api/v1/fit-cards/{slug}: what anyone with the link may see; nothing about who made it. */
+export interface PublicFitCard {
+  slug: string;
+  createdAt: string;
+  expiresAt: string | null;
+  sizes: string[];
+  original: { designation: string; overallDiameterMm: number; loadIndex: number; speedSymbol: string; loadRange: string | null };
+  tolerancePct: number;
+  note: string | null;
+  tires: CardTire[];
+}
+
+export type CardLookup = { status: "found"; card: PublicFitCard } | { status: "withdrawn"; why: "revoked" | "expired" } | { status: "missing" };
+
+/** The card behind a link, or why there is none to show. */
+export async function readFitCard(db: Database, slug: string, now = new Date()): Promise<CardLookup> {
+  const [card] = await db.select().from(fitCard).where(eq(fitCard.slug, slug));
+  if (!card) return { status: "missing" };
+  if (card.revokedAt) return { status: "withdrawn", why: "revoked" };
+  if (card.expiresAt && card.expiresAt <= now) return { status: "withdrawn", why: "expired" };
+
+  const read = readOriginal({ size: card.sizes[0] ?? "", loadIndex: card.loadIndex, speedSymbol: card.speedSymbol, loadRange: (card.loadRange ?? undefined) as LoadRange | undefined });
+  if (!read.ok) throw new Error(`fit card ${card.id} holds an unreadable original: ${read.message}`);
+  const { original } = read;
+  const rows = await db
+    .select({ ...tireColumns, ...ruleFactColumns, rimDiameterIn: stockItem.rimDiameterIn, retired: stockItem.retired, priceCentsAtSave: fitCardTire.priceCentsAtSave })
+    .from(fitCardTire)
+    .innerJoin(stockItem, eq(fitCardTire.stockItemId, stockItem.id))
+    .innerJoin(tireLine, ofLine)
+    .innerJoin(brand, ofBrand)
+    .where(eq(fitCardTire.cardId, card.id))
+    .orderBy(asc(fitCardTire.position));
+
+  return {
+    status: "found",
+    card: {
+      slug: card.slug,
+      createdAt: card.createdAt.toISOString(),
+      expiresAt: card.expiresAt?.toISOString() ?? null,
+      sizes: card.sizes,
+      original: {
+        designation: original.designation,
+        overallDiameterMm: original.overallDiameterMm,
+        loadIndex: card.loadIndex,
+        speedSymbol: card.speedSymbol,
+        loadRange: card.loadRange,
+      },
+      tolerancePct: card.tolerancePct,
+      note: card.note,
+      tires: rows.map((row) => ({
+        ...toTire(row),
+        inStock: !row.retired && row.quantityOnHand > 0,
+        stillStocked: !row.retired,
+        priceCentsAtSave: row.priceCentsAtSave,
+        ...cardTireVerdict(original, row, card.tolerancePct),
+      })),
+    },
+  };
+}

@@ -1,0 +1,94 @@
+import { eq } from "drizzle-orm";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { fitCard, stockItem, user } from "@/db/schema";
+import { newFitCardSchema } from "@/lib/fit-cards/card-input";
+import { createFitCard } from "@/lib/fit-cards/create-card";
+import { readFitCard } from "@/lib/fit-cards/read-card";
+import { revokeFitCard } from "@/lib/fit-cards/revoke-card";
+import { FIT_CARD_SLUG_PATTERN } from "@/lib/fit-cards/slug";
+import { seedFixture } from "../catalog/fixtures";
+import { openTestDatabase, type TestDatabase, testDatabaseKinds } from "../helpers/test-database";
+
+const author = { id: "u-author", name: "Dana", email: "dana@example.test", role: "customer" };
+const stranger = { id: "u-other", name: "Lee", email: "lee@example.test", role: "customer" };
+const staff = { id: "u-staff", name: "Ollie", email: "ollie@example.test", role: "staff" };
+
+const cardInput = (overrides: Record<string, unknown> = {}) =>
+  newFitCardSchema.parse({ sizes: ["225/45R17", "225/40R18"], skus: ["FC-17", "FC-18"], loadIndex: 91, speedSymbol: "v", note: "For the blue hatchback", ...overrides });
+
+describe.each(testDatabaseKinds)("Fit cards on %s", (kind) => {
+  let database: TestDatabase;
+  beforeAll(async () => {
+    database = await openTestDatabase(kind);
+    await database.db.insert(user).values([author, stranger, staff]);
+    await seedFixture(database.db, [
+      { sku: "FC-17", designation: "225/45R17", loadIndex: 94, speedSymbol: "W", extraLoad: true, priceCents: 15_900 },
+      { sku: "FC-18", designation: "225/40R18", loadIndex: 92, speedSymbol: "Y", priceCents: 17_900 },
+      { sku: "FC-OLD", designation: "225/45R17", loadIndex: 91, speedSymbol: "V", retired: true },
+    ]);
+  });
+  afterAll(async () => {
+    await database?.close();
+  });
+
+  it("saves a card under a random 144-bit slug and shows it with prices then and now", async () => {
+    const saved = await createFitCard(database.db, author.id, cardInput());
+    if (!saved.ok) throw new Error(saved.message);
+    expect(saved.slug).toMatch(FIT_CARD_SLUG_PATTERN);
+    await database.db.update(stockItem).set({ priceCents: 14_900 }).where(eq(stockItem.sku, "FC-17"));
+
+    const lookup = await readFitCard(database.db, saved.slug);
+    if (lookup.status !== "found") throw new Error(lookup.status);
+    const { card } = lookup;
+    expect(card.sizes).toEqual(["225/45R17", "225/40R18"]);
+    expect(card.original).toMatchObject({ designation: "225/45R17", loadIndex: 91, speedSymbol: "V", loadRange: null });
+    expect(card.tolerancePct).toBe(3);
+    expect(card.tires.map((tire) => [tire.sku, tire.priceCentsAtSave, tire.priceCents, tire.equalOrBetter])).toEqual([
+      ["FC-17", 15_900, 14_900, true],
+      ["FC-18", 17_900, 17_900, false],
+    ]);
+    expect(card.tires[0]?.reasons).toContain("same 17-inch rim");
+    expect(card.tires[1]?.reasons[0]).toBe("18-inch rim, not 17-inch: a plus size needs other wheels");
+  });
+
+  it("keeps internal fields out of the public card", async () => {
+    const saved = await createFitCard(database.db, author.id, cardInput());
+    if (!saved.ok) throw new Error(saved.message);
+    const lookup = await readFitCard(database.db, saved.slug);
+    const text = JSON.stringify(lookup);
+    for (const internal of ["authorId", "author", "u-author", "dana@example.test", "quantityOnHand", "stockItemId", "revokedAt", '"id"']) {
+      expect(text).not.toContain(internal);
+    }
+  });
+
+  it("gives every card its own slug", async () => {
+    const slugs = new Set<string>();
+    for (let i = 0; i < 40; i++) {
+      const saved = await createFitCard(database.db, author.id, cardInput({ skus: [] }));
+      if (saved.ok) slugs.add(saved.slug);
+    }
+    expect(slugs.size).toBe(40);
+  });
+
+  it("refuses a retired or unknown SKU and an unreadable size, saving nothing", async () => {
+    const before = (await database.db.select({ id: fitCard.id }).from(fitCard)).length;
+    expect(await createFitCard(database.db, author.id, cardInput({ skus: ["FC-OLD"] }))).toMatchObject({ ok: false, code: "invalid_parameter" });
+    expect(await createFitCard(database.db, author.id, cardInput({ sizes: ["banana"] }))).toMatchObject({ ok: false, code: "unreadable" });
+    expect(await createFitCard(database.db, author.id, cardInput({ speedSymbol: "X" }))).toMatchObject({ ok: false, code: "unknown_speed_symbol" });
+    expect((await database.db.select({ id: fitCard.id }).from(fitCard)).length).toBe(before);
+  });
+
+  it("is withdrawn by its author or staff, not by someone else, and expires", async () => {
+    const saved = await createFitCard(database.db, author.id, cardInput());
+    if (!saved.ok) throw new Error(saved.message);
+    expect(await revokeFitCard(database.db, stranger, saved.slug)).toBe("forbidden");
+    expect(await revokeFitCard(database.db, staff, saved.slug)).toBe("revoked");
+    expect(await readFitCard(database.db, saved.slug)).toEqual({ status: "withdrawn", why: "revoked" });
+    expect(await revokeFitCard(database.db, author, "A".repeat(24))).toBe("not_found");
+
+    const brief = await createFitCard(database.db, author.id, cardInput({ expiresInDays: 1 }));
+    if (!brief.ok) throw new Error(brief.message);
+    expect((await readFitCard(database.db, brief.slug)).status).toBe("found");
+    expect(await readFitCard(database.db, brief.slug, new Date(Date.now() + 2 * 86_400_000))).toEqual({ status: "withdrawn", why: "expired" });
+  });
+});
