@@ -6,6 +6,8 @@ export interface CardTireFacts extends RuleFacts {
 }
 
 export interface TireVerdict {
+  /** The tire's overall diameter against the original's, in percent. */
+  diameterDiffPct: number;
   /** True when the tire meets the equal-or-better rules for the card's original tire. */
   equalOrBetter: boolean;
   /** Why it qualifies, or what it does not meet. */
@@ -19,5 +21,6 @@ export function cardTireVerdict(original: Original, tire: CardTireFacts, toleran
   if (tire.rimDiameterIn !== original.rimDiameterIn) {
     failed.unshift(`${tire.rimDiameterIn}-inch rim, not ${original.rimDiameterIn}-inch: a plus size needs other wheels`);
   }
-  return failed.length === 0 ? { equalOrBetter: true, reasons: qualifyingReasons(original, tire, diffPct) } : { equalOrBetter: false, reasons: failed };
+  const equalOrBetter = failed.length === 0;
+  return { diameterDiffPct: diffPct, equalOrBetter, reasons: equalOrBetter ? qualifyingReasons(original, tire, diffPct) : failed };
 }

@@ -1,0 +1,24 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { FitCardView } from "@/components/fit-card/fit-card-view";
+import { FitCardWithdrawn } from "@/components/fit-card/fit-card-withdrawn";
+import { getDb } from "@/db/client";
+import { siteUrl } from "@/lib/env/site-url";
+import { FIT_CARD_SLUG_PATTERN } from "@/lib/fit-cards/slug";
+import { readFitCard } from "@/lib/fit-cards/read-card";
+import { getShopContact } from "@/lib/shop/queries";
+
+type Params = Promise<{ slug: string }>;
+
+export const metadata: Metadata = { title: "Fit card", robots: { index: false } };
+
+export default async function FitCardPage({ params }: { params: Params }) {
+  const { slug } = await params;
+  if (!FIT_CARD_SLUG_PATTERN.test(slug)) notFound();
+  const db = await getDb();
+  const lookup = await readFitCard(db, slug);
+  if (lookup.status === "missing") notFound();
+  if (lookup.status === "withdrawn") return <FitCardWithdrawn why={lookup.why} />;
+  const shop = await getShopContact(db);
+  return <FitCardView card={lookup.card} shop={shop} url={new URL(`/s/${slug}`, siteUrl()).toString()} />;
+}

@@ -1,0 +1,39 @@
+"use client";
+
+import { useMemo } from "react";
+import { DifferenceTable } from "@/components/compare/difference-table";
+import { SpeedometerTable } from "@/components/compare/speedometer-table";
+import { ScaledTireDrawing } from "@/components/diagram/scaled-tire-drawing";
+import { UnitsToggle } from "@/components/units/units-toggle";
+import { useUnitSystem } from "@/components/units/use-unit-system";
+import { compareSizes, formatSize, sizeFromSlug, sizeGeometry, type TireSize } from "@/lib/tire";
+
+/** The card's sizes drawn over each other to one scale, with their differences, read-only. */
+export function FitCardComparison({ designations }: { designations: string[] }) {
+  const [units, setUnits] = useUnitSystem();
+  const sizes = useMemo(() => designations.map(sizeFromSlug).filter((size): size is TireSize => size !== null), [designations]);
+  const compared = useMemo(() => compareSizes(sizes), [sizes]);
+  const tires = sizes.map((size, index) => ({ id: `${index}-${formatSize(size)}`, label: formatSize(size), ...sizeGeometry(size) }));
+  if (tires.length === 0) return null;
+  return (
+    <div className="flex flex-col gap-4">
+      <div className="flex justify-end print:hidden">
+        <UnitsToggle units={units} onChange={setUnits} />
+      </div>
+      <figure className="rounded border border-rule bg-sheet p-3 sm:p-4 print:break-inside-avoid">
+        <ScaledTireDrawing
+          tires={tires}
+          units={units}
+          title={`${tires.map((tire) => tire.label).join(", ")} drawn over each other to one scale`}
+          description={`The tire on the car, ${tires[0]!.label}, in solid lines; the other sizes dashed, dotted and dash-dotted, in the order listed.`}
+        />
+      </figure>
+      {compared.length > 1 ? (
+        <>
+          <DifferenceTable sizes={compared} units={units} />
+          <SpeedometerTable sizes={compared} units={units} />
+        </>
+      ) : null}
+    </div>
+  );
+}

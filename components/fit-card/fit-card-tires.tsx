@@ -1,0 +1,49 @@
+import type { CardTire } from "@/lib/fit-cards/read-card";
+import { formatPrice } from "@/lib/shop/money";
+import { formatSignedPercent } from "@/lib/tire";
+
+function priceLine(tire: CardTire): string {
+  if (!tire.stillStocked) return `${formatPrice(tire.priceCentsAtSave)} when saved · no longer stocked`;
+  if (tire.priceCents === tire.priceCentsAtSave) return `${formatPrice(tire.priceCents)} each`;
+  return `${formatPrice(tire.priceCents)} each today (${formatPrice(tire.priceCentsAtSave)} when saved)`;
+}
+
+/** The tires the shop picked, each with today's price and stock and why it fits, or what it changes. */
+export function FitCardTires({ tires }: { tires: CardTire[] }) {
+  if (tires.length === 0) return null;
+  return (
+    <section aria-labelledby="card-tires-heading" className="flex flex-col gap-3">
+      <h2 id="card-tires-heading" className="text-xl font-semibold">
+        Tires picked for you
+      </h2>
+      <ul className="grid gap-3 md:grid-cols-2">
+        {tires.map((tire) => (
+          <li key={tire.sku} className="rounded border border-rule bg-sheet p-4 print:break-inside-avoid">
+            <h3 className="font-semibold">
+              {tire.brand} {tire.line}
+            </h3>
+            <p className="font-mono text-sm">
+              {tire.designation} {tire.loadIndex}
+              {tire.loadIndexDual === null ? "" : `/${tire.loadIndexDual}`}
+              {tire.speedSymbol}
+              {tire.extraLoad ? " XL" : ""}
+              {tire.loadRange ? ` LR ${tire.loadRange}` : ""}
+              <span className="ml-2 text-ink-soft">({formatSignedPercent(tire.diameterDiffPct)} diameter)</span>
+            </p>
+            <p className="mt-1 font-semibold">{priceLine(tire)}</p>
+            <p className="text-sm text-ink-soft">{tire.stillStocked ? (tire.inStock ? "In stock" : "Out of stock today: ask the shop") : "Ask the shop for a current choice"}</p>
+            <p className="mt-2 text-sm font-semibold">{tire.equalOrBetter ? "Equal or better than the tire on the car:" : "Differs from the tire on the car:"}</p>
+            <ul className={`text-sm ${tire.equalOrBetter ? "" : "text-danger"}`}>
+              {tire.reasons.map((reason) => (
+                <li key={reason} className="flex gap-1.5">
+                  <span aria-hidden="true">{tire.equalOrBetter ? "✓" : "!"}</span>
+                  {reason}
+                </li>
+              ))}
+            </ul>
+          </li>
+        ))}
+      </ul>
+    </section>
+  );
+}

@@ -1,0 +1,41 @@
+import { PageIntro } from "@/components/ui/page-intro";
+import { SafetyCautions } from "@/components/ui/safety-cautions";
+import type { PublicFitCard } from "@/lib/fit-cards/read-card";
+import type { ShopContact } from "@/lib/shop/queries";
+import { FitCardComparison } from "./fit-card-comparison";
+import { FitCardTires } from "./fit-card-tires";
+import { ShareActions } from "./share-actions";
+import { ShopCard } from "./shop-card";
+
+const day = new Intl.DateTimeFormat("en-US", { dateStyle: "long", timeZone: "UTC" });
+
+/** A Fit card as anyone with its link sees it: on screen, and on one printed page. */
+export function FitCardView({ card, shop, url }: { card: PublicFitCard; shop: ShopContact | null; url: string }) {
+  const { original } = card;
+  const service = `${original.loadIndex}${original.speedSymbol}${original.loadRange ? `, load range ${original.loadRange}` : ""}`;
+  const title = `Tires for ${original.designation}`;
+  return (
+    <article className="flex flex-col gap-6 print:gap-3">
+      <PageIntro eyebrow="Fit card" title={title}>
+        <p>
+          The tire on the car: <span className="font-mono">{original.designation}</span>, load index and speed symbol{" "}
+          <span className="font-mono">{service}</span>. Diameter tolerance ±{card.tolerancePct} %. Saved {day.format(new Date(card.createdAt))}
+          {card.expiresAt ? `, shown until ${day.format(new Date(card.expiresAt))}` : ""}.
+        </p>
+      </PageIntro>
+      <ShareActions url={url} title={`${title} · Fit card`} />
+      {card.note ? (
+        <section aria-labelledby="note-heading" className="rounded border-l-4 border-accent bg-accent-soft p-4">
+          <h2 id="note-heading" className="font-semibold">
+            A note from the shop
+          </h2>
+          <p className="mt-1 whitespace-pre-line">{card.note}</p>
+        </section>
+      ) : null}
+      <FitCardComparison designations={card.sizes} />
+      <FitCardTires tires={card.tires} />
+      {shop ? <ShopCard shop={shop} /> : null}
+      <SafetyCautions />
+    </article>
+  );
+}
