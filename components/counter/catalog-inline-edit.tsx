@@ -2,6 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { useId, useRef, useState, type FormEvent, type KeyboardEvent } from "react";
+import { useHydrated } from "./item-field";
 import { dollarsText, parseDollars, parseWholeNumber, sendCatalogWrite } from "./item-form-values";
 
 type Status = { kind: "idle" } | { kind: "saving" } | { kind: "saved" } | { kind: "error"; message: string };
@@ -22,6 +23,7 @@ const invalidMessage = {
 export function CatalogInlineEdit({ sku, field, value, label }: CatalogInlineEditProps) {
   const router = useRouter();
   const id = useId();
+  const hydrated = useHydrated();
   const shown = field === "priceCents" ? dollarsText(value) : String(value);
   const [text, setText] = useState(shown);
   const [status, setStatus] = useState<Status>({ kind: "idle" });
@@ -72,6 +74,7 @@ export function CatalogInlineEdit({ sku, field, value, label }: CatalogInlineEdi
         <input
           id={id}
           value={text}
+          readOnly={!hydrated}
           inputMode={field === "priceCents" ? "decimal" : "numeric"}
           autoComplete="off"
           onChange={(event) => setText(event.target.value)}

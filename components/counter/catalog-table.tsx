@@ -45,10 +45,14 @@ function loadRangeText(row: CatalogTableRow): string {
   return row.extraLoad ? "XL" : "Standard load";
 }
 
-/** One page of catalog items; price and quantity change in place, the rest in the item's form (its SKU links there). */
+/**
+ * One page of catalog items; price and quantity change in place, the rest in the item's form (its SKU
+ * links there). The region is `relative` so that the visually hidden labels stay inside it and the
+ * page itself never scrolls sideways.
+ */
 export function CatalogTable({ rows, filters }: { rows: CatalogTableRow[]; filters: CatalogFilters }) {
   return (
-    <div role="region" aria-label="Catalog items (scrolls sideways on narrow screens)" tabIndex={0} className="overflow-x-auto rounded border border-rule bg-sheet">
+    <div role="region" aria-label="Catalog items (scrolls sideways on narrow screens)" tabIndex={0} className="relative overflow-x-auto rounded border border-rule bg-sheet">
       <table className="w-full min-w-[68rem] border-collapse text-sm">
         <thead className="border-b border-rule bg-paper">
           <tr>

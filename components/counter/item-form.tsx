@@ -3,7 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useEffect, useRef, useState, type FormEvent } from "react";
 import type { BrandWithLines } from "@/lib/counter/queries";
-import { ItemField, itemInputClass } from "./item-field";
+import { ItemField, itemInputClass, useHydrated } from "./item-field";
 import { checkItemForm, fieldMessage } from "./item-form-check";
 import { ITEM_FIELDS, sendCatalogWrite, type ItemField as Field, type ItemFormErrors, type ItemFormValues } from "./item-form-values";
 import { ItemSizePreview } from "./item-size-preview";
@@ -32,6 +32,7 @@ export function ItemForm({ brands, initial, sku }: ItemFormProps) {
   const [errors, setErrors] = useState<ItemFormErrors>({});
   const [focusRequest, setFocusRequest] = useState(0);
   const [busy, setBusy] = useState(false);
+  const hydrated = useHydrated();
   const isNew = sku === undefined;
   const lines = brands.find((brand) => brand.name === values.brand)?.lines ?? [];
 
@@ -69,56 +70,59 @@ export function ItemForm({ brands, initial, sku }: ItemFormProps) {
   const field = (name: Field) => ({ name, error: errors[name] });
   return (
     <form ref={formRef} noValidate onSubmit={submit} aria-label={isNew ? "New item" : `Edit ${sku}`} className="grid max-w-3xl gap-4 rounded border border-rule bg-sheet p-4 sm:grid-cols-2 sm:p-6">
-      {isNew ? (
-        <ItemField {...field("sku")} label="SKU">
-          {(control) => <input {...control} name="sku" value={values.sku} onChange={(e) => set("sku", e.target.value)} autoComplete="off" className={`${itemInputClass} font-mono`} />}
-        </ItemField>
-      ) : null}
-      <ItemField {...field("brand")} label="Brand">
-        {(control) => (
-          <select {...control} name="brand" value={values.brand} onChange={(e) => setValues((current) => ({ ...current, brand: e.target.value, line: "" }))} className={itemInputClass}>
-            <option value="">Choose a brand</option>
-            {brands.map((brand) => (
-              <option key={brand.name}>{brand.name}</option>
-            ))}
-          </select>
-        )}
-      </ItemField>
-      <ItemField {...field("line")} label="Line">
-        {(control) => (
-          <select {...control} name="line" value={values.line} onChange={(e) => set("line", e.target.value)} className={itemInputClass}>
-            <option value="">{values.brand ? "Choose a line" : "Choose a brand first"}</option>
-            {lines.map((line) => (
-              <option key={line}>{line}</option>
-            ))}
-          </select>
-        )}
-      </ItemField>
-      <div className="sm:col-span-2">
-        <ItemField {...field("designation")} label="Size" hintId="item-size-reading" hint={<ItemSizePreview id="item-size-reading" text={values.designation} />}>
+      {/* Typing before the page is hydrated could be lost, so the fields wait for it. */}
+      <fieldset disabled={!hydrated} className="contents">
+        {isNew ? (
+          <ItemField {...field("sku")} label="SKU">
+            {(control) => <input {...control} name="sku" value={values.sku} onChange={(e) => set("sku", e.target.value)} autoComplete="off" className={`${itemInputClass} font-mono`} />}
+          </ItemField>
+        ) : null}
+        <ItemField {...field("brand")} label="Brand">
           {(control) => (
-            <input {...control} name="designation" value={values.designation} onChange={(e) => set("designation", e.target.value)} autoComplete="off" spellCheck={false} className={`${itemInputClass} font-mono`} />
+            <select {...control} name="brand" value={values.brand} onChange={(e) => setValues((current) => ({ ...current, brand: e.target.value, line: "" }))} className={itemInputClass}>
+              <option value="">Choose a brand</option>
+              {brands.map((brand) => (
+                <option key={brand.name}>{brand.name}</option>
+              ))}
+            </select>
           )}
         </ItemField>
-      </div>
-      {TEXT_FIELDS.map(({ name, label, inputMode }) => (
-        <ItemField key={name} {...field(name)} label={label}>
-          {(control) => <input {...control} name={name} value={values[name]} inputMode={inputMode} autoComplete="off" onChange={(e) => set(name, e.target.value)} className={`${itemInputClass} font-mono`} />}
+        <ItemField {...field("line")} label="Line">
+          {(control) => (
+            <select {...control} name="line" value={values.line} onChange={(e) => set("line", e.target.value)} className={itemInputClass}>
+              <option value="">{values.brand ? "Choose a line" : "Choose a brand first"}</option>
+              {lines.map((line) => (
+                <option key={line}>{line}</option>
+              ))}
+            </select>
+          )}
         </ItemField>
-      ))}
-      <div className="flex flex-col gap-1 sm:col-span-2">
-        <label className="flex min-h-11 items-center gap-3 font-semibold">
-          <input type="checkbox" name="extraLoad" checked={values.extraLoad} onChange={(e) => set("extraLoad", e.target.checked)}
-            aria-invalid={errors.extraLoad ? true : undefined} aria-describedby={errors.extraLoad ? "item-extraLoad-error" : undefined} className="size-5 accent-accent" />
-          Extra load (XL, passenger tires only)
-        </label>
-        {errors.extraLoad ? <p id="item-extraLoad-error" className="text-sm text-danger">{errors.extraLoad}</p> : null}
-      </div>
+        <div className="sm:col-span-2">
+          <ItemField {...field("designation")} label="Size" hintId="item-size-reading" hint={<ItemSizePreview id="item-size-reading" text={values.designation} />}>
+            {(control) => (
+              <input {...control} name="designation" value={values.designation} onChange={(e) => set("designation", e.target.value)} autoComplete="off" spellCheck={false} className={`${itemInputClass} font-mono`} />
+            )}
+          </ItemField>
+        </div>
+        {TEXT_FIELDS.map(({ name, label, inputMode }) => (
+          <ItemField key={name} {...field(name)} label={label}>
+            {(control) => <input {...control} name={name} value={values[name]} inputMode={inputMode} autoComplete="off" onChange={(e) => set(name, e.target.value)} className={`${itemInputClass} font-mono`} />}
+          </ItemField>
+        ))}
+        <div className="flex flex-col gap-1 sm:col-span-2">
+          <label className="flex min-h-11 items-center gap-3 font-semibold">
+            <input type="checkbox" name="extraLoad" checked={values.extraLoad} onChange={(e) => set("extraLoad", e.target.checked)}
+              aria-invalid={errors.extraLoad ? true : undefined} aria-describedby={errors.extraLoad ? "item-extraLoad-error" : undefined} className="size-5 accent-accent" />
+            Extra load (XL, passenger tires only)
+          </label>
+          {errors.extraLoad ? <p id="item-extraLoad-error" className="text-sm text-danger">{errors.extraLoad}</p> : null}
+        </div>
+      </fieldset>
       <p id="item-form-error" tabIndex={-1} role="alert" className="text-danger sm:col-span-2">
         {errors.form ?? ""}
       </p>
       <div className="flex flex-wrap items-center gap-4 sm:col-span-2">
-        <button type="submit" disabled={busy} className="min-h-11 rounded bg-accent px-4 font-semibold text-sheet hover:opacity-90 disabled:opacity-60">
+        <button type="submit" disabled={busy || !hydrated} className="min-h-11 rounded bg-accent px-4 font-semibold text-sheet hover:opacity-90 disabled:opacity-60">
           {busy ? "Saving…" : isNew ? "Add this item" : "Save changes"}
         </button>
       </div>

@@ -2,6 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { useEffect, useRef, useState } from "react";
+import { useHydrated } from "./item-field";
 import { sendCatalogWrite } from "./item-form-values";
 
 /** Retires an item after a second, explicit confirmation; its history stays in the audit log. */
@@ -11,6 +12,7 @@ export function ItemRetire({ sku }: { sku: string }) {
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState("");
   const confirmRef = useRef<HTMLButtonElement>(null);
+  const hydrated = useHydrated();
 
   useEffect(() => {
     if (confirming) confirmRef.current?.focus();
@@ -44,7 +46,7 @@ export function ItemRetire({ sku }: { sku: string }) {
           </button>
         </div>
       ) : (
-        <button type="button" onClick={() => setConfirming(true)} className="mt-3 min-h-11 rounded border border-danger px-4 font-semibold text-danger">
+        <button type="button" onClick={() => setConfirming(true)} disabled={!hydrated} className="mt-3 min-h-11 rounded border border-danger px-4 font-semibold text-danger">
           Retire this item
         </button>
       )}
