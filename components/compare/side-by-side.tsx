@@ -2,6 +2,7 @@
 
 import { useEffect, useMemo, useRef, useState } from "react";
 import { ScaledTireDrawing } from "@/components/diagram/scaled-tire-drawing";
+import { SaveFitCard } from "@/components/fit-card/save-fit-card";
 import { UnitsToggle } from "@/components/units/units-toggle";
 import { useUnitSystem } from "@/components/units/use-unit-system";
 import { compareSizes, formatSize, sizeFromSlug, sizeGeometry, sizeToSlug, type TireSize } from "@/lib/tire";
@@ -72,6 +73,7 @@ export function SideBySide({ initialSizes }: { initialSizes: string[] }) {
         ) : tires.length === 1 ? (
           <p className="text-ink-soft">Add a second size to compare it with {tires[0]!.label}.</p>
         ) : null}
+        {tires.length > 0 ? <SaveFitCard draft={{ sizes: tires.map((tire) => tire.label) }} /> : null}
       </div>
     </div>
   );

@@ -2,6 +2,7 @@
 
 import type { DrawnTire } from "@/components/diagram/drawing-layout";
 import type { UnitSystem } from "@/lib/tire";
+import { MAX_CARD_TIRES } from "@/lib/fit-cards/card-input";
 import { ResultCard } from "./result-card";
 import type { useAlternatives } from "./use-alternatives";
 
@@ -9,10 +10,12 @@ interface FinderResultsProps {
   data: ReturnType<typeof useAlternatives>;
   original: DrawnTire | null;
   units: UnitSystem;
+  picked: readonly string[];
+  onPick: (sku: string, picked: boolean) => void;
 }
 
 /** The qualifying tires, page by page, with the near misses folded away below. */
-export function FinderResults({ data, original, units }: FinderResultsProps) {
+export function FinderResults({ data, original, units, picked, onPick }: FinderResultsProps) {
   const { first, results, error, isLoading, hasMore, isLoadingMore, loadMore, retry } = data;
   if (error) {
     return (
@@ -47,7 +50,12 @@ export function FinderResults({ data, original, units }: FinderResultsProps) {
       <ol className="flex flex-col gap-3">
         {results.map((tire) => (
           <li key={tire.sku}>
-            <ResultCard tire={tire} original={original} units={units} />
+            <ResultCard
+              tire={tire}
+              original={original}
+              units={units}
+              pick={{ picked: picked.includes(tire.sku), disabled: picked.length >= MAX_CARD_TIRES, onChange: (on) => onPick(tire.sku, on) }}
+            />
           </li>
         ))}
       </ol>

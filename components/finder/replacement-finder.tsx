@@ -6,7 +6,10 @@ import { useUnitSystem } from "@/components/units/use-unit-system";
 import { UnitsToggle } from "@/components/units/units-toggle";
 import { alternativesSearch, type FinderQuery, finderSearch } from "@/lib/finder/finder-query";
 import { readOriginal, placardFor } from "@/lib/finder/original";
+import { SaveFitCard } from "@/components/fit-card/save-fit-card";
+import type { Candidate } from "@/lib/finder/alternatives-response";
 import { FinderFilters } from "./finder-filters";
+import { fitCardDraft } from "./fit-card-draft";
 import { FinderResults } from "./finder-results";
 import { OriginalSummary } from "./original-summary";
 import { PlacardForm } from "./placard-form";
@@ -27,6 +30,9 @@ export function ReplacementFinder({ initialQuery, brands, defaultTolerancePct }:
   const search = original.ok ? alternativesSearch(query, { loadIndex: placard?.minLoadIndex ?? null, loadIndexDual: placard?.minLoadIndexDual ?? null }) : null;
   const data = useAlternatives(search);
   const update = (patch: Partial<FinderQuery>) => setQuery((current) => ({ ...current, ...patch }));
+  const [picked, setPicked] = useState<Candidate[]>([]);
+  const pick = (sku: string, on: boolean) =>
+    setPicked((list) => (on ? [...list, ...data.results.filter((tire) => tire.sku === sku)] : list.filter((tire) => tire.sku !== sku)));
 
   useEffect(() => {
     const url = new URL(window.location.href);
@@ -52,7 +58,14 @@ export function ReplacementFinder({ initialQuery, brands, defaultTolerancePct }:
       </div>
       <div className="flex min-w-0 flex-col gap-4">
         <FinderFilters query={query} brands={brands} defaultTolerancePct={defaultTolerancePct} onChange={update} />
-        <FinderResults data={data} original={original.marking.size && original.marking.geometry ? drawnTireOf(original.marking.size, original.marking.geometry) : null} units={units} />
+        <FinderResults
+          data={data}
+          original={original.marking.size && original.marking.geometry ? drawnTireOf(original.marking.size, original.marking.geometry) : null}
+          units={units}
+          picked={picked.map((tire) => tire.sku)}
+          onPick={pick}
+        />
+        {data.first ? <SaveFitCard draft={fitCardDraft(data.first.original, picked, data.first.tolerancePct)} /> : null}
       </div>
     </div>
   );

@@ -22,10 +22,12 @@ interface ResultCardProps {
   tire: Candidate | NearMiss;
   original: DrawnTire | null;
   units: UnitSystem;
+  /** For qualifying tires: whether it is picked for a Fit card, and how to change that. */
+  pick?: { picked: boolean; disabled: boolean; onChange: (picked: boolean) => void };
 }
 
 /** One catalog tire: what it is, what it costs, whether it is here, and why it qualifies (or not). */
-export function ResultCard({ tire, original, units }: ResultCardProps) {
+export function ResultCard({ tire, original, units, pick }: ResultCardProps) {
   const [drawing, setDrawing] = useState(false);
   const lines = "reasons" in tire ? tire.reasons : tire.failed;
   const candidate = drawing ? drawnFor(tire.designation) : null;
@@ -59,6 +61,12 @@ export function ResultCard({ tire, original, units }: ResultCardProps) {
           </li>
         ))}
       </ul>
+      {pick ? (
+        <label className="mt-2 flex min-h-11 items-center gap-2 text-sm font-semibold">
+          <input type="checkbox" checked={pick.picked} disabled={pick.disabled && !pick.picked} onChange={(event) => pick.onChange(event.target.checked)} className="size-5 accent-accent" />
+          Pick for a Fit card
+        </label>
+      ) : null}
       {original ? (
         <button type="button" aria-expanded={drawing} onClick={() => setDrawing(!drawing)} className="mt-2 min-h-11 text-sm font-semibold text-accent underline underline-offset-4">
           {drawing ? "Hide the drawing" : "Draw it against the current tire"}

@@ -1,0 +1,122 @@
+"use client";
+
+import { useId, useState, type FormEvent } from "react";
+import { MAX_NOTE_LENGTH } from "@/lib/fit-cards/card-input";
+import { postFitCard, type SaveOutcome } from "./post-fit-card";
+
+export interface FitCardDraft {
+  sizes: string[];
+  skus?: string[];
+  loadIndex?: number;
+  speedSymbol?: string;
+  loadRange?: string;
+  tolerancePct?: number;
+}
+
+const field = "min-h-11 rounded border border-rule bg-sheet px-3 aria-invalid:border-danger";
+
+/**
+ * "Save as Fit card": asks for what the card needs that the page does not know (the original's load
+ * index and speed symbol), a note and how long the link should work, then saves it through the API.
+ */
+export function SaveFitCard({ draft }: { draft: FitCardDraft }) {
+  const [open, setOpen] = useState(false);
+  const [busy, setBusy] = useState(false);
+  const [outcome, setOutcome] = useState<SaveOutcome | null>(null);
+  const id = useId();
+  const needsService = draft.loadIndex === undefined || draft.speedSymbol === undefined;
+
+  async function submit(event: FormEvent<HTMLFormElement>) {
+    event.preventDefault();
+    setBusy(true);
+    setOutcome(await postFitCard(draft, new FormData(event.currentTarget)));
+    setBusy(false);
+  }
+
+  if (!open) {
+    return (
+      <button type="button" onClick={() => setOpen(true)} className="min-h-11 self-start rounded border border-accent px-4 font-semibold text-accent print:hidden">
+        Save as Fit card
+      </button>
+    );
+  }
+  if (outcome?.ok) {
+    return (
+      <div role="status" className="rounded border-l-4 border-accent bg-accent-soft p-4">
+        <p className="font-semibold">Fit card saved.</p>
+        <p className="mt-1 break-all">
+          <a href={outcome.url} className="font-semibold text-accent underline underline-offset-4">
+            {outcome.url}
+          </a>
+        </p>
+      </div>
+    );
+  }
+  const error = (name: string) => (outcome && !outcome.ok ? outcome.fieldErrors[name] : undefined);
+  return (
+    <form onSubmit={submit} noValidate className="flex flex-col gap-3 rounded border border-rule bg-sheet p-4 print:hidden" aria-labelledby={`${id}-title`}>
+      <h2 id={`${id}-title`} className="text-lg font-semibold">
+        Save as Fit card
+      </h2>
+      <p className="text-sm text-ink-soft">
+        {draft.sizes.join(", ")}
+        {draft.skus?.length ? ` · ${draft.skus.length} ${draft.skus.length === 1 ? "tire" : "tires"} picked` : ""}
+      </p>
+      {needsService ? (
+        <div className="grid grid-cols-2 gap-3">
+          <Field id={`${id}-load`} label="Load index on the car" error={error("loadIndex")}>
+            <input id={`${id}-load`} name="loadIndex" inputMode="numeric" defaultValue={draft.loadIndex ?? ""} aria-invalid={error("loadIndex") ? true : undefined} aria-describedby={`${id}-load-error`} className={field} />
+          </Field>
+          <Field id={`${id}-speed`} label="Speed symbol on the car" error={error("speedSymbol")}>
+            <input id={`${id}-speed`} name="speedSymbol" defaultValue={draft.speedSymbol ?? ""} aria-invalid={error("speedSymbol") ? true : undefined} aria-describedby={`${id}-speed-error`} className={field} />
+          </Field>
+        </div>
+      ) : null}
+      <Field id={`${id}-note`} label="Note for the customer (optional)" error={error("note")}>
+        <textarea id={`${id}-note`} name="note" rows={3} maxLength={MAX_NOTE_LENGTH} aria-invalid={error("note") ? true : undefined} aria-describedby={`${id}-note-error`} className={`${field} py-2`} />
+      </Field>
+      <Field id={`${id}-expiry`} label="The link works" error={error("expiresInDays")}>
+        <select id={`${id}-expiry`} name="expiresInDays" defaultValue="30" className={field}>
+          <option value="">until withdrawn</option>
+          <option value="7">for 7 days</option>
+          <option value="30">for 30 days</option>
+          <option value="90">for 90 days</option>
+        </select>
+      </Field>
+      <div role="alert" className="text-danger">
+        {outcome && !outcome.ok ? (
+          <>
+            {outcome.message}{" "}
+            {outcome.signIn ? (
+              <a href={`/sign-in?next=${encodeURIComponent(window.location.pathname + window.location.search)}`} className="font-semibold underline">
+                Sign in
+              </a>
+            ) : null}
+          </>
+        ) : null}
+      </div>
+      <div className="flex flex-wrap gap-2">
+        <button type="submit" disabled={busy} className="min-h-11 rounded bg-accent px-4 font-semibold text-sheet disabled:opacity-60">
+          {busy ? "Saving…" : "Save the card"}
+        </button>
+        <button type="button" onClick={() => setOpen(false)} className="min-h-11 rounded border border-rule px-4 font-semibold">
+          Cancel
+        </button>
+      </div>
+    </form>
+  );
+}
+
+function Field({ id, label, error, children }: { id: string; label: string; error?: string; children: React.ReactNode }) {
+  return (
+    <div className="flex flex-col gap-1">
+      <label htmlFor={id} className="font-semibold">
+        {label}
+      </label>
+      {children}
+      <p id={`${id}-error`} className="text-sm text-danger">
+        {error ?? ""}
+      </p>
+    </div>
+  );
+}
