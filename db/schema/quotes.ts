@@ -1,0 +1,47 @@
+import { date, index, integer, pgTable, serial, smallint, text, timestamp } from "drizzle-orm/pg-core";
+import { user } from "./auth";
+import { emailSend } from "./email";
+
+export const QUOTE_STATUSES = ["new", "answered", "closed"] as const;
+export type QuoteStatus = (typeof QUOTE_STATUSES)[number];
+
+export const QUOTE_SOURCES = ["fit-card", "size-sheet", "finder"] as const;
+export type QuoteSource = (typeof QUOTE_SOURCES)[number];
+
+/** "Ask the shop": a driver's request for a price, kept with its status and the shop's replies. */
+export const quoteRequest = pgTable(
+  "quote_request",
+  {
+    id: serial().primaryKey(),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    name: text().notNull(),
+    email: text().notNull(),
+    phone: text(),
+    vehicle: text().notNull(),
+    /** The tires or size the driver asks about, in their words or as the page filled it in. */
+    tires: text().notNull(),
+    quantity: smallint().notNull(),
+    preferredDay: date({ mode: "string" }),
+    source: text().$type<QuoteSource>().notNull(),
+    /** The Fit card or size sheet the request came from, when there was one. */
+    reference: text(),
+    status: text().$type<QuoteStatus>().notNull().default("new"),
+  },
+  (table) => [index("quote_request_status_created").on(table.status, table.createdAt)],
+);
+
+/** A staff reply to a request, sent by e-mail and kept with it. */
+export const quoteReply = pgTable("quote_reply", {
+  id: serial().primaryKey(),
+  requestId: integer()
+    .notNull()
+    .references(() => quoteRequest.id, { onDelete: "cascade" }),
+  createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  authorId: text().references(() => user.id, { onDelete: "set null" }),
+  authorName: text().notNull(),
+  body: text().notNull(),
+  emailSendId: integer().references(() => emailSend.id, { onDelete: "set null" }),
+});
+
+export type QuoteRequest = typeof quoteRequest.$inferSelect;
