@@ -18,7 +18,7 @@ export function ImportPreview({ fileName, check }: { fileName: string; check: Cs
       <h2 id="import-preview-heading" className="text-xl font-semibold">
         Preview of {fileName}
       </h2>
-      <dl className="grid grid-cols-1 gap-2 sm:grid-cols-3">
+      <dl className="grid grid-cols-3 gap-2">
         <Count label="Rows read" value={check.rowsRead} />
         <Count label="Rows that look valid" value={check.validRows} />
         <Count label="Rows with problems" value={check.problemRows} tone="danger" />

@@ -12,7 +12,9 @@ export function ImportProgress({ id, label, value, text }: { id: string; label: 
         id={id}
         max={1}
         value={value ?? undefined}
-        className="h-3 w-full overflow-hidden rounded-full bg-accent-soft accent-accent [&::-moz-progress-bar]:bg-accent [&::-webkit-progress-bar]:bg-accent-soft [&::-webkit-progress-value]:bg-accent"
+        className={`h-3 w-full overflow-hidden rounded-full bg-accent-soft accent-accent [&::-moz-progress-bar]:bg-accent [&::-webkit-progress-bar]:bg-accent-soft [&::-webkit-progress-value]:bg-accent ${
+          value === null ? "animate-pulse [&::-webkit-progress-bar]:bg-accent" : ""
+        }`}
       />
       <p role="status" aria-live="polite" className="font-mono text-sm text-ink-soft">
         {text}

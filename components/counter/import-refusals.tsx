@@ -24,7 +24,7 @@ export function ImportRefusals({ caption, refusals, total }: { caption: string; 
           <tbody>
             {refusals.map((refusal, index) => (
               <tr key={`${refusal.line}-${refusal.column ?? ""}-${index}`} className="border-b border-grid align-top last:border-b-0">
-                <td className="px-3 py-2 font-mono">{formatInteger(refusal.line)}</td>
+                <td className="px-3 py-2 font-mono">{refusal.line}</td>
                 <td className="px-3 py-2 font-mono">{refusal.column || "—"}</td>
                 <td className="px-3 py-2">{refusal.reason}</td>
               </tr>
