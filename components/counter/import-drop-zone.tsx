@@ -6,7 +6,7 @@ import { useState, type DragEvent } from "react";
  * Where a CSV is dropped or chosen. The zone is the label of a real file input, so a click, a tap,
  * Enter or Space on the focused input all open the file picker.
  */
-export function ImportDropZone({ error, onFile }: { error: string | null; onFile: (file: File) => void }) {
+export function ImportDropZone({ error, onFile, autoFocus }: { error: string | null; onFile: (file: File) => void; autoFocus: boolean }) {
   const [dragging, setDragging] = useState(false);
 
   function drop(event: DragEvent<HTMLLabelElement>) {
@@ -22,6 +22,7 @@ export function ImportDropZone({ error, onFile }: { error: string | null; onFile
         id="catalog-csv"
         type="file"
         accept=".csv,text/csv"
+        autoFocus={autoFocus}
         aria-describedby={error ? "catalog-csv-error" : undefined}
         aria-invalid={error ? true : undefined}
         className="peer sr-only"

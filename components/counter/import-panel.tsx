@@ -33,6 +33,15 @@ function blocker(check: CsvCheck): string | null {
   return null;
 }
 
+/** What the chosen mode will do with the rows found wrong here, before anything is sent. */
+function modeNote(check: CsvCheck, mode: ImportMode): string | null {
+  if (check.problemRows === 0) return null;
+  const rows = `${formatInteger(check.problemRows)} ${check.problemRows === 1 ? "row has" : "rows have"} problems`;
+  return mode === "all-or-nothing"
+    ? `${rows}, so this import will write nothing. Fix them first, or choose “Import the valid rows only”.`
+    : `${rows}; they will be left out and the other rows written.`;
+}
+
 /** Choose a CSV, see it read and checked in the browser, import it, and read the server's report. */
 export function ImportPanel() {
   const [refusal, setRefusal] = useState<string | null>(null);
@@ -41,6 +50,7 @@ export function ImportPanel() {
   const [mode, setMode] = useState<ImportMode>("all-or-nothing");
   const [upload, setUpload] = useState<Upload>({ state: "idle" });
   const [report, setReport] = useState<Report | null>(null);
+  const [startedOver, setStartedOver] = useState(false);
   const reading = useRef<AbortController | null>(null);
 
   useEffect(() => () => reading.current?.abort(), []);
@@ -81,6 +91,7 @@ export function ImportPanel() {
     setCheck(null);
     setUpload({ state: "idle" });
     setReport(null);
+    setStartedOver(true);
   }
 
   if (report) return <ImportReport report={report} onReset={reset} />;
@@ -89,7 +100,7 @@ export function ImportPanel() {
   const stop = check?.done ? blocker(check) : null;
   return (
     <div className="flex flex-col gap-6">
-      {sending ? null : <ImportDropZone error={refusal} onFile={choose} />}
+      {sending ? null : <ImportDropZone error={refusal} onFile={choose} autoFocus={startedOver} />}
       {file ? (
         <ImportProgress
           id="reading-progress"
@@ -108,6 +119,7 @@ export function ImportPanel() {
             Import
           </h2>
           <ImportModeChoice mode={mode} disabled={sending} onChange={setMode} />
+          {modeNote(check, mode) ? <p className="rounded border-l-4 border-caution bg-caution-soft p-3">{modeNote(check, mode)}</p> : null}
           {sending ? <ImportProgress id="upload-progress" label="Uploading" value={upload.fraction} text={uploadText(upload.fraction)} /> : null}
           <div role="alert" className="text-danger">
             {upload.state === "failed" ? upload.message : ""}

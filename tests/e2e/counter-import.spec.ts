@@ -51,10 +51,12 @@ test.describe("the Counter's import and export", () => {
     await expectNoAxeViolations(page);
 
     await page.getByRole("button", { name: "Upload another file" }).click();
+    await expect(page.getByLabel(/choose a file/)).toBeFocused();
     await chooseFile(page, "one-bad-row.csv", catalogCsv(`${prefix}-B`, 20, [7]));
     await expect(page.getByText("20 rows read and checked · 100 %")).toBeVisible();
     await expect(page.getByRole("table", { name: "Problems found in the browser" })).toContainText("load_index");
     await expect(page.getByLabel(/All or nothing \(recommended\)/)).toBeChecked();
+    await expect(page.getByText("1 row has problems, so this import will write nothing.", { exact: false })).toBeVisible();
     await page.getByRole("button", { name: "Import 20 rows" }).click();
     await expect(page.getByRole("heading", { name: "Import report" })).toBeFocused();
     await expect(page.getByText(/Nothing was written: 1 row was refused\. Fix them and upload again/)).toBeVisible();
