@@ -24,5 +24,6 @@ export interface FakeResend {
 export function startFakeResend(options?: {
   port?: number;
   host?: string;
-  failWith?: { statusCode: number; name: string; message: string };
+  /** Sends answer this error; only the first `times` of them when it is given. */
+  failWith?: { statusCode: number; name: string; message: string; times?: number };
 }): Promise<FakeResend>;

@@ -49,17 +49,21 @@ function missingField(email) {
 
 /**
  * Starts the fake. `port: 0` picks a free port. `failWith` makes every send answer that error, to
- * see how callers cope with a refusal.
+ * see how callers cope with a refusal; with `failWith.times`, only that many sends fail, then it recovers.
  */
 export function startFakeResend({ port = DEFAULT_FAKE_RESEND_PORT, host = "127.0.0.1", failWith } = {}) {
   const received = [];
   const idsByIdempotencyKey = new Map();
+  let failuresLeft = failWith?.times ?? Infinity;
 
   async function send(request, response) {
     if (!/^Bearer \S+/.test(request.headers.authorization ?? "")) {
       return refuse(response, 401, "missing_api_key", "Missing API key in the authorization header.");
     }
-    if (failWith) return refuse(response, failWith.statusCode, failWith.name, failWith.message);
+    if (failWith && failuresLeft > 0) {
+      failuresLeft -= 1;
+      return refuse(response, failWith.statusCode, failWith.name, failWith.message);
+    }
     let email;
     try {
       email = JSON.parse(await readBody(request));

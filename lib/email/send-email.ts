@@ -18,8 +18,13 @@ function failed(message: string): SendEmailResult {
   return { ok: false, message };
 }
 
+export interface SendOptions {
+  /** Sent as the provider's Idempotency-Key: a retry with the same key never delivers twice. */
+  idempotencyKey?: string;
+}
+
 /** The one way the product sends e-mail. Never throws: a failure is logged and answered as a message. */
-export async function sendEmail(email: OutgoingEmail): Promise<SendEmailResult> {
+export async function sendEmail(email: OutgoingEmail, { idempotencyKey }: SendOptions = {}): Promise<SendEmailResult> {
   const parsed = emailSchema.safeParse(email);
   if (!parsed.success) return failed(`invalid e-mail: ${parsed.error.issues.map((i) => `${i.path.join(".")}: ${i.message}`).join("; ")}`);
   const env = readEmailEnv();
@@ -27,7 +32,7 @@ export async function sendEmail(email: OutgoingEmail): Promise<SendEmailResult> 
   try {
     // Created per send: the SDK throws at construction when there is no key.
     const resend = new Resend(env.apiKey, env.baseUrl ? { baseUrl: env.baseUrl } : undefined);
-    const { data, error } = await resend.emails.send({ from: env.from, ...parsed.data });
+    const { data, error } = await resend.emails.send({ from: env.from, ...parsed.data }, idempotencyKey ? { idempotencyKey } : undefined);
     if (error) return failed(`${error.name}: ${error.message}`);
     return { ok: true, id: data.id };
   } catch (error) {
