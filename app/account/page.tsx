@@ -1,23 +1,42 @@
 import type { Metadata } from "next";
+import Link from "next/link";
+import { CardList } from "@/components/fit-card/card-list";
 import { PageIntro } from "@/components/ui/page-intro";
+import { getDb } from "@/db/client";
 import { requirePageUser } from "@/lib/auth/page-user";
+import { listOwnCards } from "@/lib/fit-cards/queries";
 
 export const metadata: Metadata = { title: "Your account", robots: { index: false } };
 
 export default async function AccountPage() {
   const { user } = await requirePageUser("/account", "customer");
+  const cards = await listOwnCards(await getDb(), user.id);
   return (
-    <section>
-      <PageIntro eyebrow="Account" title="Your account" />
-      <dl className="grid max-w-md grid-cols-[auto_1fr] gap-x-6 gap-y-2 rounded border border-rule bg-sheet p-4">
-        <dt className="font-semibold">Name</dt>
-        <dd>{user.name}</dd>
-        <dt className="font-semibold">E-mail</dt>
-        <dd className="break-all">{user.email}</dd>
-        <dt className="font-semibold">Role</dt>
-        <dd>{user.role}</dd>
-      </dl>
-      <p className="mt-6 text-ink-soft">Fit cards and vehicles will appear here.</p>
+    <section className="flex flex-col gap-8">
+      <div>
+        <PageIntro eyebrow="Account" title="Your account" />
+        <dl className="grid max-w-md grid-cols-[auto_1fr] gap-x-6 gap-y-2 rounded border border-rule bg-sheet p-4">
+          <dt className="font-semibold">Name</dt>
+          <dd>{user.name}</dd>
+          <dt className="font-semibold">E-mail</dt>
+          <dd className="break-all">{user.email}</dd>
+          <dt className="font-semibold">Role</dt>
+          <dd>{user.role}</dd>
+        </dl>
+      </div>
+      <section aria-labelledby="cards-heading" className="flex max-w-3xl flex-col gap-3">
+        <h2 id="cards-heading" className="text-xl font-semibold">
+          Your Fit cards
+        </h2>
+        <CardList
+          cards={cards}
+          emptyText="No Fit cards yet. Compare sizes in Side-by-side or pick tires in the Replacement finder, then choose “Save as Fit card”."
+        />
+        <p className="text-sm text-ink-soft">
+          Start from <Link href="/compare" className="underline">Side-by-side</Link> or the{" "}
+          <Link href="/replace" className="underline">Replacement finder</Link>.
+        </p>
+      </section>
     </section>
   );
 }

@@ -4,6 +4,7 @@ import { fitCard, stockItem, user } from "@/db/schema";
 import { newFitCardSchema } from "@/lib/fit-cards/card-input";
 import { createFitCard } from "@/lib/fit-cards/create-card";
 import { readFitCard } from "@/lib/fit-cards/read-card";
+import { listAllCards, listOwnCards } from "@/lib/fit-cards/queries";
 import { revokeFitCard } from "@/lib/fit-cards/revoke-card";
 import { FIT_CARD_SLUG_PATTERN } from "@/lib/fit-cards/slug";
 import { seedFixture } from "../catalog/fixtures";
@@ -90,5 +91,19 @@ describe.each(testDatabaseKinds)("Fit cards on %s", (kind) => {
     if (!brief.ok) throw new Error(brief.message);
     expect((await readFitCard(database.db, brief.slug)).status).toBe("found");
     expect(await readFitCard(database.db, brief.slug, new Date(Date.now() + 2 * 86_400_000))).toEqual({ status: "withdrawn", why: "expired" });
+  });
+
+  it("lists a person's own cards and every card for the Counter, with their state and search", async () => {
+    const own = await listOwnCards(database.db, author.id);
+    expect(own.length).toBeGreaterThan(40);
+    expect(own.every((card) => !("authorId" in card))).toBe(true);
+    expect(new Set(own.map((card) => card.state))).toEqual(new Set(["active", "withdrawn"]));
+    expect(await listOwnCards(database.db, stranger.id)).toEqual([]);
+
+    const found = await listAllCards(database.db, { q: "blue hatch", page: 1 });
+    expect(found.total).toBeGreaterThan(0);
+    expect(found.cards.every((card) => card.authorEmail === author.email && card.note === "For the blue hatchback")).toBe(true);
+    expect((await listAllCards(database.db, { q: "225/40R18", page: 1 })).total).toBeGreaterThan(0);
+    expect((await listAllCards(database.db, { q: "nothing like this", page: 1 })).total).toBe(0);
   });
 });
