@@ -13,6 +13,8 @@ export interface RecordedEmail {
   subject: string;
   text: string;
   html?: string;
+  /** Where a reply to the e-mail goes, when not to the sender. */
+  replyTo?: string;
   /** Same key, same e-mail: a retry after a failure or a timeout never delivers it twice. */
   idempotencyKey: string;
 }
@@ -63,7 +65,7 @@ export async function sendRecordedEmail(db: Database, email: RecordedEmail): Pro
     return { ok: true, id: row.id, providerId: done?.providerId ?? "", alreadySent: true };
   }
 
-  const result = await sendEmail({ to: email.to, subject: email.subject, text: email.text, html: email.html }, { idempotencyKey: email.idempotencyKey });
+  const result = await sendEmail({ to: email.to, subject: email.subject, text: email.text, html: email.html, replyTo: email.replyTo }, { idempotencyKey: email.idempotencyKey });
   if (result.ok) {
     await db.update(emailSend).set({ status: "sent", providerId: result.id, error: null, updatedAt: new Date() }).where(eq(emailSend.id, row.id));
     return { ok: true, id: row.id, providerId: result.id, alreadySent: false };
