@@ -1,0 +1,26 @@
+import type { Metadata } from "next";
+import { connection } from "next/server";
+import { CounterRefusal } from "@/components/counter/counter-refusal";
+import { RequestList } from "@/components/counter/request-list";
+import { PageIntro } from "@/components/ui/page-intro";
+import { getDb } from "@/db/client";
+import { requirePageUser } from "@/lib/auth/page-user";
+import { listQuoteRequests, requestListQuerySchema } from "@/lib/quotes/queries";
+
+export const metadata: Metadata = { title: "Requests · Counter", robots: { index: false } };
+
+export default async function RequestsPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+  const access = await requirePageUser("/counter/requests", "staff");
+  if (!access.allowed) return <CounterRefusal user={access.user} needed="staff" />;
+  const query = requestListQuerySchema.parse(await searchParams);
+  await connection();
+  const listing = await listQuoteRequests(await getDb(), query);
+  return (
+    <section>
+      <PageIntro eyebrow="Counter · Staff" title="Price requests">
+        <p>What drivers asked through “Ask the shop”. Open one to reply by e-mail; the reply is kept with it.</p>
+      </PageIntro>
+      <RequestList listing={listing} query={query} />
+    </section>
+  );
+}

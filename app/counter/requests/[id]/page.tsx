@@ -1,0 +1,51 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { connection } from "next/server";
+import { CounterRefusal } from "@/components/counter/counter-refusal";
+import { RequestFields, RequestReplies } from "@/components/counter/request-detail";
+import { RequestStatusBadge } from "@/components/counter/request-list";
+import { RequestReplyForm } from "@/components/counter/request-reply-form";
+import { RequestStatusButtons } from "@/components/counter/request-status-buttons";
+import { PageIntro } from "@/components/ui/page-intro";
+import { getDb } from "@/db/client";
+import { requirePageUser } from "@/lib/auth/page-user";
+import { getQuoteRequest, requestIdSchema } from "@/lib/quotes/queries";
+
+export const metadata: Metadata = { title: "Request · Counter", robots: { index: false } };
+
+export default async function RequestPage({ params }: { params: Promise<{ id: string }> }) {
+  const { id: rawId } = await params;
+  const access = await requirePageUser(`/counter/requests/${encodeURIComponent(rawId)}`, "staff");
+  if (!access.allowed) return <CounterRefusal user={access.user} needed="staff" />;
+  const id = requestIdSchema.safeParse(rawId);
+  if (!id.success || !/^\d+$/.test(rawId)) notFound();
+  await connection();
+  const request = await getQuoteRequest(await getDb(), id.data);
+  if (!request) notFound();
+  return (
+    <section className="flex flex-col gap-6">
+      <Link href="/counter/requests" prefetch={false} className="inline-flex min-h-11 items-center self-start font-semibold text-accent underline underline-offset-4">
+        ← All requests
+      </Link>
+      <PageIntro eyebrow={`Counter · Request #${request.id}`} title={`${request.name} asks for a price`}>
+        <p>
+          {request.quantity} × {request.tires}
+        </p>
+      </PageIntro>
+      <div className="flex flex-wrap items-center gap-3">
+        <span className="font-semibold">Status</span>
+        <RequestStatusBadge status={request.status} />
+      </div>
+      <RequestStatusButtons requestId={request.id} status={request.status} />
+      <RequestFields request={request} />
+      <section aria-labelledby="replies-heading" className="flex flex-col gap-3">
+        <h2 id="replies-heading" className="text-xl font-semibold">
+          Replies
+        </h2>
+        <RequestReplies replies={request.replies} />
+        <RequestReplyForm requestId={request.id} customerEmail={request.email} />
+      </section>
+    </section>
+  );
+}

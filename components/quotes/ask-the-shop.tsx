@@ -1,0 +1,50 @@
+"use client";
+
+import dynamic from "next/dynamic";
+import { useId, useRef, useState } from "react";
+import type { QuoteContext } from "./post-quote-request";
+
+// The form and its checks load when a driver opens it, keeping the pages' first load small.
+const QuoteForm = dynamic(() => import("./quote-form"), {
+  ssr: false,
+  loading: () => (
+    <p role="status" className="text-ink-soft">
+      Opening the form…
+    </p>
+  ),
+});
+
+/** "Ask the shop for a price": a disclosure with the request form, filled in from the page it sits on. */
+export function AskTheShop({ tires, ...context }: QuoteContext & { tires: string }) {
+  const [open, setOpen] = useState(false);
+  const toggle = useRef<HTMLButtonElement>(null);
+  const close = () => {
+    setOpen(false);
+    toggle.current?.focus();
+  };
+  const id = useId();
+  const panelId = `${id}-panel`;
+  return (
+    <section aria-labelledby={`${id}-title`} className="rounded border border-rule bg-sheet p-4 print:hidden">
+      <h2 id={`${id}-title`} className="text-lg font-semibold">
+        <button
+          ref={toggle}
+          type="button"
+          aria-expanded={open}
+          aria-controls={panelId}
+          onClick={() => setOpen((value) => !value)}
+          className="flex min-h-11 w-full items-center justify-between gap-3 text-left text-accent"
+        >
+          Ask the shop for a price
+          <span aria-hidden="true" className="font-mono text-xl">
+            {open ? "−" : "+"}
+          </span>
+        </button>
+      </h2>
+      {open ? null : <p className="text-ink-soft">Send these tires to the shop; it answers by e-mail with a price.</p>}
+      <div id={panelId} hidden={!open} className="mt-3">
+        {open ? <QuoteForm context={context} tires={tires} onCancel={close} /> : null}
+      </div>
+    </section>
+  );
+}

@@ -1,0 +1,48 @@
+import { HONEYPOT_FIELD, quoteFieldErrors, quoteRequestSchema } from "@/lib/quotes/quote-input";
+
+export type QuoteOutcome =
+  | { ok: true; id: number; email: string }
+  | { ok: false; message: string; fieldErrors: Record<string, string> };
+
+export interface QuoteContext {
+  source: "fit-card" | "size-sheet" | "finder";
+  reference?: string;
+}
+
+const text = (form: FormData, name: string) => {
+  const value = form.get(name);
+  return typeof value === "string" ? value : undefined;
+};
+
+/**
+ * Checks the request in the browser with a message per field, then sends it to POST /api/v1/quote-requests
+ * with how long the form was open (from its rendered-at time).
+ */
+export async function postQuoteRequest(context: QuoteContext, form: FormData, now = Date.now()): Promise<QuoteOutcome> {
+  const renderedAt = Number(text(form, "renderedAt"));
+  const body = {
+    name: text(form, "name"),
+    email: text(form, "email"),
+    phone: text(form, "phone"),
+    vehicle: text(form, "vehicle"),
+    tires: text(form, "tires"),
+    quantity: text(form, "quantity")?.trim() || undefined,
+    preferredDay: text(form, "preferredDay"),
+    source: context.source,
+    reference: context.reference,
+    [HONEYPOT_FIELD]: text(form, HONEYPOT_FIELD) ?? "",
+    fillMs: Number.isFinite(renderedAt) ? Math.max(0, Math.round(now - renderedAt)) : 0,
+  };
+  const parsed = quoteRequestSchema.safeParse(body);
+  if (!parsed.success) return { ok: false, message: "Some fields need another look.", fieldErrors: quoteFieldErrors(parsed.error) };
+  try {
+    const response = await fetch("/api/v1/quote-requests", { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(parsed.data) });
+    const answer = (await response.json().catch(() => null)) as { id?: number; error?: { message?: string } } | null;
+    if (response.status === 201 && typeof answer?.id === "number") return { ok: true, id: answer.id, email: parsed.data.email };
+    const message = answer?.error?.message ?? "The request could not be sent. Please try again, or call the shop.";
+    const field = /field "(\w+)"/.exec(message)?.[1];
+    return { ok: false, message, fieldErrors: field ? { [field]: message } : {} };
+  } catch {
+    return { ok: false, message: "The shop's server could not be reached. Check the connection and try again.", fieldErrors: {} };
+  }
+}

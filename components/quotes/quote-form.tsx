@@ -1,0 +1,100 @@
+"use client";
+
+import { useEffect, useId, useRef, useState, type FormEvent } from "react";
+import { DEFAULT_QUANTITY, HONEYPOT_FIELD, MAX_QUANTITY, MIN_QUANTITY, PREFERRED_DAY_MAX_AHEAD } from "@/lib/quotes/quote-input";
+import { postQuoteRequest, type QuoteContext, type QuoteOutcome } from "./post-quote-request";
+import { describedBy, fieldClass, QuoteField } from "./quote-field";
+
+const FIELD_ORDER = ["name", "email", "phone", "vehicle", "tires", "quantity", "preferredDay"] as const;
+
+function localDay(offsetDays = 0): string {
+  const day = new Date();
+  day.setDate(day.getDate() + offsetDays);
+  return `${day.getFullYear()}-${String(day.getMonth() + 1).padStart(2, "0")}-${String(day.getDate()).padStart(2, "0")}`;
+}
+
+/** The request form itself; loaded only when a driver opens "Ask the shop for a price". */
+export default function QuoteForm({ context, tires, onCancel }: { context: QuoteContext; tires: string; onCancel: () => void }) {
+  const id = useId();
+  const [renderedAt] = useState(() => Date.now());
+  const [busy, setBusy] = useState(false);
+  const [outcome, setOutcome] = useState<QuoteOutcome | null>(null);
+  const formRef = useRef<HTMLFormElement>(null);
+  const doneRef = useRef<HTMLDivElement>(null);
+  const alertRef = useRef<HTMLParagraphElement>(null);
+
+  useEffect(() => {
+    if (!outcome) return;
+    if (outcome.ok) return doneRef.current?.focus();
+    const first = FIELD_ORDER.find((name) => outcome.fieldErrors[name]);
+    if (first) formRef.current?.querySelector<HTMLElement>(`[name="${first}"]`)?.focus();
+    else alertRef.current?.focus();
+  }, [outcome]);
+
+  async function submit(event: FormEvent<HTMLFormElement>) {
+    event.preventDefault();
+    setBusy(true);
+    setOutcome(await postQuoteRequest(context, new FormData(event.currentTarget)));
+    setBusy(false);
+  }
+
+  if (outcome?.ok) {
+    return (
+      <div ref={doneRef} tabIndex={-1} role="status" className="rounded border-l-4 border-accent bg-accent-soft p-4">
+        <p className="font-semibold">Your request is with the shop (number {outcome.id}).</p>
+        <p className="mt-1">
+          A confirmation is on its way to <span className="break-all">{outcome.email}</span>. The shop answers by e-mail with a price, usually within one
+          working day; nothing is booked or charged until you agree.
+        </p>
+      </div>
+    );
+  }
+  const error = (name: string) => (outcome && !outcome.ok ? outcome.fieldErrors[name] : undefined);
+  const control = (name: (typeof FIELD_ORDER)[number], hint = false) => ({ id: `${id}-${name}`, name, ...describedBy(`${id}-${name}`, { hint, error: error(name) }) });
+  return (
+    <form ref={formRef} onSubmit={submit} noValidate className="flex flex-col gap-4">
+      <input type="hidden" name="renderedAt" value={renderedAt} />
+      <div className="grid gap-4 sm:grid-cols-2">
+        <QuoteField id={`${id}-name`} label="Your name" error={error("name")}>
+          <input {...control("name")} autoComplete="name" className={fieldClass} />
+        </QuoteField>
+        <QuoteField id={`${id}-email`} label="E-mail (the answer goes here)" error={error("email")}>
+          <input {...control("email")} type="email" autoComplete="email" className={fieldClass} />
+        </QuoteField>
+        <QuoteField id={`${id}-phone`} label="Phone (optional)" error={error("phone")}>
+          <input {...control("phone")} type="tel" autoComplete="tel" className={fieldClass} />
+        </QuoteField>
+        <QuoteField id={`${id}-vehicle`} label="Vehicle" hint="Year and kind is enough, such as “2019 family SUV”." error={error("vehicle")}>
+          <input {...control("vehicle", true)} className={fieldClass} />
+        </QuoteField>
+      </div>
+      <QuoteField id={`${id}-tires`} label="Tires or size" hint="Filled in from this page; change it as you like." error={error("tires")}>
+        <textarea {...control("tires", true)} rows={2} defaultValue={tires} className={`${fieldClass} py-2`} />
+      </QuoteField>
+      <div className="grid gap-4 sm:grid-cols-2">
+        <QuoteField id={`${id}-quantity`} label={`How many tires (${MIN_QUANTITY}–${MAX_QUANTITY})`} error={error("quantity")}>
+          <input {...control("quantity")} type="number" inputMode="numeric" min={MIN_QUANTITY} max={MAX_QUANTITY} defaultValue={DEFAULT_QUANTITY} className={fieldClass} />
+        </QuoteField>
+        <QuoteField id={`${id}-preferredDay`} label="Preferred day for fitting (optional)" hint={`Up to ${PREFERRED_DAY_MAX_AHEAD} days ahead.`} error={error("preferredDay")}>
+          <input {...control("preferredDay", true)} type="date" min={localDay()} max={localDay(PREFERRED_DAY_MAX_AHEAD)} className={fieldClass} />
+        </QuoteField>
+      </div>
+      <div className="sr-only">
+        <label htmlFor={`${id}-${HONEYPOT_FIELD}`}>Leave this field empty: it is only here to catch automated spam</label>
+        <input id={`${id}-${HONEYPOT_FIELD}`} name={HONEYPOT_FIELD} type="text" tabIndex={-1} autoComplete="off" defaultValue="" />
+      </div>
+      <p ref={alertRef} tabIndex={-1} role="alert" className="text-danger">
+        {outcome && !outcome.ok ? outcome.message : ""}
+      </p>
+      <p className="text-sm text-ink-soft">The shop uses your details only to answer this request.</p>
+      <div className="flex flex-wrap gap-2">
+        <button type="submit" disabled={busy} className="min-h-11 rounded bg-accent px-4 font-semibold text-sheet disabled:opacity-60">
+          {busy ? "Sending…" : "Send the request"}
+        </button>
+        <button type="button" onClick={onCancel} className="min-h-11 rounded border border-rule px-4 font-semibold">
+          Cancel
+        </button>
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,63 @@
+import type { Database } from "@/db/client";
+import { quoteRequest } from "@/db/schema";
+import { sendRecordedEmail } from "@/lib/email/recorded-send";
+import { siteUrl } from "@/lib/env/site-url";
+import { getShopContact } from "@/lib/shop/queries";
+import type { NewQuoteRequest } from "./quote-input";
+import { requestConfirmationEmail, requestToShopEmail, type RequestSummary } from "./quote-emails";
+
+export interface CreatedQuoteRequest {
+  id: number;
+  status: "new";
+  /** Whether each e-mail went out; a failure is recorded in the outbox and never loses the request. */
+  emailed: { shop: boolean; customer: boolean };
+}
+
+/**
+ * Stores a driver's request, then e-mails it to the shop (replies go to the driver) and a
+ * confirmation to the driver. The request is kept whatever happens to the e-mails.
+ */
+export async function createQuoteRequest(db: Database, input: NewQuoteRequest): Promise<CreatedQuoteRequest> {
+  const [row] = await db
+    .insert(quoteRequest)
+    .values({
+      name: input.name,
+      email: input.email,
+      phone: input.phone ?? null,
+      vehicle: input.vehicle,
+      tires: input.tires,
+      quantity: input.quantity,
+      preferredDay: input.preferredDay ?? null,
+      source: input.source,
+      reference: input.reference ?? null,
+    })
+    .returning({ id: quoteRequest.id });
+  if (!row) throw new Error("the quote request was not stored");
+
+  const summary: RequestSummary = { id: row.id, ...input, phone: input.phone ?? null, preferredDay: input.preferredDay ?? null };
+  const shop = await getShopContact(db);
+  const counterUrl = new URL(`/counter/requests/${row.id}`, siteUrl()).toString();
+  const reference = String(row.id);
+
+  const toShop = shop
+    ? await sendRecordedEmail(db, {
+        senderId: null,
+        kind: "quote_to_shop",
+        reference,
+        to: shop.email,
+        replyTo: input.email,
+        ...requestToShopEmail(summary, counterUrl),
+        idempotencyKey: `quote-request-${row.id}-to-shop`,
+      })
+    : { ok: false };
+  const confirmation = await sendRecordedEmail(db, {
+    senderId: null,
+    kind: "quote_confirmation",
+    reference,
+    to: input.email,
+    replyTo: shop?.email,
+    ...requestConfirmationEmail(summary, shop),
+    idempotencyKey: `quote-request-${row.id}-confirmation`,
+  });
+  return { id: row.id, status: "new", emailed: { shop: toShop.ok, customer: confirmation.ok } };
+}

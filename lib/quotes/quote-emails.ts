@@ -1,0 +1,81 @@
+import { escapeHtml } from "@/lib/email/escape-html";
+import type { ShopContact } from "@/lib/shop/queries";
+
+/** The request as the e-mails tell it: only what the driver typed, never internal data. */
+export interface RequestSummary {
+  id: number;
+  name: string;
+  email: string;
+  phone: string | null;
+  vehicle: string;
+  tires: string;
+  quantity: number;
+  preferredDay: string | null;
+}
+
+interface EmailBody {
+  subject: string;
+  text: string;
+  html: string;
+}
+
+function summaryLines(request: RequestSummary): [string, string][] {
+  return [
+    ["Name", request.name],
+    ["E-mail", request.email],
+    ["Phone", request.phone ?? "not given"],
+    ["Vehicle", request.vehicle],
+    ["Tires", request.tires],
+    ["How many", String(request.quantity)],
+    ["Preferred day", request.preferredDay ?? "no preference"],
+  ];
+}
+
+function shopLines(shop: ShopContact | null): string[] {
+  if (!shop) return [];
+  return [shop.name, `${shop.streetAddress}, ${shop.town}, ${shop.region} ${shop.postalCode}`, `Phone ${shop.phone} · ${shop.email}`, shop.openingHours];
+}
+
+function render(subject: string, paragraphs: (string | string[])[]): EmailBody {
+  const text = paragraphs.map((paragraph) => (Array.isArray(paragraph) ? paragraph.join("\n") : paragraph)).join("\n\n");
+  const html = paragraphs
+    .filter((paragraph) => paragraph.length > 0)
+    .map((paragraph) => `<p>${(Array.isArray(paragraph) ? paragraph : paragraph.split("\n")).map(escapeHtml).join("<br>")}</p>`)
+    .join("\n");
+  return { subject, text, html };
+}
+
+const table = (request: RequestSummary) => summaryLines(request).map(([label, value]) => `${label}: ${value}`);
+
+/** To the shop: a new request; replying to the e-mail reaches the driver. */
+export function requestToShopEmail(request: RequestSummary, counterUrl: string): EmailBody {
+  return render(`Price request #${request.id}: ${request.quantity} × ${request.tires.slice(0, 60)}`, [
+    `${request.name} asks for a price through Sidewise.`,
+    table(request),
+    `Reply to this e-mail to write to ${request.name} directly, or answer in the Counter so the reply is kept with the request:`,
+    counterUrl,
+  ]);
+}
+
+/** To the driver: we have it, and what happens next. */
+export function requestConfirmationEmail(request: RequestSummary, shop: ShopContact | null): EmailBody {
+  const shopName = shop?.name ?? "The shop";
+  return render(`We have your price request (#${request.id})`, [
+    `Hello ${request.name},`,
+    `Thank you for asking. ${shopName} has your request and will answer by e-mail, usually within one working day. This is what you sent:`,
+    table(request),
+    "A price depends on the tires in stock on the day; the shop confirms it when you book the fitting. If anything above is wrong, reply to this e-mail or call the shop.",
+    shopLines(shop),
+  ]);
+}
+
+/** To the driver: the shop's answer, in the staff member's words. */
+export function quoteReplyEmail(request: RequestSummary, reply: { body: string; authorName: string }, shop: ShopContact | null): EmailBody {
+  return render(`About your price request (#${request.id})`, [
+    `Hello ${request.name},`,
+    reply.body,
+    `${reply.authorName}${shop ? `, ${shop.name}` : ""}`,
+    `You asked about: ${request.quantity} × ${request.tires}, for ${request.vehicle}.`,
+    shopLines(shop),
+  ]);
+}

@@ -1,0 +1,97 @@
+import { z } from "zod";
+import { QUOTE_SOURCES } from "@/db/schema/quotes";
+
+export const MIN_QUANTITY = 1;
+export const MAX_QUANTITY = 16;
+export const DEFAULT_QUANTITY = 4;
+export const PREFERRED_DAY_MAX_AHEAD = 90;
+/** A person needs longer than this to fill in a name, an address and a vehicle; a script does not. */
+export const MIN_FILL_MS = 3000;
+/** The field no person sees: anything typed into it came from a script. */
+export const HONEYPOT_FIELD = "website";
+export const MAX_REPLY_LENGTH = 5000;
+
+const DAY_MS = 86_400_000;
+const isoDay = (date: Date) => date.toISOString().slice(0, 10);
+
+/**
+ * The days a driver may ask for. "Today" starts a day early because the browser's today can be
+ * the server's yesterday in time zones west of UTC.
+ */
+export function preferredDayRange(now = new Date()): { min: string; max: string } {
+  return { min: isoDay(new Date(now.getTime() - DAY_MS)), max: isoDay(new Date(now.getTime() + PREFERRED_DAY_MAX_AHEAD * DAY_MS)) };
+}
+
+const optionalText = (schema: z.ZodString) => z.preprocess((value) => (typeof value === "string" && value.trim() === "" ? undefined : value), schema.optional());
+
+/** What a driver sends with "Ask the shop", checked the same way in the browser and by the API. */
+export const quoteRequestSchema = z.object({
+  name: z.string({ error: "Type your name so the shop knows who is asking." }).trim().min(1, "Type your name so the shop knows who is asking.").max(100, "Keep the name under 100 characters."),
+  email: z
+    .string({ error: "Type your e-mail address: the shop answers there." })
+    .trim()
+    .min(1, "Type your e-mail address: the shop answers there.")
+    .max(254, "That e-mail address is too long.")
+    .pipe(z.email("Check the e-mail address: it should look like name@example.com.")),
+  phone: optionalText(
+    z
+      .string()
+      .trim()
+      .max(30, "Keep the phone number under 30 characters.")
+      .regex(/^[0-9 +()-]+$/, "Use only digits, spaces and + ( ) - in the phone number.")
+      .refine((phone) => (phone.match(/\d/g) ?? []).length >= 7, "A phone number needs at least 7 digits."),
+  ),
+  vehicle: z
+    .string({ error: "Say which vehicle the tires are for, such as “2019 family SUV”." })
+    .trim()
+    .min(2, "Say which vehicle the tires are for, such as “2019 family SUV”.")
+    .max(120, "Keep the vehicle under 120 characters."),
+  tires: z
+    .string({ error: "Say which tires or size you would like a price for." })
+    .trim()
+    .min(2, "Say which tires or size you would like a price for.")
+    .max(600, "Keep the tires under 600 characters."),
+  quantity: z.coerce
+    .number({ error: `Choose how many tires, ${MIN_QUANTITY} to ${MAX_QUANTITY}.` })
+    .int(`Choose a whole number of tires, ${MIN_QUANTITY} to ${MAX_QUANTITY}.`)
+    .min(MIN_QUANTITY, `Choose how many tires, ${MIN_QUANTITY} to ${MAX_QUANTITY}.`)
+    .max(MAX_QUANTITY, `Choose how many tires, ${MIN_QUANTITY} to ${MAX_QUANTITY}.`)
+    .default(DEFAULT_QUANTITY),
+  preferredDay: optionalText(
+    z
+      .string()
+      .regex(/^\d{4}-\d{2}-\d{2}$/, "Pick the day as a date, such as 2026-12-24.")
+      .refine((day) => !Number.isNaN(Date.parse(`${day}T00:00:00Z`)) && isoDay(new Date(`${day}T00:00:00Z`)) === day, "That day does not exist: pick another.")
+      .refine((day) => {
+        const { min, max } = preferredDayRange();
+        return day >= min && day <= max;
+      }, `Pick a day from today to ${PREFERRED_DAY_MAX_AHEAD} days ahead, or leave it empty.`),
+  ),
+  source: z.enum(QUOTE_SOURCES, { error: "The page the request comes from is unknown." }),
+  reference: optionalText(z.string().trim().max(100, "The reference is longer than 100 characters.")),
+  [HONEYPOT_FIELD]: z.string().max(500).optional(),
+  /** How long the form was open before it was sent, measured in the browser so clocks that disagree don't matter. */
+  fillMs: z.number().int().min(0).max(86_400_000 * 7).optional(),
+});
+
+export type QuoteRequestInput = z.infer<typeof quoteRequestSchema>;
+export type NewQuoteRequest = Omit<QuoteRequestInput, typeof HONEYPOT_FIELD | "fillMs">;
+
+export type SpamVerdict = { ok: true } | { ok: false; reason: "honeypot" | "too_fast" };
+
+/** Refuses what only a script would send: the hidden field filled in, or a form sent within seconds. */
+export function spamVerdict(input: Pick<QuoteRequestInput, typeof HONEYPOT_FIELD | "fillMs">): SpamVerdict {
+  if (input[HONEYPOT_FIELD]?.trim()) return { ok: false, reason: "honeypot" };
+  if (input.fillMs === undefined || input.fillMs < MIN_FILL_MS) return { ok: false, reason: "too_fast" };
+  return { ok: true };
+}
+
+/** What a refused sender reads: the same words for every reason, so a script learns nothing. */
+export const SPAM_REFUSAL_MESSAGE = "The request could not be accepted. Please wait a few seconds, check the form and send it again.";
+
+/** The first message per field, keyed by field name, for the form to show beside each input. */
+export function quoteFieldErrors(error: z.ZodError): Record<string, string> {
+  const errors: Record<string, string> = {};
+  for (const issue of error.issues) errors[String(issue.path[0] ?? "form")] ??= issue.message;
+  return errors;
+}
