@@ -25,6 +25,7 @@ const PUBLIC_ROUTE_FILES = [
   "v1/decode/route.ts",
   "v1/fit-cards/[slug]/route.ts#GET",
   "v1/plus/route.ts",
+  "v1/quote-requests/route.ts#POST",
 ];
 
 /**
@@ -48,6 +49,7 @@ const MATRIX: { file: string; method: string; path: string; body?: unknown; para
   },
   { file: "v1/catalog/import/route.ts", method: "POST", path: "/api/v1/catalog/import", expected: { anonymous: 401, customer: 403, staff: 400, admin: 400 } },
   { file: "v1/catalog/export/route.ts", method: "GET", path: "/api/v1/catalog/export", expected: { anonymous: 401, customer: 403, staff: 200, admin: 200 } },
+  { file: "v1/quote-requests/route.ts", method: "GET", path: "/api/v1/quote-requests", expected: { anonymous: 401, customer: 403, staff: 200, admin: 200 } },
 ];
 
 /**
@@ -59,6 +61,8 @@ const ACTION_MATRIX: { file: string; action: string; input: unknown; expected: R
     file: "lib/team/actions.ts", action: "changeRole", input: { userId: "no-such-account", role: "staff" },
     expected: { anonymous: 401, customer: 403, staff: 403, admin: 404 },
   },
+  { file: "lib/quotes/actions.ts", action: "setQuoteStatus", input: { id: 999_999, status: "closed" }, expected: { anonymous: 401, customer: 403, staff: 404, admin: 404 } },
+  { file: "lib/quotes/actions.ts", action: "sendQuoteReply", input: { id: 999_999, body: "Hello" }, expected: { anonymous: 401, customer: 403, staff: 404, admin: 404 } },
 ];
 
 /** Modules that start with the "use server" directive, in the folders that may hold server actions. */
