@@ -1,8 +1,13 @@
 import type { Metadata } from "next";
+import { headers } from "next/headers";
 import { notFound } from "next/navigation";
+import { EmailCardPanel } from "@/components/fit-card/email-card-panel";
 import { FitCardView } from "@/components/fit-card/fit-card-view";
 import { FitCardWithdrawn } from "@/components/fit-card/fit-card-withdrawn";
 import { getDb } from "@/db/client";
+import { hasRole } from "@/lib/auth/roles";
+import { getSessionUser } from "@/lib/auth/session";
+import { listFitCardSends } from "@/lib/email/queries";
 import { siteUrl } from "@/lib/env/site-url";
 import { FIT_CARD_SLUG_PATTERN } from "@/lib/fit-cards/slug";
 import { readFitCard } from "@/lib/fit-cards/read-card";
@@ -20,5 +25,13 @@ export default async function FitCardPage({ params }: { params: Params }) {
   if (lookup.status === "missing") notFound();
   if (lookup.status === "withdrawn") return <FitCardWithdrawn why={lookup.why} />;
   const shop = await getShopContact(db);
-  return <FitCardView card={lookup.card} shop={shop} url={new URL(`/s/${slug}`, siteUrl()).toString()} />;
+  const viewer = await getSessionUser(await headers());
+  // The public card never carries staff data: the staff panel is a separate section, rendered only for them.
+  const staffPanel = viewer && hasRole(viewer.role, "staff") ? <EmailCardPanel slug={slug} sends={await listFitCardSends(db, slug)} /> : null;
+  return (
+    <>
+      <FitCardView card={lookup.card} shop={shop} url={new URL(`/s/${slug}`, siteUrl()).toString()} />
+      {staffPanel}
+    </>
+  );
 }

@@ -38,6 +38,10 @@ const MATRIX: { file: string; method: string; path: string; body?: unknown; para
     file: "v1/fit-cards/[slug]/route.ts", method: "DELETE", path: `/api/v1/fit-cards/${"N".repeat(24)}`, params: { slug: "N".repeat(24) },
     expected: { anonymous: 401, customer: 404, staff: 404, admin: 404 },
   },
+  {
+    file: "v1/fit-cards/[slug]/email/route.ts", method: "POST", path: `/api/v1/fit-cards/${"N".repeat(24)}/email`, params: { slug: "N".repeat(24) },
+    body: { to: "nobody@example.test" }, expected: { anonymous: 401, customer: 403, staff: 404, admin: 404 },
+  },
   { file: "v1/catalog/route.ts", method: "POST", path: "/api/v1/catalog", body: {}, expected: { anonymous: 401, customer: 403, staff: 400, admin: 400 } },
   {
     file: "v1/catalog/[sku]/route.ts", method: "PATCH", path: "/api/v1/catalog/NO-SUCH-SKU", params: { sku: "NO-SUCH-SKU" }, body: { priceCents: 100 },

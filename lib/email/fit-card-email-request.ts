@@ -1,0 +1,56 @@
+import { randomUUID } from "node:crypto";
+import { createElement } from "react";
+import { z } from "zod";
+import { FitCardEmail } from "@/components/email/fit-card-email";
+import type { Database } from "@/db/client";
+import { readFitCard } from "@/lib/fit-cards/read-card";
+import { hitRateLimit, type RateLimitVerdict } from "@/lib/rate-limit/rate-limit";
+import { getShopContact } from "@/lib/shop/queries";
+import { fitCardEmailContent } from "./fit-card-email-content";
+import type { FitCardEmailBody } from "./fit-card-email-input";
+import { fitCardEmailText } from "./fit-card-email-text";
+import { type RecordedSendResult, sendRecordedEmail } from "./recorded-send";
+import { renderEmailHtml } from "./render-email";
+
+const countSchema = z.coerce.number().int().min(1).max(10_000);
+
+/** Fit card e-mails one staff member may send per hour (default 20; FIT_CARD_EMAIL_LIMIT_PER_HOUR changes it). */
+export function fitCardEmailLimit(env: NodeJS.ProcessEnv = process.env) {
+  return { limit: countSchema.catch(20).parse(env.FIT_CARD_EMAIL_LIMIT_PER_HOUR || 20), windowSeconds: 60 * 60 };
+}
+
+function hitFitCardEmailLimit(db: Database, userId: string): Promise<RateLimitVerdict> {
+  return hitRateLimit(db, `fit-card-email:${userId}`, fitCardEmailLimit());
+}
+
+export type EmailFitCardOutcome =
+  | { status: "missing" }
+  | { status: "withdrawn"; why: "revoked" | "expired" }
+  | { status: "rate_limited"; retryAfterSeconds: number }
+  | { status: "attempted"; result: RecordedSendResult };
+
+/**
+ * E-mails a Fit card's link and key numbers. The same client key for the same card always means the
+ * same e-mail, so a "Try again" after a failure or a timeout never delivers it twice.
+ */
+export async function emailFitCard(
+  db: Database,
+  { senderId, slug, link, body, clientKey }: { senderId: string; slug: string; link: string; body: FitCardEmailBody; clientKey: string | null },
+): Promise<EmailFitCardOutcome> {
+  const lookup = await readFitCard(db, slug);
+  if (lookup.status !== "found") return lookup;
+  const verdict = await hitFitCardEmailLimit(db, senderId);
+  if (!verdict.allowed) return { status: "rate_limited", retryAfterSeconds: verdict.retryAfterSeconds };
+  const content = fitCardEmailContent({ card: lookup.card, shop: await getShopContact(db), link, message: body.message });
+  const result = await sendRecordedEmail(db, {
+    senderId,
+    kind: "fit_card",
+    reference: slug,
+    to: body.to,
+    subject: content.subject,
+    text: fitCardEmailText(content),
+    html: await renderEmailHtml(createElement(FitCardEmail, { content })),
+    idempotencyKey: `fit-card:${slug}:${clientKey ?? randomUUID()}`,
+  });
+  return { status: "attempted", result };
+}

@@ -1,0 +1,98 @@
+import { createElement } from "react";
+import { describe, expect, it } from "vitest";
+import { FitCardEmail } from "@/components/email/fit-card-email";
+import { fitCardEmailContent } from "@/lib/email/fit-card-email-content";
+import { fitCardEmailText } from "@/lib/email/fit-card-email-text";
+import { renderEmailHtml } from "@/lib/email/render-email";
+import type { CardTire, PublicFitCard } from "@/lib/fit-cards/read-card";
+import type { ShopContact } from "@/lib/shop/queries";
+
+const link = "https://sidewise.example.test/s/AbCdEfGhIjKlMnOpQrStUvWx";
+
+const tire = (overrides: Partial<CardTire>): CardTire => ({
+  sku: "BV-1",
+  brand: "Brightvale",
+  line: "Meadow Touring",
+  designation: "225/45R17",
+  loadIndex: 94,
+  loadIndexDual: null,
+  speedSymbol: "W",
+  loadRange: null,
+  extraLoad: true,
+  runFlat: false,
+  season: "all-season",
+  terrain: "highway",
+  threePeak: false,
+  overallDiameterMm: 634.3,
+  priceCents: 14_900,
+  inStock: true,
+  diameterDiffPct: 0,
+  equalOrBetter: true,
+  reasons: [],
+  priceCentsAtSave: 15_900,
+  stillStocked: true,
+  ...overrides,
+});
+
+const card: PublicFitCard = {
+  slug: "AbCdEfGhIjKlMnOpQrStUvWx",
+  createdAt: "2026-11-02T10:00:00.000Z",
+  expiresAt: null,
+  sizes: ["225/45R17", "225/40R18"],
+  original: { designation: "225/45R17", overallDiameterMm: 634.3, loadIndex: 91, speedSymbol: "V", loadRange: null },
+  tolerancePct: 3,
+  note: null,
+  tires: [tire({}), tire({ sku: "OK-2", brand: "Okenby", line: "Ridge Sport", designation: "225/40R18", loadIndex: 92, speedSymbol: "Y", extraLoad: false, priceCents: 17_900 })],
+};
+
+const shop: ShopContact = {
+  name: "Marrowby Tire Works",
+  streetAddress: "12 Kiln Lane",
+  town: "Marrowby",
+  region: "OH",
+  postalCode: "45000",
+  phone: "(555) 010-2030",
+  email: "counter@marrowby-tire.test",
+  openingHours: "Mon–Fri 8–6, Sat 8–1",
+};
+
+const content = fitCardEmailContent({ card, shop, link, message: "Ask for Ollie <b>at the counter</b>" });
+
+describe("Fit card e-mail", () => {
+  it("words the key numbers once for both versions", () => {
+    expect(content.original).toBe("225/45R17 91V");
+    // Nominal geometry (ETRTO): 225/45R17 is 634.3 mm across, 225/40R18 637.2 mm, so +0.46 %, shown to a tenth.
+    expect(content.otherSizes).toEqual([{ designation: "225/40R18", diameterChange: "+0.5 % overall diameter" }]);
+    expect(content.tires.map((t) => `${t.name}, ${t.marking}: ${t.price}`)).toEqual([
+      "Brightvale Meadow Touring, 225/45R17 94W XL: $149.00 each today",
+      "Okenby Ridge Sport, 225/40R18 92Y: $179.00 each today",
+    ]);
+  });
+
+  it("puts the link, the sizes, the prices, the message, the shop and the caution in the text version", () => {
+    const text = fitCardEmailText(content);
+    for (const part of [link, "225/45R17 91V", "225/40R18 (+0.5 % overall diameter)", "$149.00 each today", "$179.00 each today", "Ask for Ollie <b>at the counter</b>", "(555) 010-2030", "placard", "qualified fitter"]) {
+      expect(text).toContain(part);
+    }
+  });
+
+  it("renders the same facts as HTML with the link as a button and the staff message escaped", async () => {
+    const html = await renderEmailHtml(createElement(FitCardEmail, { content }));
+    expect(html.startsWith("<!DOCTYPE html><html")).toBe(true);
+    expect(html).toContain(`href="${link}"`);
+    expect(html).toContain("Open your Fit card");
+    for (const part of ["225/45R17 91V", "225/40R18", "+0.5 % overall diameter", "$149.00 each today", "$179.00 each today", "(555) 010-2030", "placard", "qualified fitter"]) {
+      expect(html).toContain(part);
+    }
+    expect(html).toContain("Ask for Ollie &lt;b&gt;at the counter&lt;/b&gt;");
+    expect(html).not.toContain("<b>at the counter</b>");
+    expect(html).not.toMatch(/<style|class=/);
+  });
+
+  it("says a tire is no longer stocked with its price when saved, and leaves out an empty message", () => {
+    const gone = fitCardEmailContent({ card: { ...card, tires: [tire({ stillStocked: false })] }, shop: null, link, message: "   " });
+    expect(gone.tires[0]?.price).toBe("$159.00 when saved, no longer stocked");
+    expect(gone.message).toBeNull();
+    expect(fitCardEmailText(gone)).not.toContain("A note from the shop");
+  });
+});
