@@ -7,6 +7,8 @@ import { UnitsToggle } from "@/components/units/units-toggle";
 import { alternativesSearch, type FinderQuery, finderSearch } from "@/lib/finder/finder-query";
 import { readOriginal, placardFor } from "@/lib/finder/original";
 import { SaveFitCard } from "@/components/fit-card/save-fit-card";
+import { AskTheShop } from "@/components/quotes/ask-the-shop";
+import { finderQuoteTires } from "@/components/quotes/quote-tires";
 import type { Candidate } from "@/lib/finder/alternatives-response";
 import { FinderFilters } from "./finder-filters";
 import { fitCardDraft } from "./fit-card-draft";
@@ -66,6 +68,7 @@ export function ReplacementFinder({ initialQuery, brands, defaultTolerancePct }:
           onPick={pick}
         />
         {data.first ? <SaveFitCard draft={fitCardDraft(data.first.original, picked, data.first.tolerancePct)} /> : null}
+        {data.first ? <AskTheShop source="finder" tires={finderQuoteTires(data.first.original, picked)} /> : null}
       </div>
     </div>
   );

@@ -1,3 +1,5 @@
+import { AskTheShop } from "@/components/quotes/ask-the-shop";
+import { fitCardQuoteTires } from "@/components/quotes/quote-tires";
 import { PageIntro } from "@/components/ui/page-intro";
 import { SafetyCautions } from "@/components/ui/safety-cautions";
 import type { PublicFitCard } from "@/lib/fit-cards/read-card";
@@ -34,6 +36,7 @@ export function FitCardView({ card, shop, url }: { card: PublicFitCard; shop: Sh
       ) : null}
       <FitCardComparison designations={card.sizes} />
       <FitCardTires tires={card.tires} />
+      <AskTheShop source="fit-card" reference={card.slug} tires={fitCardQuoteTires(card)} />
       {shop ? <ShopCard shop={shop} /> : null}
       <SafetyCautions />
     </article>

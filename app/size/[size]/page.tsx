@@ -3,6 +3,7 @@ import { notFound, permanentRedirect } from "next/navigation";
 import { SizeDrawing } from "@/components/size-sheet/size-drawing";
 import { SizeLinks } from "@/components/size-sheet/size-links";
 import { SizeParts } from "@/components/size-sheet/size-parts";
+import { AskTheShop } from "@/components/quotes/ask-the-shop";
 import { MeasurementsTable } from "@/components/reader/measurements-table";
 import { PageIntro } from "@/components/ui/page-intro";
 import { SafetyCautions } from "@/components/ui/safety-cautions";
@@ -43,6 +44,7 @@ export default async function SizeSheetPage({ params }: { params: Params }) {
         </figure>
         <div className="flex min-w-0 flex-col gap-6">
           <SizeLinks slug={slug} designation={designation} />
+          <AskTheShop source="size-sheet" reference={designation} tires={designation} />
           <SafetyCautions />
         </div>
       </div>

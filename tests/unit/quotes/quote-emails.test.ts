@@ -1,0 +1,68 @@
+import { describe, expect, it } from "vitest";
+import { quoteReplyEmail, requestConfirmationEmail, requestToShopEmail } from "@/lib/quotes/quote-emails";
+import { describeTire, finderQuoteTires, fitCardQuoteTires } from "@/components/quotes/quote-tires";
+
+const request = {
+  id: 42,
+  name: "Rosa <Iverley>",
+  email: "rosa@example.test",
+  phone: null,
+  vehicle: "2019 family SUV",
+  tires: "235/65R17 104H",
+  quantity: 4,
+  preferredDay: "2026-12-10",
+};
+const shop = {
+  name: "Marrowby Tire Works",
+  streetAddress: "12 Quarry Lane",
+  town: "Marrowby",
+  region: "OR",
+  postalCode: "97000",
+  phone: "(555) 010-4477",
+  email: "counter@marrowby-tire.test",
+  openingHours: "Mon–Fri 8–6, Sat 9–1",
+};
+
+describe("quote e-mails", () => {
+  it("give the shop every field the driver typed and a link to answer in the Counter", () => {
+    const email = requestToShopEmail(request, "https://shop.test/counter/requests/42");
+    expect(email.subject).toBe("Price request #42: 4 × 235/65R17 104H");
+    expect(email.text).toContain("Vehicle: 2019 family SUV");
+    expect(email.text).toContain("Phone: not given");
+    expect(email.text).toContain("Preferred day: 2026-12-10");
+    expect(email.text).toContain("https://shop.test/counter/requests/42");
+  });
+
+  it("confirm to the driver what they sent, what happens next, and how to reach the shop", () => {
+    const email = requestConfirmationEmail(request, shop);
+    expect(email.text).toContain("Marrowby Tire Works has your request and will answer by e-mail");
+    expect(email.text).toContain("Tires: 235/65R17 104H");
+    expect(email.text).toContain("Phone (555) 010-4477 · counter@marrowby-tire.test");
+    expect(email.html).toContain("Hello Rosa &lt;Iverley&gt;,");
+    expect(email.html).not.toContain("<Iverley>");
+  });
+
+  it("carry a staff reply with its line breaks and the shop's contact, and nothing internal", () => {
+    const email = quoteReplyEmail(request, { body: "Four in stock at $129 each.\nFitting on Thursday works.", authorName: "Ollie" }, shop);
+    expect(email.subject).toBe("About your price request (#42)");
+    expect(email.text).toContain("Four in stock at $129 each.\nFitting on Thursday works.");
+    expect(email.html).toContain("Four in stock at $129 each.<br>Fitting on Thursday works.");
+    expect(email.text).toContain("Ollie, Marrowby Tire Works");
+    expect(email.text).not.toMatch(/counter\/requests|source|status/i);
+  });
+});
+
+describe("the tires a page fills in", () => {
+  it("write the size with its service description as the sidewall shows it", () => {
+    // Common practice on the sidewall: single/dual load index, then the speed symbol (ETRTO / TRA notation).
+    expect(describeTire({ designation: "LT265/75R16", loadIndex: 123, loadIndexDual: 120, speedSymbol: "S", loadRange: "E" })).toBe("LT265/75R16 123/120S, load range E");
+    expect(describeTire({ designation: "285/50R20", loadIndex: null, speedSymbol: null })).toBe("285/50R20");
+  });
+
+  it("send the finder's original and the picked tires, or a Fit card's tires or sizes", () => {
+    const picked = [{ brand: "Harrowgate", line: "Trailmere AT", designation: "235/65R17", loadIndex: 108, speedSymbol: "T" }];
+    expect(finderQuoteTires({ designation: "235/65R17", loadIndex: 104, speedSymbol: "H" }, picked)).toBe("Replacing 235/65R17 104H\nHarrowgate Trailmere AT 235/65R17 108T");
+    expect(fitCardQuoteTires({ sizes: ["225/45R17", "225/40R18"], tires: [] })).toBe("225/45R17, 225/40R18");
+    expect(fitCardQuoteTires({ sizes: ["235/65R17"], tires: picked })).toBe("Harrowgate Trailmere AT 235/65R17 108T");
+  });
+});
