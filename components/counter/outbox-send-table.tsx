@@ -1,0 +1,45 @@
+import { statusLabel } from "@/components/fit-card/email-history";
+import type { EmailSendRow } from "@/lib/email/queries";
+
+const when = new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" });
+
+const kindLabel = { fit_card: "Fit card", quote_to_shop: "Request to the shop", quote_confirmation: "Request confirmation", quote_reply: "Reply to a request" } as const;
+
+/** The last e-mails the product sent or tried to send, with how many tries and what went wrong. */
+export function OutboxSendTable({ sends }: { sends: EmailSendRow[] }) {
+  if (sends.length === 0) return <p className="text-ink-soft">Nothing has been sent yet.</p>;
+  return (
+    <div className="overflow-x-auto" role="region" aria-labelledby="outbox-sends-caption" tabIndex={0}>
+      <table className="w-full min-w-[44rem] border-collapse text-left text-sm">
+        <caption id="outbox-sends-caption" className="mb-2 text-left font-semibold">
+          The last {sends.length} e-mails, newest first (times in UTC)
+        </caption>
+        <thead>
+          <tr className="border-b border-rule">
+            <th scope="col" className="py-2 pr-3">When</th>
+            <th scope="col" className="py-2 pr-3">What</th>
+            <th scope="col" className="py-2 pr-3">To</th>
+            <th scope="col" className="py-2 pr-3">Status</th>
+            <th scope="col" className="py-2 pr-3">Tries</th>
+            <th scope="col" className="py-2">Error</th>
+          </tr>
+        </thead>
+        <tbody>
+          {sends.map((send) => (
+            <tr key={send.id} className="border-b border-rule align-top">
+              <td className="py-2 pr-3 whitespace-nowrap">{when.format(send.createdAt)}</td>
+              <td className="py-2 pr-3">
+                {kindLabel[send.kind]}
+                <span className="block text-ink-soft">{send.subject}</span>
+              </td>
+              <td className="py-2 pr-3 break-all">{send.toAddress}</td>
+              <td className={`py-2 pr-3 font-semibold ${send.status === "failed" ? "text-danger" : ""}`}>{statusLabel[send.status]}</td>
+              <td className="py-2 pr-3">{send.attempts}</td>
+              <td className="py-2 break-words">{send.error ?? ""}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}
