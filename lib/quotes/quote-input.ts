@@ -26,49 +26,49 @@ const optionalText = (schema: z.ZodString) => z.preprocess((value) => (typeof va
 
 /** What a driver sends with "Ask the shop", checked the same way in the browser and by the API. */
 export const quoteRequestSchema = z.object({
-  name: z.string({ error: "Type your name so the shop knows who is asking." }).trim().min(1, "Type your name so the shop knows who is asking.").max(100, "Keep the name under 100 characters."),
+  name: z.string({ error: "Type your name so the shop knows who is asking" }).trim().min(1, "Type your name so the shop knows who is asking").max(100, "Keep the name under 100 characters"),
   email: z
-    .string({ error: "Type your e-mail address: the shop answers there." })
+    .string({ error: "Type your e-mail address: the shop answers there" })
     .trim()
-    .min(1, "Type your e-mail address: the shop answers there.")
-    .max(254, "That e-mail address is too long.")
-    .pipe(z.email("Check the e-mail address: it should look like name@example.com.")),
+    .min(1, "Type your e-mail address: the shop answers there")
+    .max(254, "That e-mail address is too long")
+    .pipe(z.email("Check the e-mail address: it should look like name@example.com")),
   phone: optionalText(
     z
       .string()
       .trim()
-      .max(30, "Keep the phone number under 30 characters.")
-      .regex(/^[0-9 +()-]+$/, "Use only digits, spaces and + ( ) - in the phone number.")
-      .refine((phone) => (phone.match(/\d/g) ?? []).length >= 7, "A phone number needs at least 7 digits."),
+      .max(30, "Keep the phone number under 30 characters")
+      .regex(/^[0-9 +()-]+$/, "Use only digits, spaces and + ( ) - in the phone number")
+      .refine((phone) => (phone.match(/\d/g) ?? []).length >= 7, "A phone number needs at least 7 digits"),
   ),
   vehicle: z
-    .string({ error: "Say which vehicle the tires are for, such as “2019 family SUV”." })
+    .string({ error: "Say which vehicle the tires are for, such as “2019 family SUV”" })
     .trim()
-    .min(2, "Say which vehicle the tires are for, such as “2019 family SUV”.")
-    .max(120, "Keep the vehicle under 120 characters."),
+    .min(2, "Say which vehicle the tires are for, such as “2019 family SUV”")
+    .max(120, "Keep the vehicle under 120 characters"),
   tires: z
-    .string({ error: "Say which tires or size you would like a price for." })
+    .string({ error: "Say which tires or size you would like a price for" })
     .trim()
-    .min(2, "Say which tires or size you would like a price for.")
-    .max(600, "Keep the tires under 600 characters."),
+    .min(2, "Say which tires or size you would like a price for")
+    .max(600, "Keep the tires under 600 characters"),
   quantity: z.coerce
-    .number({ error: `Choose how many tires, ${MIN_QUANTITY} to ${MAX_QUANTITY}.` })
-    .int(`Choose a whole number of tires, ${MIN_QUANTITY} to ${MAX_QUANTITY}.`)
-    .min(MIN_QUANTITY, `Choose how many tires, ${MIN_QUANTITY} to ${MAX_QUANTITY}.`)
-    .max(MAX_QUANTITY, `Choose how many tires, ${MIN_QUANTITY} to ${MAX_QUANTITY}.`)
+    .number({ error: `Choose how many tires, ${MIN_QUANTITY} to ${MAX_QUANTITY}` })
+    .int(`Choose a whole number of tires, ${MIN_QUANTITY} to ${MAX_QUANTITY}`)
+    .min(MIN_QUANTITY, `Choose how many tires, ${MIN_QUANTITY} to ${MAX_QUANTITY}`)
+    .max(MAX_QUANTITY, `Choose how many tires, ${MIN_QUANTITY} to ${MAX_QUANTITY}`)
     .default(DEFAULT_QUANTITY),
   preferredDay: optionalText(
     z
       .string()
-      .regex(/^\d{4}-\d{2}-\d{2}$/, "Pick the day as a date, such as 2026-12-24.")
-      .refine((day) => !Number.isNaN(Date.parse(`${day}T00:00:00Z`)) && isoDay(new Date(`${day}T00:00:00Z`)) === day, "That day does not exist: pick another.")
+      .regex(/^\d{4}-\d{2}-\d{2}$/, "Pick the day as a date, such as 2026-12-24")
+      .refine((day) => !Number.isNaN(Date.parse(`${day}T00:00:00Z`)) && isoDay(new Date(`${day}T00:00:00Z`)) === day, "That day does not exist: pick another")
       .refine((day) => {
         const { min, max } = preferredDayRange();
         return day >= min && day <= max;
-      }, `Pick a day from today to ${PREFERRED_DAY_MAX_AHEAD} days ahead, or leave it empty.`),
+      }, `Pick a day from today to ${PREFERRED_DAY_MAX_AHEAD} days ahead, or leave it empty`),
   ),
-  source: z.enum(QUOTE_SOURCES, { error: "The page the request comes from is unknown." }),
-  reference: optionalText(z.string().trim().max(100, "The reference is longer than 100 characters.")),
+  source: z.enum(QUOTE_SOURCES, { error: "The page the request comes from is unknown" }),
+  reference: optionalText(z.string().trim().max(100, "The reference is longer than 100 characters")),
   [HONEYPOT_FIELD]: z.string().max(500).optional(),
   /** How long the form was open before it was sent, measured in the browser so clocks that disagree don't matter. */
   fillMs: z.number().int().min(0).max(86_400_000 * 7).optional(),

@@ -27,21 +27,21 @@ describe("the request schema", () => {
 
   it("says for each missing field what to type", () => {
     expect(errorsOf({ source: "finder" })).toEqual({
-      name: "Type your name so the shop knows who is asking.",
-      email: "Type your e-mail address: the shop answers there.",
-      vehicle: "Say which vehicle the tires are for, such as “2019 family SUV”.",
-      tires: "Say which tires or size you would like a price for.",
+      name: "Type your name so the shop knows who is asking",
+      email: "Type your e-mail address: the shop answers there",
+      vehicle: "Say which vehicle the tires are for, such as “2019 family SUV”",
+      tires: "Say which tires or size you would like a price for",
     });
   });
 
   it("names the wrong field and how to put it right", () => {
-    expect(errorsOf({ ...valid, email: "rosa.example.test" })).toEqual({ email: "Check the e-mail address: it should look like name@example.com." });
-    expect(errorsOf({ ...valid, phone: "call me maybe" })).toEqual({ phone: "Use only digits, spaces and + ( ) - in the phone number." });
-    expect(errorsOf({ ...valid, phone: "+1 (555)" })).toEqual({ phone: "A phone number needs at least 7 digits." });
-    expect(errorsOf({ ...valid, quantity: 17 })).toEqual({ quantity: "Choose how many tires, 1 to 16." });
-    expect(errorsOf({ ...valid, quantity: "0" })).toEqual({ quantity: "Choose how many tires, 1 to 16." });
-    expect(errorsOf({ ...valid, quantity: 2.5 })).toEqual({ quantity: "Choose a whole number of tires, 1 to 16." });
-    expect(errorsOf({ ...valid, source: "elsewhere" })).toEqual({ source: "The page the request comes from is unknown." });
+    expect(errorsOf({ ...valid, email: "rosa.example.test" })).toEqual({ email: "Check the e-mail address: it should look like name@example.com" });
+    expect(errorsOf({ ...valid, phone: "call me maybe" })).toEqual({ phone: "Use only digits, spaces and + ( ) - in the phone number" });
+    expect(errorsOf({ ...valid, phone: "+1 (555)" })).toEqual({ phone: "A phone number needs at least 7 digits" });
+    expect(errorsOf({ ...valid, quantity: 17 })).toEqual({ quantity: "Choose how many tires, 1 to 16" });
+    expect(errorsOf({ ...valid, quantity: "0" })).toEqual({ quantity: "Choose how many tires, 1 to 16" });
+    expect(errorsOf({ ...valid, quantity: 2.5 })).toEqual({ quantity: "Choose a whole number of tires, 1 to 16" });
+    expect(errorsOf({ ...valid, source: "elsewhere" })).toEqual({ source: "The page the request comes from is unknown" });
   });
 
   it("takes a phone number with spaces, + ( ) and -", () => {
@@ -52,11 +52,11 @@ describe("the request schema", () => {
     vi.useFakeTimers({ now: new Date("2026-12-02T15:00:00Z"), toFake: ["Date"] });
     expect(errorsOf({ ...valid, preferredDay: "2026-12-02" })).toEqual({});
     expect(errorsOf({ ...valid, preferredDay: "2027-03-02" })).toEqual({});
-    const range = "Pick a day from today to 90 days ahead, or leave it empty.";
+    const range = "Pick a day from today to 90 days ahead, or leave it empty";
     expect(errorsOf({ ...valid, preferredDay: "2026-11-20" })).toEqual({ preferredDay: range });
     expect(errorsOf({ ...valid, preferredDay: "2027-03-05" })).toEqual({ preferredDay: range });
-    expect(errorsOf({ ...valid, preferredDay: "2027-02-30" })).toEqual({ preferredDay: "That day does not exist: pick another." });
-    expect(errorsOf({ ...valid, preferredDay: "next Tuesday" })).toEqual({ preferredDay: "Pick the day as a date, such as 2026-12-24." });
+    expect(errorsOf({ ...valid, preferredDay: "2027-02-30" })).toEqual({ preferredDay: "That day does not exist: pick another" });
+    expect(errorsOf({ ...valid, preferredDay: "next Tuesday" })).toEqual({ preferredDay: "Pick the day as a date, such as 2026-12-24" });
   });
 
   it("allows yesterday in UTC, which is still today west of UTC", () => {

@@ -1,0 +1,131 @@
+import { NextRequest } from "next/server";
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+import { GET, POST } from "@/app/api/v1/quote-requests/route";
+import { getDatabaseHandle, getDb } from "@/db/client";
+import { quoteRequest } from "@/db/schema";
+import { type FakeResend, startFakeResend } from "@/scripts/fake-resend.mjs";
+import { APP_ORIGIN, callRoute, signIn } from "../helpers/auth-session";
+
+vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typeof import("next/server")>()), connection: async () => undefined }));
+
+const request = {
+  name: "Rosa Iverley",
+  email: "rosa@example.test",
+  vehicle: "2019 family SUV",
+  tires: "235/65R17 104H",
+  quantity: 4,
+  source: "size-sheet",
+  reference: "235/65R17",
+  website: "",
+  fillMs: 9000,
+};
+
+let fake: FakeResend;
+let addressCount = 0;
+
+/** Each call comes from its own address unless one is given, so that the per-address limit stays out of the way. */
+async function ask(body: unknown, address = `198.51.100.${++addressCount}`) {
+  const response = await POST(
+    new NextRequest(`${APP_ORIGIN}/api/v1/quote-requests`, {
+      method: "POST",
+      headers: { origin: APP_ORIGIN, "content-type": "application/json", "x-forwarded-for": address },
+      body: JSON.stringify(body),
+    }),
+  );
+  return { status: response.status, headers: response.headers, body: await response.json() };
+}
+
+beforeAll(async () => {
+  fake = await startFakeResend({ port: 0 });
+  vi.stubEnv("RESEND_BASE_URL", fake.url);
+  vi.stubEnv("RESEND_API_KEY", "");
+  vi.stubEnv("EMAIL_FROM", "");
+  vi.stubEnv("DATABASE_URL", "");
+  vi.stubEnv("PGLITE_DATA_DIR", "memory://");
+  vi.stubEnv("DEMO_SEED", "on");
+  vi.stubEnv("QUOTE_LIMIT_PER_ADDRESS", "");
+  vi.stubEnv("QUOTE_LIMIT_PER_EMAIL", "");
+  await getDb();
+});
+afterAll(async () => {
+  await (await getDatabaseHandle()).close();
+  await fake.close();
+  vi.unstubAllEnvs();
+});
+
+describe("POST /api/v1/quote-requests", () => {
+  it("stores a request from anyone → 201 with its id and status new, and e-mails the shop and the driver", async () => {
+    const { status, body } = await ask(request);
+    expect(status).toBe(201);
+    expect(body).toEqual({ id: expect.any(Number), status: "new" });
+    expect(fake.received().filter((email) => email.subject.includes(`#${body.id}`)).map((email) => email.to).sort()).toEqual([
+      "counter@marrowby-tire.test",
+      "rosa@example.test",
+    ]);
+  });
+
+  it.each([
+    ["name", { name: "" }, "invalid_parameter", 'The field "name" is invalid: Type your name so the shop knows who is asking.'],
+    ["email", { email: "rosa.example.test" }, "invalid_parameter", 'The field "email" is invalid: Check the e-mail address: it should look like name@example.com.'],
+    ["phone", { phone: "call me" }, "invalid_parameter", 'The field "phone" is invalid: Use only digits, spaces and + ( ) - in the phone number.'],
+    ["vehicle", { vehicle: undefined }, "missing_parameter", 'The field "vehicle" is required.'],
+    ["tires", { tires: "" }, "invalid_parameter", 'The field "tires" is invalid: Say which tires or size you would like a price for.'],
+    ["quantity", { quantity: 40 }, "invalid_parameter", 'The field "quantity" is invalid: Choose how many tires, 1 to 16.'],
+    ["preferredDay", { preferredDay: "2020-01-01" }, "invalid_parameter", 'The field "preferredDay" is invalid: Pick a day from today to 90 days ahead, or leave it empty.'],
+    ["source", { source: "elsewhere" }, "invalid_parameter", 'The field "source" is invalid: The page the request comes from is unknown.'],
+  ])("refuses a wrong %s with 400 naming the field", async (_field, change, code, message) => {
+    const { status, body } = await ask({ ...request, ...change });
+    expect(status).toBe(400);
+    expect(body).toEqual({ error: { code, message } });
+  });
+
+  it("refuses a filled-in hidden field and a form sent within seconds, with the same neutral words, storing nothing", async () => {
+    const before = (await (await getDb()).select({ id: quoteRequest.id }).from(quoteRequest)).length;
+    const neutral = { error: { code: "invalid_parameter", message: "The request could not be accepted. Please wait a few seconds, check the form and send it again." } };
+    expect(await ask({ ...request, website: "https://spam.example" })).toMatchObject({ status: 400, body: neutral });
+    expect(await ask({ ...request, fillMs: 800 })).toMatchObject({ status: 400, body: neutral });
+    expect(await ask({ ...request, fillMs: undefined })).toMatchObject({ status: 400, body: neutral });
+    expect((await (await getDb()).select({ id: quoteRequest.id }).from(quoteRequest)).length).toBe(before);
+  });
+
+  it("answers 429 with Retry-After after 5 requests from one address in 10 minutes", async () => {
+    const address = "203.0.113.77";
+    for (let i = 0; i < 5; i++) expect((await ask({ ...request, email: `driver${i}@example.test` }, address)).status).toBe(201);
+    const refused = await ask({ ...request, email: "driver9@example.test" }, address);
+    expect(refused.status).toBe(429);
+    expect(refused.body.error.code).toBe("rate_limited");
+    expect(refused.body.error.message).toMatch(/^Too many requests were sent from here in a short time\. Please try again in \d+ minutes?, or call the shop\.$/);
+    expect(Number(refused.headers.get("retry-after"))).toBeGreaterThan(0);
+    expect(Number(refused.headers.get("retry-after"))).toBeLessThanOrEqual(600);
+  });
+
+  it("answers 429 after 3 requests for one e-mail address, whatever the address they come from", async () => {
+    for (let i = 0; i < 3; i++) expect((await ask({ ...request, email: "Same.Driver@example.test" })).status).toBe(201);
+    const refused = await ask({ ...request, email: "same.driver@example.test" });
+    expect(refused.status).toBe(429);
+    expect(refused.headers.get("retry-after")).toMatch(/^\d+$/);
+  });
+});
+
+describe("GET /api/v1/quote-requests", () => {
+  it("lists requests for staff, newest first, with counts per status, filtered by status", async () => {
+    const cookie = await signIn("staff@sidewise.test", "sidewise-demo");
+    const response = await callRoute(GET, "GET", "/api/v1/quote-requests?status=new", { cookie });
+    expect(response.status).toBe(200);
+    const body = await response.json();
+    expect(body).toMatchObject({ page: 1, pageCount: 1, counts: { new: body.total, answered: 0, closed: 0 } });
+    expect(body.requests.length).toBe(body.total);
+    expect(body.requests[0]).toMatchObject({ id: expect.any(Number), status: "new", createdAt: expect.stringMatching(/Z$/) });
+    const ids = body.requests.map((row: { id: number }) => row.id);
+    expect(ids).toEqual([...ids].sort((a, b) => b - a));
+
+    const wrong = await callRoute(GET, "GET", "/api/v1/quote-requests?status=open", { cookie });
+    expect(wrong.status).toBe(400);
+    expect((await wrong.json()).error.message).toBe('The parameter "status" is invalid: use new, answered or closed.');
+  });
+
+  it("is not for customers", async () => {
+    const cookie = await signIn("customer@sidewise.test", "sidewise-demo");
+    expect((await callRoute(GET, "GET", "/api/v1/quote-requests", { cookie })).status).toBe(403);
+  });
+});
