@@ -25,7 +25,10 @@ export default function QuoteForm({ context, tires, onCancel }: { context: Quote
 
   useEffect(() => {
     if (!outcome) return;
-    if (outcome.ok) return doneRef.current?.focus();
+    if (outcome.ok) {
+      doneRef.current?.focus();
+      return;
+    }
     const first = FIELD_ORDER.find((name) => outcome.fieldErrors[name]);
     if (first) formRef.current?.querySelector<HTMLElement>(`[name="${first}"]`)?.focus();
     else alertRef.current?.focus();
@@ -52,9 +55,9 @@ export default function QuoteForm({ context, tires, onCancel }: { context: Quote
   const error = (name: string) => (outcome && !outcome.ok ? outcome.fieldErrors[name] : undefined);
   const control = (name: (typeof FIELD_ORDER)[number], hint = false) => ({ id: `${id}-${name}`, name, ...describedBy(`${id}-${name}`, { hint, error: error(name) }) });
   return (
-    <form ref={formRef} onSubmit={submit} noValidate className="flex flex-col gap-4">
+    <form ref={formRef} onSubmit={submit} noValidate className="@container flex flex-col gap-4">
       <input type="hidden" name="renderedAt" value={renderedAt} />
-      <div className="grid gap-4 sm:grid-cols-2">
+      <div className="grid gap-4 @xl:grid-cols-2">
         <QuoteField id={`${id}-name`} label="Your name" error={error("name")}>
           <input {...control("name")} autoComplete="name" className={fieldClass} />
         </QuoteField>
@@ -71,7 +74,7 @@ export default function QuoteForm({ context, tires, onCancel }: { context: Quote
       <QuoteField id={`${id}-tires`} label="Tires or size" hint="Filled in from this page; change it as you like." error={error("tires")}>
         <textarea {...control("tires", true)} rows={2} defaultValue={tires} className={`${fieldClass} py-2`} />
       </QuoteField>
-      <div className="grid gap-4 sm:grid-cols-2">
+      <div className="grid gap-4 @xl:grid-cols-2">
         <QuoteField id={`${id}-quantity`} label={`How many tires (${MIN_QUANTITY}–${MAX_QUANTITY})`} error={error("quantity")}>
           <input {...control("quantity")} type="number" inputMode="numeric" min={MIN_QUANTITY} max={MAX_QUANTITY} defaultValue={DEFAULT_QUANTITY} className={fieldClass} />
         </QuoteField>
