@@ -1,0 +1,81 @@
+// @vitest-environment jsdom
+import { act, cleanup, fireEvent, render, screen } from "@testing-library/react";
+import { afterEach, describe, expect, it, vi } from "vitest";
+import QuoteForm from "@/components/quotes/quote-form";
+
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+});
+
+function renderForm() {
+  render(<QuoteForm context={{ source: "size-sheet", reference: "235/65R17" }} tires="235/65R17" onCancel={() => undefined} />);
+}
+
+function fillIn() {
+  fireEvent.change(screen.getByLabelText("Your name"), { target: { value: "Rosa Iverley" } });
+  fireEvent.change(screen.getByLabelText("E-mail (the answer goes here)"), { target: { value: "rosa@example.test" } });
+  fireEvent.change(screen.getByLabelText("Vehicle"), { target: { value: "2019 family SUV" } });
+  const renderedAt = document.querySelector<HTMLInputElement>('input[name="renderedAt"]')!;
+  renderedAt.value = String(Date.now() - 15_000);
+}
+
+async function send() {
+  await act(async () => {
+    fireEvent.click(screen.getByRole("button", { name: "Send the request" }));
+  });
+}
+
+function answer(status: number, body: unknown) {
+  const fetchMock = vi.fn(async () => new Response(JSON.stringify(body), { status, headers: { "content-type": "application/json" } }));
+  vi.stubGlobal("fetch", fetchMock);
+  return fetchMock;
+}
+
+describe("the Ask the shop form", () => {
+  it("marks each wrong field, reads its message with it, and puts the focus on the first", async () => {
+    const fetchMock = answer(201, { id: 1, status: "new" });
+    renderForm();
+    fireEvent.change(screen.getByLabelText("E-mail (the answer goes here)"), { target: { value: "rosa.example.test" } });
+    await send();
+    const name = screen.getByLabelText("Your name");
+    expect(name.getAttribute("aria-invalid")).toBe("true");
+    expect(document.activeElement).toBe(name);
+    const email = screen.getByLabelText("E-mail (the answer goes here)");
+    expect(document.getElementById(email.getAttribute("aria-describedby")!)?.textContent).toBe("Check the e-mail address: it should look like name@example.com");
+    expect(screen.getByLabelText("Phone (optional)").getAttribute("aria-invalid")).toBeNull();
+    expect(fetchMock).not.toHaveBeenCalled();
+  });
+
+  it("keeps the spam trap out of reach: out of the tab order, not autofilled, and labelled to stay empty", () => {
+    renderForm();
+    const trap = screen.getByLabelText("Leave this field empty: it is only here to catch automated spam");
+    expect(trap.getAttribute("tabindex")).toBe("-1");
+    expect(trap.getAttribute("autocomplete")).toBe("off");
+    expect(trap.closest(".sr-only")).not.toBeNull();
+  });
+
+  it("sends the request with the page's source and how long the form was open, then says what happens next", async () => {
+    const fetchMock = answer(201, { id: 17, status: "new" });
+    renderForm();
+    fillIn();
+    await send();
+    const [, init] = fetchMock.mock.calls[0] as unknown as [string, RequestInit];
+    const body = JSON.parse(String(init.body));
+    expect(body).toMatchObject({ source: "size-sheet", reference: "235/65R17", tires: "235/65R17", quantity: 4, website: "" });
+    expect(body.fillMs).toBeGreaterThanOrEqual(15_000);
+    expect(screen.getByRole("status").textContent).toContain("Your request is with the shop (number 17).");
+    expect(screen.getByRole("status").textContent).toContain("A confirmation is on its way to rosa@example.test.");
+  });
+
+  it("shows the server's refusal in plain words when too many requests were sent", async () => {
+    const message = "Too many requests were sent from here in a short time. Please try again in 10 minutes, or call the shop.";
+    answer(429, { error: { code: "rate_limited", message } });
+    renderForm();
+    fillIn();
+    await send();
+    const alert = screen.getByRole("alert");
+    expect(alert.textContent).toBe(message);
+    expect(document.activeElement).toBe(alert);
+  });
+});
