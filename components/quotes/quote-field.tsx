@@ -9,12 +9,12 @@ export function QuoteField({ id, label, hint, error, children }: { id: string; l
       <label htmlFor={id} className="font-semibold">
         {label}
       </label>
+      {children}
       {hint ? (
         <p id={`${id}-hint`} className="text-sm text-ink-soft">
           {hint}
         </p>
       ) : null}
-      {children}
       {error ? (
         <p id={`${id}-error`} className="text-sm text-danger">
           {error}
