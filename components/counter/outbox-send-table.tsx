@@ -10,32 +10,32 @@ export function OutboxSendTable({ sends }: { sends: EmailSendRow[] }) {
   if (sends.length === 0) return <p className="text-ink-soft">Nothing has been sent yet.</p>;
   return (
     <div className="overflow-x-auto" role="region" aria-labelledby="outbox-sends-caption" tabIndex={0}>
-      <table className="w-full min-w-[44rem] border-collapse text-left text-sm">
+      <table className="w-full border-collapse text-left text-sm">
         <caption id="outbox-sends-caption" className="mb-2 text-left font-semibold">
-          The last {sends.length} e-mails, newest first (times in UTC)
+          {sends.length === 1 ? "The only e-mail so far" : `The last ${sends.length} e-mails, newest first`} (times in UTC)
         </caption>
         <thead>
           <tr className="border-b border-rule">
             <th scope="col" className="py-2 pr-3">When</th>
-            <th scope="col" className="py-2 pr-3">What</th>
-            <th scope="col" className="py-2 pr-3">To</th>
-            <th scope="col" className="py-2 pr-3">Status</th>
-            <th scope="col" className="py-2 pr-3">Tries</th>
-            <th scope="col" className="py-2">Error</th>
+            <th scope="col" className="py-2 pr-3">E-mail</th>
+            <th scope="col" className="py-2">Status</th>
           </tr>
         </thead>
         <tbody>
           {sends.map((send) => (
             <tr key={send.id} className="border-b border-rule align-top">
-              <td className="py-2 pr-3 whitespace-nowrap">{when.format(send.createdAt)}</td>
+              <td className="py-2 pr-3">{when.format(send.createdAt)}</td>
               <td className="py-2 pr-3">
-                {kindLabel[send.kind]}
-                <span className="block text-ink-soft">{send.subject}</span>
+                <span className="font-semibold">{kindLabel[send.kind]}</span> to <span className="wrap-anywhere">{send.toAddress}</span>
+                <span className="block text-ink-soft break-words">{send.subject}</span>
               </td>
-              <td className="py-2 pr-3 break-all">{send.toAddress}</td>
-              <td className={`py-2 pr-3 font-semibold ${send.status === "failed" ? "text-danger" : ""}`}>{statusLabel[send.status]}</td>
-              <td className="py-2 pr-3">{send.attempts}</td>
-              <td className="py-2 break-words">{send.error ?? ""}</td>
+              <td className="py-2">
+                <span className={`font-semibold ${send.status === "failed" ? "text-danger" : ""}`}>{statusLabel[send.status]}</span>
+                <span className="block text-ink-soft">
+                  {send.attempts} {send.attempts === 1 ? "try" : "tries"}
+                </span>
+                {send.error ? <span className="block break-words">{send.error}</span> : null}
+              </td>
             </tr>
           ))}
         </tbody>

@@ -9,7 +9,7 @@ export function EmailHistory({ sends }: { sends: EmailSendRow[] }) {
   if (sends.length === 0) return <p className="text-ink-soft">Nobody has e-mailed this card yet.</p>;
   return (
     <div className="overflow-x-auto" role="region" aria-labelledby="email-history-heading" tabIndex={0}>
-      <table className="w-full min-w-[32rem] border-collapse text-left text-sm">
+      <table className="w-full border-collapse text-left text-sm">
         <caption id="email-history-heading" className="mb-2 text-left font-semibold">
           Sent from this card (times in UTC)
         </caption>
@@ -24,9 +24,9 @@ export function EmailHistory({ sends }: { sends: EmailSendRow[] }) {
         <tbody>
           {sends.map((send) => (
             <tr key={send.id} className="border-b border-rule align-top">
-              <td className="py-2 pr-3 whitespace-nowrap">{when.format(send.createdAt)}</td>
+              <td className="py-2 pr-3">{when.format(send.createdAt)}</td>
               <td className="py-2 pr-3">{send.senderName ?? "A removed account"}</td>
-              <td className="py-2 pr-3 break-all">{send.toAddress}</td>
+              <td className="py-2 pr-3 wrap-anywhere">{send.toAddress}</td>
               <td className="py-2">
                 <span className={send.status === "failed" ? "font-semibold text-danger" : "font-semibold"}>{statusLabel[send.status]}</span>
                 {send.attempts > 1 ? ` after ${send.attempts} tries` : ""}
