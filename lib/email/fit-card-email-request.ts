@@ -1,16 +1,13 @@
 import { randomUUID } from "node:crypto";
-import { createElement } from "react";
 import { z } from "zod";
-import { FitCardEmail } from "@/components/email/fit-card-email";
 import type { Database } from "@/db/client";
 import { readFitCard } from "@/lib/fit-cards/read-card";
 import { hitRateLimit, type RateLimitVerdict } from "@/lib/rate-limit/rate-limit";
 import { getShopContact } from "@/lib/shop/queries";
-import { fitCardEmailContent } from "./fit-card-email-content";
+import { type FitCardEmailContent, fitCardEmailContent } from "./fit-card-email-content";
 import type { FitCardEmailBody } from "./fit-card-email-input";
 import { fitCardEmailText } from "./fit-card-email-text";
 import { type RecordedSendResult, sendRecordedEmail } from "./recorded-send";
-import { renderEmailHtml } from "./render-email";
 
 const countSchema = z.coerce.number().int().min(1).max(10_000);
 
@@ -29,14 +26,22 @@ export type EmailFitCardOutcome =
   | { status: "rate_limited"; retryAfterSeconds: number }
   | { status: "attempted"; result: RecordedSendResult };
 
+export interface FitCardEmailRequest {
+  senderId: string;
+  slug: string;
+  link: string;
+  body: FitCardEmailBody;
+  /** The client's Idempotency-Key; null makes this request an e-mail of its own. */
+  clientKey: string | null;
+  /** The HTML version; the caller picks the template, since lib code renders no components. */
+  renderHtml: (content: FitCardEmailContent) => Promise<string>;
+}
+
 /**
  * E-mails a Fit card's link and key numbers. The same client key for the same card always means the
  * same e-mail, so a "Try again" after a failure or a timeout never delivers it twice.
  */
-export async function emailFitCard(
-  db: Database,
-  { senderId, slug, link, body, clientKey }: { senderId: string; slug: string; link: string; body: FitCardEmailBody; clientKey: string | null },
-): Promise<EmailFitCardOutcome> {
+export async function emailFitCard(db: Database, { senderId, slug, link, body, clientKey, renderHtml }: FitCardEmailRequest): Promise<EmailFitCardOutcome> {
   const lookup = await readFitCard(db, slug);
   if (lookup.status !== "found") return lookup;
   const verdict = await hitFitCardEmailLimit(db, senderId);
@@ -49,7 +54,7 @@ export async function emailFitCard(
     to: body.to,
     subject: content.subject,
     text: fitCardEmailText(content),
-    html: await renderEmailHtml(createElement(FitCardEmail, { content })),
+    html: await renderHtml(content),
     idempotencyKey: `fit-card:${slug}:${clientKey ?? randomUUID()}`,
   });
   return { status: "attempted", result };
