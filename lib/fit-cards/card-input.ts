@@ -1,9 +1,11 @@
 import { z } from "zod";
 import { LOAD_RANGES } from "@/lib/tire";
 import { MAX_COMPARED_SIZES } from "@/lib/compare/read-sizes";
-import { FIT_CARD_SLUG_PATTERN } from "./slug";
 
 export const MAX_CARD_TIRES = 6;
+
+/** The shape of a slug (see slug.ts), to refuse anything else before touching the database. */
+export const FIT_CARD_SLUG_PATTERN = /^[A-Za-z0-9_-]{24}$/;
 export const MAX_NOTE_LENGTH = 1000;
 
 /**

@@ -7,6 +7,3 @@ export const SLUG_BYTES = 18;
 export function newFitCardSlug(): string {
   return randomBytes(SLUG_BYTES).toString("base64url");
 }
-
-/** The shape of a slug, to refuse anything else before touching the database. */
-export const FIT_CARD_SLUG_PATTERN = /^[A-Za-z0-9_-]{24}$/;

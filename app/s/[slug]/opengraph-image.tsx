@@ -2,7 +2,7 @@ import { ImageResponse } from "next/og";
 import { drawnTireOf } from "@/components/reader/drawn-tire";
 import { TireSketch } from "@/components/share-image/tire-sketch";
 import { getDb } from "@/db/client";
-import { FIT_CARD_SLUG_PATTERN } from "@/lib/fit-cards/slug";
+import { FIT_CARD_SLUG_PATTERN } from "@/lib/fit-cards/card-input";
 import { readFitCard } from "@/lib/fit-cards/read-card";
 import { shareImageFonts, shareImageSize } from "@/lib/share-image/fonts";
 import { formatPrice } from "@/lib/shop/money";

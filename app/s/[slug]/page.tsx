@@ -9,7 +9,7 @@ import { hasRole } from "@/lib/auth/roles";
 import { getSessionUser } from "@/lib/auth/session";
 import { listFitCardSends } from "@/lib/email/queries";
 import { siteUrl } from "@/lib/env/site-url";
-import { FIT_CARD_SLUG_PATTERN } from "@/lib/fit-cards/slug";
+import { FIT_CARD_SLUG_PATTERN } from "@/lib/fit-cards/card-input";
 import { readFitCard } from "@/lib/fit-cards/read-card";
 import { getShopContact } from "@/lib/shop/queries";
 

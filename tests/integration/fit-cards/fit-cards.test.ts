@@ -6,7 +6,7 @@ import { createFitCard } from "@/lib/fit-cards/create-card";
 import { readFitCard } from "@/lib/fit-cards/read-card";
 import { listAllCards, listOwnCards } from "@/lib/fit-cards/queries";
 import { revokeFitCard } from "@/lib/fit-cards/revoke-card";
-import { FIT_CARD_SLUG_PATTERN } from "@/lib/fit-cards/slug";
+import { FIT_CARD_SLUG_PATTERN } from "@/lib/fit-cards/card-input";
 import { seedFixture } from "../catalog/fixtures";
 import { openTestDatabase, type TestDatabase, testDatabaseKinds } from "../helpers/test-database";
 

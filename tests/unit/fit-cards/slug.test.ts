@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { FIT_CARD_SLUG_PATTERN, newFitCardSlug, SLUG_BYTES } from "@/lib/fit-cards/slug";
+import { FIT_CARD_SLUG_PATTERN } from "@/lib/fit-cards/card-input";
+import { newFitCardSlug, SLUG_BYTES } from "@/lib/fit-cards/slug";
 
 describe("Fit card slugs", () => {
   // At least 128 bits of randomness for a link that must not be guessed (OWASP session-identifier guidance, from memory).
