@@ -1,7 +1,7 @@
 import { sql } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { brand, stockItem, tireLine } from "@/db/schema";
-import { ofBrand, ofLine } from "@/lib/catalog/catalog-select";
+import { ofBrand, ofLine, staffItemColumns } from "@/lib/catalog/catalog-select";
 import { catalogFilterWhere, type CatalogFilters } from "@/lib/counter/catalog-filters";
 import { writeCatalogCsv } from "./write-file";
 
@@ -11,19 +11,7 @@ import { writeCatalogCsv } from "./write-file";
  */
 export async function exportCatalogCsv(db: Database, filters: CatalogFilters): Promise<string> {
   const items = await db
-    .select({
-      sku: stockItem.sku,
-      brand: brand.name,
-      line: tireLine.name,
-      designation: stockItem.designation,
-      loadIndex: stockItem.loadIndex,
-      loadIndexDual: stockItem.loadIndexDual,
-      speedSymbol: stockItem.speedSymbol,
-      loadRange: stockItem.loadRange,
-      extraLoad: stockItem.extraLoad,
-      priceCents: stockItem.priceCents,
-      quantityOnHand: stockItem.quantityOnHand,
-    })
+    .select(staffItemColumns)
     .from(stockItem)
     .innerJoin(tireLine, ofLine)
     .innerJoin(brand, ofBrand)

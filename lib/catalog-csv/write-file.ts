@@ -14,7 +14,7 @@ export interface CatalogCsvItem {
   loadRange: string | null;
   extraLoad: boolean;
   priceCents: number;
-  quantityOnHand: number;
+  quantity: number;
 }
 
 function cells(item: CatalogCsvItem): Record<CatalogCsvColumnName, string> {
@@ -29,7 +29,7 @@ function cells(item: CatalogCsvItem): Record<CatalogCsvColumnName, string> {
     load_range: item.loadRange ?? "",
     extra_load: item.extraLoad ? "yes" : "no",
     price: centsToDollars(item.priceCents),
-    quantity: String(item.quantityOnHand),
+    quantity: String(item.quantity),
   };
 }
 

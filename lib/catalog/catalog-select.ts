@@ -7,3 +7,18 @@ export const ofBrand = eq(tireLine.brandId, brand.id);
 
 /** What the rules read from a candidate, besides what a Tire shows. */
 export const ruleFactColumns = { speedRank: stockItem.speedRank, loadRangePly: stockItem.loadRangePly };
+
+/** An item as staff edit it (the item form, the Counter's table, the CSV): its own fields and its brand and line by name. */
+export const staffItemColumns = {
+  sku: stockItem.sku,
+  brand: brand.name,
+  line: tireLine.name,
+  designation: stockItem.designation,
+  loadIndex: stockItem.loadIndex,
+  loadIndexDual: stockItem.loadIndexDual,
+  speedSymbol: stockItem.speedSymbol,
+  loadRange: stockItem.loadRange,
+  extraLoad: stockItem.extraLoad,
+  priceCents: stockItem.priceCents,
+  quantity: stockItem.quantityOnHand,
+};

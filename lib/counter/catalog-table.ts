@@ -1,26 +1,12 @@
 import { count } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { brand, stockItem, tireLine } from "@/db/schema";
-import { ofBrand, ofLine } from "@/lib/catalog/catalog-select";
+import { ofBrand, ofLine, staffItemColumns } from "@/lib/catalog/catalog-select";
 import { catalogFilterWhere, catalogFiltersSchema, catalogOrderBy, type CatalogFilters } from "./catalog-filters";
 
 export const CATALOG_TABLE_PAGE_SIZE = 50;
 
-const tableColumns = {
-  sku: stockItem.sku,
-  brand: brand.name,
-  line: tireLine.name,
-  designation: stockItem.designation,
-  loadIndex: stockItem.loadIndex,
-  loadIndexDual: stockItem.loadIndexDual,
-  speedSymbol: stockItem.speedSymbol,
-  loadRange: stockItem.loadRange,
-  extraLoad: stockItem.extraLoad,
-  season: tireLine.season,
-  terrain: tireLine.terrain,
-  priceCents: stockItem.priceCents,
-  quantity: stockItem.quantityOnHand,
-};
+const tableColumns = { ...staffItemColumns, season: tireLine.season, terrain: tireLine.terrain };
 
 export interface CatalogTablePage {
   rows: CatalogTableRow[];

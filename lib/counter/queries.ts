@@ -1,7 +1,7 @@
 import { and, asc, eq } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { brand, stockItem, tireLine } from "@/db/schema";
-import { ofBrand, ofLine } from "@/lib/catalog/catalog-select";
+import { ofBrand, ofLine, staffItemColumns } from "@/lib/catalog/catalog-select";
 
 export interface BrandWithLines {
   name: string;
@@ -23,19 +23,7 @@ export async function listBrandsWithLines(db: Database): Promise<BrandWithLines[
 /** A current (not retired) item as the edit form starts from it; null when there is none. */
 export async function getEditableItem(db: Database, sku: string) {
   const [row] = await db
-    .select({
-      sku: stockItem.sku,
-      brand: brand.name,
-      line: tireLine.name,
-      designation: stockItem.designation,
-      loadIndex: stockItem.loadIndex,
-      loadIndexDual: stockItem.loadIndexDual,
-      speedSymbol: stockItem.speedSymbol,
-      loadRange: stockItem.loadRange,
-      extraLoad: stockItem.extraLoad,
-      priceCents: stockItem.priceCents,
-      quantity: stockItem.quantityOnHand,
-    })
+    .select(staffItemColumns)
     .from(stockItem)
     .innerJoin(tireLine, ofLine)
     .innerJoin(brand, ofBrand)

@@ -9,7 +9,8 @@
 import { migrateDatabase, openDatabase, type Database } from "../../db/client";
 import { user } from "../../db/schema";
 import { seedCatalog } from "../../db/seed/catalog";
-import { DEMO_CATALOG, generateStock } from "../../db/seed/catalog-stock";
+import { DEMO_CATALOG } from "../../db/seed/catalog-stock";
+import { generatedCsvItems } from "../fixtures/generated-csv-items";
 import { importCatalogCsv } from "../../lib/catalog-csv/import";
 import { writeCatalogCsv } from "../../lib/catalog-csv/write-file";
 
@@ -18,19 +19,7 @@ const TARGET_MS = 3000;
 const actor = { id: "bench-staff", email: "bench@sidewise.test" };
 
 function importFile(priceCentsOffset: number): string {
-  const items = generateStock({ itemCount: ROWS + 100, seed: 31 }).slice(0, ROWS).map(({ brandName, lineName, input }, i) => ({
-    sku: `IMP-${String(i).padStart(5, "0")}`,
-    brand: brandName,
-    line: lineName,
-    designation: input.designation,
-    loadIndex: input.loadIndex,
-    loadIndexDual: input.loadIndexDual ?? null,
-    speedSymbol: input.speedSymbol,
-    loadRange: input.loadRange ?? null,
-    extraLoad: input.extraLoad ?? false,
-    priceCents: input.priceCents + priceCentsOffset,
-    quantityOnHand: input.quantity,
-  }));
+  const items = generatedCsvItems(ROWS, { seed: 31, skuPrefix: "IMP" }).map((item) => ({ ...item, priceCents: item.priceCents + priceCentsOffset }));
   return writeCatalogCsv(items);
 }
 

@@ -1,5 +1,6 @@
 import { ImageResponse } from "next/og";
 import { drawnTireOf } from "@/components/reader/drawn-tire";
+import { FactRows } from "@/components/share-image/fact-rows";
 import { TireSketch } from "@/components/share-image/tire-sketch";
 import { getDb } from "@/db/client";
 import { FIT_CARD_SLUG_PATTERN } from "@/lib/fit-cards/card-input";
@@ -21,7 +22,7 @@ export default async function FitCardShareImage({ params }: { params: Promise<{ 
   const sizes = card.sizes.map(sizeFromSlug).filter((tireSize): tireSize is TireSize => tireSize !== null);
   const compared = compareSizes(sizes);
   const stocked = card.tires.filter((tire) => tire.stillStocked);
-  const facts = compared.map((entry, index) => [
+  const facts: [string, string][] = compared.map((entry, index) => [
     entry.designation,
     `${formatLength(entry.overallDiameterMm, "metric")} · ${formatLength(entry.overallDiameterMm, "imperial")}${index === 0 ? "" : ` · ${formatSignedPercent(entry.diameterDiffPct)}`}`,
   ]);
@@ -35,14 +36,7 @@ export default async function FitCardShareImage({ params }: { params: Promise<{ 
         <div style={{ display: "flex", flexDirection: "column", justifyContent: "center", paddingLeft: 48, flex: 1 }}>
           <div style={{ fontSize: 28, color: "#244a9a", letterSpacing: 4 }}>SIDEWISE · FIT CARD</div>
           <div style={{ fontFamily: "Mono", fontSize: 60, fontWeight: 600, marginTop: 8 }}>{card.original.designation}</div>
-          <div style={{ display: "flex", flexDirection: "column", marginTop: 24 }}>
-            {facts.map(([label, value]) => (
-              <div key={label} style={{ display: "flex", justifyContent: "space-between", borderTop: "2px solid #d8d3c4", padding: "10px 0", fontSize: 25 }}>
-                <span style={{ color: "#4a5361", fontFamily: "Mono" }}>{label}</span>
-                <span style={{ fontFamily: "Mono", fontWeight: 600 }}>{value}</span>
-              </div>
-            ))}
-          </div>
+          <FactRows facts={facts} fontSize={25} monoLabels />
         </div>
       </div>
     ),

@@ -1,5 +1,6 @@
 import { ImageResponse } from "next/og";
 import { drawnTireOf } from "@/components/reader/drawn-tire";
+import { FactRows } from "@/components/share-image/fact-rows";
 import { TireSketch } from "@/components/share-image/tire-sketch";
 import { shareImageFonts, shareImageSize } from "@/lib/share-image/fonts";
 import { readSizeSheet } from "@/lib/size-sheet/read-size-sheet";
@@ -13,7 +14,7 @@ export default async function SizeShareImage({ params }: { params: Promise<{ siz
   const sheet = readSizeSheet((await params).size);
   if (!sheet) return new Response("Not a tire size", { status: 404 });
   const { geometry, size: tireSize, designation } = sheet;
-  const facts = [
+  const facts: [string, string][] = [
     ["Overall diameter", `${formatLength(geometry.overallDiameterMm, "metric")} · ${formatLength(geometry.overallDiameterMm, "imperial")}`],
     ["Section width", `${formatLength(geometry.sectionWidthMm, "metric")} · ${formatLength(geometry.sectionWidthMm, "imperial")}`],
     ["Sidewall", `${formatLength(geometry.sidewallMm, "metric")} · ${formatLength(geometry.sidewallMm, "imperial")}`],
@@ -28,14 +29,7 @@ export default async function SizeShareImage({ params }: { params: Promise<{ siz
         <div style={{ display: "flex", flexDirection: "column", justifyContent: "center", paddingLeft: 48, flex: 1 }}>
           <div style={{ fontSize: 28, color: "#244a9a", letterSpacing: 4 }}>SIDEWISE · SIZE SHEET</div>
           <div style={{ fontFamily: "Mono", fontSize: designation.length > 10 ? 58 : 76, fontWeight: 600, marginTop: 8 }}>{designation}</div>
-          <div style={{ display: "flex", flexDirection: "column", marginTop: 28 }}>
-            {facts.map(([label, value]) => (
-              <div key={label} style={{ display: "flex", justifyContent: "space-between", borderTop: "2px solid #d8d3c4", padding: "12px 0", fontSize: 27 }}>
-                <span style={{ color: "#4a5361" }}>{label}</span>
-                <span style={{ fontFamily: "Mono", fontWeight: 600 }}>{value}</span>
-              </div>
-            ))}
-          </div>
+          <FactRows facts={facts} fontSize={27} />
         </div>
       </div>
     ),

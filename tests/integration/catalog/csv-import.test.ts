@@ -2,7 +2,8 @@ import { and, count, countDistinct, eq, gt, like, min } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { auditEvent, stockItem, tireLine, user } from "@/db/schema";
 import { seedCatalog } from "@/db/seed/catalog";
-import { DEMO_CATALOG, generateStock } from "@/db/seed/catalog-stock";
+import { DEMO_CATALOG } from "@/db/seed/catalog-stock";
+import { generatedCsvItems } from "../../fixtures/generated-csv-items";
 import { exportCatalogCsv } from "@/lib/catalog-csv/export";
 import { importCatalogCsv } from "@/lib/catalog-csv/import";
 import type { ImportMode } from "@/lib/catalog-csv/import-report";
@@ -13,24 +14,7 @@ import { openTestDatabase, type TestDatabase, testDatabaseKinds } from "../helpe
 const staff = { id: "staff-csv", email: "counter@example.test" };
 const ROWS = 10_000;
 
-/** 10,000 new SKUs over real standard sizes and the demo lines, as a spreadsheet would hold them. */
-function generatedItems(prefix: string): CatalogCsvItem[] {
-  return generateStock({ itemCount: ROWS + 100, seed: 5 })
-    .slice(0, ROWS)
-    .map(({ brandName, lineName, input }, i) => ({
-      sku: `${prefix}-${String(i).padStart(5, "0")}`,
-      brand: brandName,
-      line: lineName,
-      designation: input.designation,
-      loadIndex: input.loadIndex,
-      loadIndexDual: input.loadIndexDual ?? null,
-      speedSymbol: input.speedSymbol,
-      loadRange: input.loadRange ?? null,
-      extraLoad: input.extraLoad ?? false,
-      priceCents: input.priceCents,
-      quantityOnHand: input.quantity,
-    }));
-}
+const generatedItems = (prefix: string): CatalogCsvItem[] => generatedCsvItems(ROWS, { seed: 5, skuPrefix: prefix });
 
 describe.each(testDatabaseKinds)("catalog CSV import on %s", (kind) => {
   let database: TestDatabase;
@@ -115,7 +99,7 @@ describe.each(testDatabaseKinds)("catalog CSV import on %s", (kind) => {
   it("updates the items whose price, quantity or line changed, and counts the rest unchanged", async () => {
     const items = generatedItems("IMP");
     items[0]!.priceCents += 1;
-    items[1]!.quantityOnHand += 3;
+    items[1]!.quantity += 3;
     Object.assign(items[3]!, items[3]!.brand === "Kaldren" ? { brand: "Ashlund", line: "Ivelle Tour" } : { brand: "Kaldren", line: "Orrick Tour" });
     // A line named in other letters is the same line.
     items[2]!.line = items[2]!.line.toUpperCase();

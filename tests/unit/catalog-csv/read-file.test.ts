@@ -68,9 +68,9 @@ describe("readCatalogCsv", () => {
 
   it("reads back what the export writes, formula-like cells included", () => {
     const items: CatalogCsvItem[] = [
-      { sku: "=SUM(A1)", brand: "Quensal", line: "Aldermoor, Tour", designation: "225/65R17", loadIndex: 102, loadIndexDual: null, speedSymbol: "H", loadRange: null, extraLoad: false, priceCents: 15_999, quantityOnHand: 0 },
-      { sku: "-LT1", brand: "Pellwick", line: 'Lorrimer "AT"', designation: "LT265/75R16", loadIndex: 123, loadIndexDual: 120, speedSymbol: "R", loadRange: "E", extraLoad: false, priceCents: 24_900, quantityOnHand: 4 },
-      { sku: "VLM-1", brand: "Velmora", line: "Estrelle GT", designation: "225/45ZR17", loadIndex: 94, loadIndexDual: null, speedSymbol: "(Y)", loadRange: null, extraLoad: true, priceCents: 5, quantityOnHand: 12 },
+      { sku: "=SUM(A1)", brand: "Quensal", line: "Aldermoor, Tour", designation: "225/65R17", loadIndex: 102, loadIndexDual: null, speedSymbol: "H", loadRange: null, extraLoad: false, priceCents: 15_999, quantity: 0 },
+      { sku: "-LT1", brand: "Pellwick", line: 'Lorrimer "AT"', designation: "LT265/75R16", loadIndex: 123, loadIndexDual: 120, speedSymbol: "R", loadRange: "E", extraLoad: false, priceCents: 24_900, quantity: 4 },
+      { sku: "VLM-1", brand: "Velmora", line: "Estrelle GT", designation: "225/45ZR17", loadIndex: 94, loadIndexDual: null, speedSymbol: "(Y)", loadRange: null, extraLoad: true, priceCents: 5, quantity: 12 },
     ];
     const text = writeCatalogCsv(items);
     expect(text.split("\r\n")[0]).toBe(CATALOG_CSV_COLUMN_NAMES.join(","));
@@ -80,7 +80,7 @@ describe("readCatalogCsv", () => {
     expect(
       result.rows.map(({ brand, tireLine, item, stockRow }) => ({
         sku: item.sku, brand, line: tireLine, designation: stockRow.designation, loadIndex: stockRow.loadIndex, loadIndexDual: stockRow.loadIndexDual,
-        speedSymbol: stockRow.speedSymbol, loadRange: stockRow.loadRange, extraLoad: stockRow.extraLoad, priceCents: stockRow.priceCents, quantityOnHand: stockRow.quantityOnHand,
+        speedSymbol: stockRow.speedSymbol, loadRange: stockRow.loadRange, extraLoad: stockRow.extraLoad, priceCents: stockRow.priceCents, quantity: stockRow.quantityOnHand,
       })),
     ).toEqual(items);
   });
