@@ -16,6 +16,9 @@ export function ImportGuide() {
         <a href="/downloads/sidewise-catalog-template.csv" download className={linkClass}>
           Download the template CSV
         </a>
+        <a href="/downloads/sidewise-catalog-columns.csv" download className={linkClass}>
+          Download the column guide (CSV)
+        </a>
       </section>
       <div role="region" aria-label="The columns" tabIndex={0} className="overflow-x-auto rounded border border-rule bg-sheet">
         <table className="w-full border-collapse text-left text-sm">

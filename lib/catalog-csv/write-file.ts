@@ -1,5 +1,5 @@
 import Papa from "papaparse";
-import { CATALOG_CSV_COLUMN_NAMES, type CatalogCsvColumnName } from "./columns";
+import { CATALOG_CSV_COLUMN_NAMES, CATALOG_CSV_COLUMNS, type CatalogCsvColumnName } from "./columns";
 import { centsToDollars } from "./money";
 
 /** A catalog item as the CSV writes it. */
@@ -42,5 +42,16 @@ export function writeCatalogCsv(items: readonly CatalogCsvItem[]): string {
   return Papa.unparse(
     { fields: [...CATALOG_CSV_COLUMN_NAMES], data: items.map((item) => CATALOG_CSV_COLUMN_NAMES.map((column) => cells(item)[column])) },
     { escapeFormulae: /^[=+\-@]/, newline: "\r\n" },
+  );
+}
+
+/** The column guide as a CSV to download beside the template: each column, whether required, its meaning and an example. */
+export function writeColumnGuideCsv(): string {
+  return Papa.unparse(
+    {
+      fields: ["column", "required", "meaning", "example"],
+      data: CATALOG_CSV_COLUMNS.map((column) => [column.name, column.required ? "yes" : "no", column.meaning, column.example]),
+    },
+    { newline: "\r\n" },
   );
 }

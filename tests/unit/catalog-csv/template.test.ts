@@ -5,6 +5,7 @@ import { DEMO_BRANDS } from "@/db/seed/catalog-lines";
 import { CATALOG_CSV_COLUMN_NAMES, CATALOG_CSV_COLUMNS } from "@/lib/catalog-csv/columns";
 import { readCatalogCsv } from "@/lib/catalog-csv/read-file";
 import { readCsvRow } from "@/lib/catalog-csv/read-row";
+import { writeColumnGuideCsv } from "@/lib/catalog-csv/write-file";
 
 const template = readFileSync(path.join(process.cwd(), "public", "downloads", "sidewise-catalog-template.csv"), "utf8");
 
@@ -26,5 +27,10 @@ describe("the catalog CSV template", () => {
     const example = Object.fromEntries(CATALOG_CSV_COLUMNS.map((column) => [column.name, column.example]));
     expect(readCsvRow(example, 2)).toMatchObject({ ok: true });
     expect(CATALOG_CSV_COLUMNS.every((column) => column.meaning.length > 10)).toBe(true);
+  });
+
+  it("ships a downloadable column guide written from the same column list", () => {
+    const guide = readFileSync(path.join(process.cwd(), "public", "downloads", "sidewise-catalog-columns.csv"), "utf8");
+    expect(guide).toBe(`${writeColumnGuideCsv()}\r\n`);
   });
 });
