@@ -2,7 +2,7 @@
 
 import { useEffect, useMemo, useRef, useState } from "react";
 import { ScaledTireDrawing } from "@/components/diagram/scaled-tire-drawing";
-import { SaveFitCard } from "@/components/fit-card/save-fit-card";
+import { SaveFitCard } from "@/components/fit-card/save-fit-card-button";
 import { UnitsToggle } from "@/components/units/units-toggle";
 import { useUnitSystem } from "@/components/units/use-unit-system";
 import { compareSizes, formatSize, sizeFromSlug, sizeGeometry, sizeToSlug, type TireSize } from "@/lib/tire";

@@ -1,4 +1,4 @@
-import type { FitCardDraft } from "@/components/fit-card/save-fit-card";
+import type { FitCardDraft } from "@/components/fit-card/save-fit-card-button";
 import type { AlternativesResponse, Candidate } from "@/lib/finder/alternatives-response";
 import { MAX_COMPARED_SIZES } from "@/lib/compare/read-sizes";
 

@@ -6,7 +6,7 @@ import { useUnitSystem } from "@/components/units/use-unit-system";
 import { UnitsToggle } from "@/components/units/units-toggle";
 import { alternativesSearch, type FinderQuery, finderSearch } from "@/lib/finder/finder-query";
 import { readOriginal, placardFor } from "@/lib/finder/original";
-import { SaveFitCard } from "@/components/fit-card/save-fit-card";
+import { SaveFitCard } from "@/components/fit-card/save-fit-card-button";
 import { AskTheShop } from "@/components/quotes/ask-the-shop";
 import { finderQuoteTires } from "@/components/quotes/quote-tires";
 import type { Candidate } from "@/lib/finder/alternatives-response";

@@ -1,5 +1,5 @@
 import { newFitCardSchema } from "@/lib/fit-cards/card-input";
-import type { FitCardDraft } from "./save-fit-card";
+import type { FitCardDraft } from "./save-fit-card-button";
 
 export type SaveOutcome =
   | { ok: true; url: string }

@@ -3,24 +3,16 @@
 import { useId, useState, type FormEvent } from "react";
 import { MAX_NOTE_LENGTH } from "@/lib/fit-cards/card-input";
 import { postFitCard, type SaveOutcome } from "./post-fit-card";
-
-export interface FitCardDraft {
-  sizes: string[];
-  skus?: string[];
-  loadIndex?: number;
-  speedSymbol?: string;
-  loadRange?: string;
-  tolerancePct?: number;
-}
+import type { FitCardDraft } from "./save-fit-card-button";
 
 const field = "min-h-11 rounded border border-rule bg-sheet px-3 aria-invalid:border-danger";
 
 /**
- * "Save as Fit card": asks for what the card needs that the page does not know (the original's load
- * index and speed symbol), a note and how long the link should work, then saves it through the API.
+ * The "Save as Fit card" form: asks for what the card needs that the page does not know (the
+ * original's load index and speed symbol), a note and how long the link should work, then saves it
+ * through the API. Loaded only when someone opens it (see save-fit-card-button.tsx).
  */
-export function SaveFitCard({ draft }: { draft: FitCardDraft }) {
-  const [open, setOpen] = useState(false);
+export function SaveFitCardForm({ draft, onCancel }: { draft: FitCardDraft; onCancel: () => void }) {
   const [busy, setBusy] = useState(false);
   const [outcome, setOutcome] = useState<SaveOutcome | null>(null);
   const id = useId();
@@ -33,13 +25,6 @@ export function SaveFitCard({ draft }: { draft: FitCardDraft }) {
     setBusy(false);
   }
 
-  if (!open) {
-    return (
-      <button type="button" onClick={() => setOpen(true)} className="min-h-11 self-start rounded border border-accent px-4 font-semibold text-accent print:hidden">
-        Save as Fit card
-      </button>
-    );
-  }
   if (outcome?.ok) {
     return (
       <div role="status" className="rounded border-l-4 border-accent bg-accent-soft p-4">
@@ -99,7 +84,7 @@ export function SaveFitCard({ draft }: { draft: FitCardDraft }) {
         <button type="submit" disabled={busy} className="min-h-11 rounded bg-accent px-4 font-semibold text-sheet disabled:opacity-60">
           {busy ? "Saving…" : "Save the card"}
         </button>
-        <button type="button" onClick={() => setOpen(false)} className="min-h-11 rounded border border-rule px-4 font-semibold">
+        <button type="button" onClick={onCancel} className="min-h-11 rounded border border-rule px-4 font-semibold">
           Cancel
         </button>
       </div>
