@@ -46,7 +46,7 @@ export default function RootLayout({ children }: { children: ReactNode }) {
           Skip to content
         </a>
         <SiteHeader />
-        <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-6 sm:py-10">
+        <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-6 sm:py-10 print:p-0">
           {children}
         </main>
         <SiteFooter />

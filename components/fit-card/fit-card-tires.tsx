@@ -16,7 +16,7 @@ export function FitCardTires({ tires }: { tires: CardTire[] }) {
       <h2 id="card-tires-heading" className="text-xl font-semibold">
         Tires picked for you
       </h2>
-      <ul className="grid gap-3 md:grid-cols-2">
+      <ul className="grid gap-3 md:grid-cols-2 print:grid-cols-3 print:gap-1">
         {tires.map((tire) => (
           <li key={tire.sku} className="rounded border border-rule bg-sheet p-4 print:break-inside-avoid">
             <h3 className="font-semibold">

@@ -17,7 +17,8 @@ export function FitCardView({ card, shop, url }: { card: PublicFitCard; shop: Sh
   const service = `${original.loadIndex}${original.speedSymbol}${original.loadRange ? `, load range ${original.loadRange}` : ""}`;
   const title = `Tires for ${original.designation}`;
   return (
-    <article className="flex flex-col gap-6 print:gap-3">
+    // Printed, the card fits one page: the print style sheet shrinks the type; here the drawing is capped and the tires sit three abreast.
+    <article className="flex flex-col gap-6 print:gap-2 print:[&_svg]:max-h-[1.7in]">
       <PageIntro eyebrow="Fit card" title={title}>
         <p>
           The tire on the car: <span className="font-mono">{original.designation}</span>, load index and speed symbol{" "}

@@ -4,7 +4,7 @@ import { ShopContactLine } from "./shop-contact";
 
 export function SiteFooter() {
   return (
-    <footer className="mt-16 border-t border-rule bg-sheet/95 text-sm text-ink-soft">
+    <footer className="mt-16 border-t border-rule bg-sheet/95 text-sm text-ink-soft print:hidden">
       <div className="mx-auto flex max-w-6xl flex-col gap-3 px-4 py-6">
         <p role="note" className="max-w-3xl">
           <span className="font-semibold text-ink">Safety: </span>

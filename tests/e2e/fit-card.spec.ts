@@ -70,6 +70,9 @@ test.describe("Fit card", () => {
     await expect(visitorPage.getByText("E-mail this card")).toHaveCount(0);
     await expect(visitorPage.getByText(address)).toHaveCount(0);
     await expectNoAxeViolations(visitorPage);
+    // The print view fits on one US Letter sheet: count the page objects of the PDF Chromium prints.
+    const printed = (await visitorPage.pdf({ format: "Letter" })).toString("latin1");
+    expect(printed.match(/\/Type\s*\/Page[^s]/g)).toHaveLength(1);
     await visitor.close();
 
     const image = await request.get(`/s/${slug}/opengraph-image`);
