@@ -3,6 +3,7 @@ import { connection } from "next/server";
 import { getDb } from "@/db/client";
 import { PlusForm } from "@/components/plus/plus-form";
 import { PlusGroups } from "@/components/plus/plus-groups";
+import { PlusPicks, PlusSaveCard } from "@/components/plus/plus-picks";
 import { PageIntro } from "@/components/ui/page-intro";
 import { SafetyCautions } from "@/components/ui/safety-cautions";
 import { readShopTolerance } from "@/lib/catalog/shop-tolerance";
@@ -53,7 +54,15 @@ export default async function PlusPlannerPage({ searchParams }: { searchParams: 
             made: &ldquo;In the catalog&rdquo; says which the shop can supply. The rim width is the theoretical one: section width × a factor set by
             the aspect ratio (UN Regulation No. 30, §6.1.1.1), rounded to the half inch.
           </p>
-          <PlusGroups plan={answer.plan} speedSymbol={query.success ? query.data.speedSymbol : undefined} />
+          <PlusPicks>
+            <PlusGroups plan={answer.plan} speedSymbol={query.success ? query.data.speedSymbol : undefined} />
+            <PlusSaveCard
+              original={answer.plan.original.designation}
+              loadIndex={query.success ? query.data.loadIndex : undefined}
+              speedSymbol={query.success ? query.data.speedSymbol : undefined}
+              tolerancePct={answer.plan.tolerancePct}
+            />
+          </PlusPicks>
         </>
       ) : null}
       <SafetyCautions extra={wheelCautions} />

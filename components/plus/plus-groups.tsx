@@ -1,5 +1,6 @@
 import Link from "next/link";
 import type { PlusPlan } from "@/lib/plus/plus-request";
+import { PickForCard } from "./plus-picks";
 import { formatLength, formatSignedPercent, sizeToSlug } from "@/lib/tire";
 
 const groupTitle = (plus: number, rim: number) =>
@@ -38,6 +39,7 @@ export function PlusGroups({ plan, speedSymbol }: PlusGroupsProps) {
                   <th scope="col" className="px-2 py-1 text-right font-semibold">Rim width</th>
                   <th scope="col" className="px-2 py-1 text-right font-semibold">Load index at least</th>
                   <th scope="col" className="py-1 pl-2 text-right font-semibold">In the catalog</th>
+                  <th scope="col" className="py-1 pl-2 text-right font-semibold">Fit card</th>
                 </tr>
               </thead>
               <tbody>
@@ -69,6 +71,7 @@ export function PlusGroups({ plan, speedSymbol }: PlusGroupsProps) {
                           <span className="text-ink-soft">none</span>
                         )}
                       </td>
+                      <td className="pl-2 text-right">{isOriginal ? null : <PickForCard designation={candidate.designation} />}</td>
                     </tr>
                   );
                 })}
