@@ -31,17 +31,19 @@ const fieldLabels: Record<(typeof AUDITED_FIELDS)[number], string> = {
 
 const shown = (field: string, value: unknown) => (value === null ? "none" : field === "priceCents" ? formatPrice(Number(value)) : String(value));
 
-/** "price $159.00 → $149.00; quantity 4 → 2" */
-function describeChanges(changes: ReturnType<typeof changedFields>): string {
+/** "price $159.00 → $149.00; quantity 4 → 2; line Ashlund Ivelle Tour → Ashlund Jorvane AT" */
+function describeChanges(changes: ReturnType<typeof changedFields>, lines: { from: string; to: string }): string {
   return Object.entries(changes)
-    .map(([field, { from, to }]) => `${fieldLabels[field as keyof typeof fieldLabels] ?? field} ${shown(field, from)} → ${shown(field, to)}`)
+    .map(([field, { from, to }]) =>
+      field === "lineId" ? `line ${lines.from} → ${lines.to}` : `${fieldLabels[field as keyof typeof fieldLabels] ?? field} ${shown(field, from)} → ${shown(field, to)}`,
+    )
     .join("; ");
 }
 
-/** A brand's line by name, in any letter case. */
-async function findLine(db: Database, brandName: string, lineName: string): Promise<StockLine | null> {
+/** A brand's line by name, in any letter case, with its names as the catalog spells them. */
+async function findLine(db: Database, brandName: string, lineName: string): Promise<(StockLine & { label: string }) | null> {
   const [line] = await db
-    .select({ id: tireLine.id, runFlat: tireLine.runFlat })
+    .select({ id: tireLine.id, runFlat: tireLine.runFlat, label: sql<string>`${brand.name} || ' ' || ${tireLine.name}` })
     .from(tireLine)
     .innerJoin(brand, ofBrand)
     .where(and(sql`lower(${brand.name}) = lower(${brandName})`, sql`lower(${tireLine.name}) = lower(${lineName})`))
@@ -89,7 +91,8 @@ export async function updateStockItem(db: Database, sku: string, changes: StockI
     if (!current) return refuse("not_found", `No current catalog item has the SKU "${sku}".`);
     const brandName = changes.brand ?? current.brand;
     const lineName = changes.line ?? current.line;
-    const line = changes.brand || changes.line ? await findLine(tx, brandName, lineName) : { id: current.lineId, runFlat: current.lineRunFlat };
+    const currentLabel = `${current.brand} ${current.line}`;
+    const line = changes.brand || changes.line ? await findLine(tx, brandName, lineName) : { id: current.lineId, runFlat: current.lineRunFlat, label: currentLabel };
     if (!line) return unknownLine(brandName, lineName);
     const input: StockItemInput = {
       sku,
@@ -107,7 +110,7 @@ export async function updateStockItem(db: Database, sku: string, changes: StockI
     await tx.update(stockItem).set({ ...built.row, updatedAt: new Date() }).where(eq(stockItem.sku, sku));
     const audited = changedFields(current, { ...current, ...built.row }, AUDITED_FIELDS);
     if (Object.keys(audited).length > 0) {
-      await recordAudit(tx, actor, [{ action: "item_changed", subject: sku, summary: describeChanges(audited), changes: audited }]);
+      await recordAudit(tx, actor, [{ action: "item_changed", subject: sku, summary: describeChanges(audited, { from: currentLabel, to: line.label }), changes: audited }]);
     }
     return currentTire(tx, sku);
   });

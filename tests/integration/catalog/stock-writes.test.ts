@@ -40,12 +40,13 @@ describe.each(testDatabaseKinds)("stock writes on %s", (kind) => {
 
   it("records who added, changed and retired the item, and nothing for refused writes", async () => {
     const events = await database.db
-      .select({ action: auditEvent.action, subject: auditEvent.subject, actorEmail: auditEvent.actorEmail, changes: auditEvent.changes })
+      .select({ action: auditEvent.action, subject: auditEvent.subject, actorEmail: auditEvent.actorEmail, changes: auditEvent.changes, summary: auditEvent.summary })
       .from(auditEvent)
       .orderBy(asc(auditEvent.id));
     expect(events.map((event) => event.action)).toEqual(["item_added", "item_changed", "item_retired"]);
     expect(events.every((event) => event.subject === "LMB-1" && event.actorEmail === staff.email)).toBe(true);
     expect(events[1]?.changes).toMatchObject({ quantityOnHand: { from: 2, to: 0 } });
     expect(Object.keys(events[1]?.changes ?? {}).sort()).toEqual(["lineId", "quantityOnHand"]);
+    expect(events[1]?.summary).toBe("quantity 2 → 0; line Lumbrel Hayward Trail → Lumbrel Hayward Mud");
   });
 });
