@@ -1,11 +1,11 @@
 "use client";
 
 import { useId, useState, type FormEvent } from "react";
+import { describedBy, fieldClass, FormField } from "@/components/ui/form-field";
 import { MAX_NOTE_LENGTH } from "@/lib/fit-cards/card-input";
 import { postFitCard, type SaveOutcome } from "./post-fit-card";
 import type { FitCardDraft } from "./save-fit-card-button";
 
-const field = "min-h-11 rounded border border-rule bg-sheet px-3 aria-invalid:border-danger";
 
 /**
  * The "Save as Fit card" form: asks for what the card needs that the page does not know (the
@@ -49,25 +49,25 @@ export function SaveFitCardForm({ draft, onCancel }: { draft: FitCardDraft; onCa
       </p>
       {needsService ? (
         <div className="grid grid-cols-2 gap-3">
-          <Field id={`${id}-load`} label="Load index on the car" error={error("loadIndex")}>
-            <input id={`${id}-load`} name="loadIndex" inputMode="numeric" defaultValue={draft.loadIndex ?? ""} aria-invalid={error("loadIndex") ? true : undefined} aria-describedby={`${id}-load-error`} className={field} />
-          </Field>
-          <Field id={`${id}-speed`} label="Speed symbol on the car" error={error("speedSymbol")}>
-            <input id={`${id}-speed`} name="speedSymbol" defaultValue={draft.speedSymbol ?? ""} aria-invalid={error("speedSymbol") ? true : undefined} aria-describedby={`${id}-speed-error`} className={field} />
-          </Field>
+          <FormField id={`${id}-load`} label="Load index on the car" error={error("loadIndex")}>
+            <input id={`${id}-load`} name="loadIndex" inputMode="numeric" defaultValue={draft.loadIndex ?? ""} {...describedBy(`${id}-load`, { error: error("loadIndex") })} className={fieldClass} />
+          </FormField>
+          <FormField id={`${id}-speed`} label="Speed symbol on the car" error={error("speedSymbol")}>
+            <input id={`${id}-speed`} name="speedSymbol" defaultValue={draft.speedSymbol ?? ""} {...describedBy(`${id}-speed`, { error: error("speedSymbol") })} className={fieldClass} />
+          </FormField>
         </div>
       ) : null}
-      <Field id={`${id}-note`} label="Note for the customer (optional)" error={error("note")}>
-        <textarea id={`${id}-note`} name="note" rows={3} maxLength={MAX_NOTE_LENGTH} aria-invalid={error("note") ? true : undefined} aria-describedby={`${id}-note-error`} className={`${field} py-2`} />
-      </Field>
-      <Field id={`${id}-expiry`} label="The link works" error={error("expiresInDays")}>
-        <select id={`${id}-expiry`} name="expiresInDays" defaultValue="30" className={field}>
+      <FormField id={`${id}-note`} label="Note for the customer (optional)" error={error("note")}>
+        <textarea id={`${id}-note`} name="note" rows={3} maxLength={MAX_NOTE_LENGTH} {...describedBy(`${id}-note`, { error: error("note") })} className={`${fieldClass} py-2`} />
+      </FormField>
+      <FormField id={`${id}-expiry`} label="The link works" error={error("expiresInDays")}>
+        <select id={`${id}-expiry`} name="expiresInDays" defaultValue="30" className={fieldClass}>
           <option value="">until withdrawn</option>
           <option value="7">for 7 days</option>
           <option value="30">for 30 days</option>
           <option value="90">for 90 days</option>
         </select>
-      </Field>
+      </FormField>
       <div role="alert" className="text-danger">
         {outcome && !outcome.ok ? (
           <>
@@ -92,16 +92,3 @@ export function SaveFitCardForm({ draft, onCancel }: { draft: FitCardDraft; onCa
   );
 }
 
-function Field({ id, label, error, children }: { id: string; label: string; error?: string; children: React.ReactNode }) {
-  return (
-    <div className="flex flex-col gap-1">
-      <label htmlFor={id} className="font-semibold">
-        {label}
-      </label>
-      {children}
-      <p id={`${id}-error`} className="text-sm text-danger">
-        {error ?? ""}
-      </p>
-    </div>
-  );
-}

@@ -3,7 +3,7 @@
 import { useEffect, useId, useRef, useState, type FormEvent } from "react";
 import { DEFAULT_QUANTITY, HONEYPOT_FIELD, MAX_QUANTITY, MIN_QUANTITY, PREFERRED_DAY_MAX_AHEAD } from "@/lib/quotes/quote-input";
 import { postQuoteRequest, type QuoteContext, type QuoteOutcome } from "./post-quote-request";
-import { describedBy, fieldClass, QuoteField } from "./quote-field";
+import { describedBy, fieldClass, FormField } from "@/components/ui/form-field";
 
 const FIELD_ORDER = ["name", "email", "phone", "vehicle", "tires", "quantity", "preferredDay"] as const;
 
@@ -58,29 +58,29 @@ export default function QuoteForm({ context, tires, onCancel }: { context: Quote
     <form ref={formRef} onSubmit={submit} noValidate className="@container flex flex-col gap-4">
       <input type="hidden" name="renderedAt" value={renderedAt} />
       <div className="grid gap-4 @xl:grid-cols-2">
-        <QuoteField id={`${id}-name`} label="Your name" error={error("name")}>
+        <FormField id={`${id}-name`} label="Your name" error={error("name")}>
           <input {...control("name")} autoComplete="name" className={fieldClass} />
-        </QuoteField>
-        <QuoteField id={`${id}-email`} label="E-mail (the answer goes here)" error={error("email")}>
+        </FormField>
+        <FormField id={`${id}-email`} label="E-mail (the answer goes here)" error={error("email")}>
           <input {...control("email")} type="email" autoComplete="email" className={fieldClass} />
-        </QuoteField>
-        <QuoteField id={`${id}-phone`} label="Phone (optional)" error={error("phone")}>
+        </FormField>
+        <FormField id={`${id}-phone`} label="Phone (optional)" error={error("phone")}>
           <input {...control("phone")} type="tel" autoComplete="tel" className={fieldClass} />
-        </QuoteField>
-        <QuoteField id={`${id}-vehicle`} label="Vehicle" hint="Year and kind is enough, such as “2019 family SUV”." error={error("vehicle")}>
+        </FormField>
+        <FormField id={`${id}-vehicle`} label="Vehicle" hint="Year and kind is enough, such as “2019 family SUV”." error={error("vehicle")}>
           <input {...control("vehicle", true)} className={fieldClass} />
-        </QuoteField>
+        </FormField>
       </div>
-      <QuoteField id={`${id}-tires`} label="Tires or size" hint="Filled in from this page; change it as you like." error={error("tires")}>
+      <FormField id={`${id}-tires`} label="Tires or size" hint="Filled in from this page; change it as you like." error={error("tires")}>
         <textarea {...control("tires", true)} rows={2} defaultValue={tires} className={`${fieldClass} py-2`} />
-      </QuoteField>
+      </FormField>
       <div className="grid gap-4 @xl:grid-cols-2">
-        <QuoteField id={`${id}-quantity`} label={`How many tires (${MIN_QUANTITY}–${MAX_QUANTITY})`} error={error("quantity")}>
+        <FormField id={`${id}-quantity`} label={`How many tires (${MIN_QUANTITY}–${MAX_QUANTITY})`} error={error("quantity")}>
           <input {...control("quantity")} type="number" inputMode="numeric" min={MIN_QUANTITY} max={MAX_QUANTITY} defaultValue={DEFAULT_QUANTITY} className={fieldClass} />
-        </QuoteField>
-        <QuoteField id={`${id}-preferredDay`} label="Preferred day for fitting (optional)" hint={`Up to ${PREFERRED_DAY_MAX_AHEAD} days ahead.`} error={error("preferredDay")}>
+        </FormField>
+        <FormField id={`${id}-preferredDay`} label="Preferred day for fitting (optional)" hint={`Up to ${PREFERRED_DAY_MAX_AHEAD} days ahead.`} error={error("preferredDay")}>
           <input {...control("preferredDay", true)} type="date" min={localDay()} max={localDay(PREFERRED_DAY_MAX_AHEAD)} className={fieldClass} />
-        </QuoteField>
+        </FormField>
       </div>
       <div className="sr-only">
         <label htmlFor={`${id}-${HONEYPOT_FIELD}`}>Leave this field empty: it is only here to catch automated spam</label>

@@ -1,4 +1,5 @@
 import type { Original } from "@/lib/catalog/original";
+import { diameterChangePct } from "@/lib/tire";
 import { failedRules, qualifyingReasons, type RuleFacts } from "@/lib/catalog/reasons";
 
 export interface CardTireFacts extends RuleFacts {
@@ -16,7 +17,7 @@ export interface TireVerdict {
 
 /** A chosen tire measured against the card's original by the finder's own rules and words. */
 export function cardTireVerdict(original: Original, tire: CardTireFacts, tolerancePct: number): TireVerdict {
-  const diffPct = ((tire.overallDiameterMm - original.overallDiameterMm) / original.overallDiameterMm) * 100;
+  const diffPct = diameterChangePct(original.overallDiameterMm, tire.overallDiameterMm);
   const failed = failedRules(original, tire, diffPct, tolerancePct);
   if (tire.rimDiameterIn !== original.rimDiameterIn) {
     failed.unshift(`${tire.rimDiameterIn}-inch rim, not ${original.rimDiameterIn}-inch: a plus size needs other wheels`);

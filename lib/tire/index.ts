@@ -15,4 +15,5 @@ export * from "./describe";
 export { COMMON_SIZES } from "./common-sizes";
 export * from "./placard";
 export * from "./compare";
+export { diameterChangePct } from "./diameter-change";
 export * from "./plus";

@@ -3,7 +3,7 @@ import type { ReactNode } from "react";
 export const fieldClass = "min-h-11 w-full rounded border border-rule bg-sheet px-3 text-base aria-invalid:border-danger";
 
 /** A label, its control, a hint and the field's error, tied together for screen readers by the ids. */
-export function QuoteField({ id, label, hint, error, children }: { id: string; label: string; hint?: string; error?: string; children: ReactNode }) {
+export function FormField({ id, label, hint, error, children }: { id: string; label: string; hint?: string; error?: string; children: ReactNode }) {
   return (
     <div className="flex min-w-0 flex-col gap-1">
       <label htmlFor={id} className="font-semibold">
