@@ -64,6 +64,52 @@ export const tireLine = pgTable(
 );
 
 /**
+ * The facts the rules of equal-or-better read from an item (rim, service type, construction,
+ * run-flat, overall diameter, load index, speed, load range), shared by every item that has them,
+ * with how many current items have them and how many of those are on hand. The database keeps it:
+ * triggers on stock_item give each row its fitment and count every write (migration 0007). The
+ * finder judges fitments rather than items, so its work follows how many distinct fitments lie
+ * near a size, not how many items the catalog holds.
+ */
+export const stockFitment = pgTable(
+  "stock_fitment",
+  {
+    id: serial().primaryKey(),
+    rimDiameterIn: doublePrecision().notNull(),
+    serviceType: text({ enum: SERVICE_TYPES }).notNull(),
+    construction: text({ enum: CONSTRUCTIONS }).notNull(),
+    runFlat: boolean().notNull(),
+    overallDiameterMm: doublePrecision().notNull(),
+    loadIndex: smallint().notNull(),
+    loadIndexDual: smallint(),
+    speedRank: smallint().notNull(),
+    loadRangePly: smallint(),
+    /** Current (not retired) items with these facts. */
+    itemCount: integer().notNull().default(0),
+    /** Of those, the items with at least one on hand. */
+    inStockCount: integer().notNull().default(0),
+  },
+  (table) => [
+    unique("stock_fitment_facts")
+      .on(
+        table.rimDiameterIn,
+        table.serviceType,
+        table.construction,
+        table.runFlat,
+        table.overallDiameterMm,
+        table.loadIndex,
+        table.loadIndexDual,
+        table.speedRank,
+        table.loadRangePly,
+      )
+      .nullsNotDistinct(),
+    // The finder reads the fitments of one rim, service type and construction (rules 1 and 6).
+    index("stock_fitment_search").on(table.rimDiameterIn, table.serviceType, table.construction, table.overallDiameterMm),
+    check("stock_fitment_counts", sql`0 <= ${table.inStockCount} and ${table.inStockCount} <= ${table.itemCount}`),
+  ],
+);
+
+/**
  * One item the shop sells: a line in one size and service description. The designation is stored
  * normalized and also taken apart, so that the replacement finder can compare in SQL; the overall
  * diameter is worked out by the tire core when the row is written.
@@ -100,18 +146,32 @@ export const stockItem = pgTable(
     priceCents: integer().notNull(),
     quantityOnHand: integer().notNull(),
     retired: boolean().notNull().default(false),
+    /** Set by the database on every write (see stockFitment); never given by the application. */
+    fitmentId: integer().references(() => stockFitment.id, { onDelete: "restrict" }),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
   (table) => [
-    // The finder walks outwards from the original's diameter within its rim, service type and
-    // construction (rules 1 and 6), nearest first and then by price and SKU: upwards on one index,
-    // downwards on the other, so a page reads about as many rows as it shows.
-    index("stock_item_finder_up")
-      .on(table.rimDiameterIn, table.serviceType, table.construction, table.overallDiameterMm, table.priceCents, sql`${table.sku} collate "C"`)
+    // The finder reads a few of a fitment's items, cheapest first (then by SKU in plain character
+    // order), along one of two indexes: for one fitment, or for every fitment of one size and
+    // diameter at once, skipping items of other fitments. Each also holds what the filters and the
+    // join read, so that the finder reads the index alone.
+    index("stock_item_fitment")
+      .on(table.fitmentId, table.priceCents, sql`${table.sku} collate "C"`, table.lineId, table.quantityOnHand, table.id)
       .where(sql`not ${table.retired}`),
-    index("stock_item_finder_down")
-      .on(table.rimDiameterIn, table.serviceType, table.construction, table.overallDiameterMm.desc().nullsFirst(), table.priceCents, sql`${table.sku} collate "C"`)
+    index("stock_item_diameter")
+      .on(
+        table.rimDiameterIn,
+        table.serviceType,
+        table.construction,
+        table.overallDiameterMm,
+        table.priceCents,
+        sql`${table.sku} collate "C"`,
+        table.fitmentId,
+        table.lineId,
+        table.quantityOnHand,
+        table.id,
+      )
       .where(sql`not ${table.retired}`),
     // Catalog pages walk SKUs in plain character order, the same on every server.
     index("stock_item_sku_plain_order")
@@ -142,6 +202,8 @@ export const stockItem = pgTable(
       "stock_item_load_range",
       sql`(${table.loadRange} is null) = (${table.loadRangePly} is null) and ${table.loadRangePly} between 4 and 24`,
     ),
+    // The trigger that sets it runs before this check.
+    check("stock_item_fitment_set", sql`${table.fitmentId} is not null`),
     check("stock_item_diameter", sql`${table.overallDiameterMm} > 0`),
     check("stock_item_price", sql`${table.priceCents} >= 0`),
     check("stock_item_quantity", sql`${table.quantityOnHand} >= 0`),
@@ -151,6 +213,7 @@ export const stockItem = pgTable(
 export type Brand = typeof brand.$inferSelect;
 export type TireLine = typeof tireLine.$inferSelect;
 export type NewTireLine = typeof tireLine.$inferInsert;
+export type StockFitment = typeof stockFitment.$inferSelect;
 export type StockItem = typeof stockItem.$inferSelect;
 export type NewStockItem = typeof stockItem.$inferInsert;
 export type Season = (typeof SEASONS)[number];

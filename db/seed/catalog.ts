@@ -1,6 +1,6 @@
 import { sql } from "drizzle-orm";
 import type { Database } from "../client";
-import { brand, stockItem, tireLine, type NewTireLine } from "../schema";
+import { brand, stockFitment, stockItem, tireLine, type NewTireLine } from "../schema";
 import { buildStockRow } from "@/lib/catalog/stock-row";
 import { insertStockRows } from "@/lib/catalog/write-stock";
 import { CATEGORY_TRAITS, DEMO_BRANDS, type LineCategory } from "./catalog-lines";
@@ -9,6 +9,7 @@ import { generateStock, type CatalogPlan } from "./catalog-stock";
 /** Empties the catalog, children first. */
 export async function clearCatalog(db: Database): Promise<void> {
   await db.delete(stockItem);
+  await db.delete(stockFitment);
   await db.delete(tireLine);
   await db.delete(brand);
 }

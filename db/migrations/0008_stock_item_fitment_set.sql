@@ -1,0 +1,1 @@
+ALTER TABLE "stock_item" ADD CONSTRAINT "stock_item_fitment_set" CHECK ("stock_item"."fitment_id" is not null);
