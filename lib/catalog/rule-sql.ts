@@ -1,5 +1,5 @@
-import { and, between, eq, gt, gte, isNull, lte, not, or, sql, type SQL } from "drizzle-orm";
-import { brand, stockItem, tireLine, type Season, type Terrain } from "@/db/schema";
+import { and, between, eq, gt, gte, isNull, lte, or, sql, type SQL } from "drizzle-orm";
+import { brand, stockFitment, stockItem, tireLine, type Season, type Terrain } from "@/db/schema";
 import { ofBrand } from "./catalog-select";
 import type { AlternativesSort } from "./cursor";
 import type { Original } from "./original";
@@ -77,17 +77,26 @@ export type FinderValues = ReturnType<typeof finderValues>;
 export const placeholder = (name: keyof FinderValues) => sql.placeholder(name);
 const float = (name: keyof FinderValues) => sql`${placeholder(name)}::float8`;
 
-/** The rules of equal-or-better as SQL conditions over stock_item, for one shape of search. */
+/**
+ * The rules of equal-or-better as SQL for one shape of search. Rules 1–7 read only a fitment's
+ * facts, so they are judged once per fitment; the filters read the items themselves.
+ */
 export interface RuleSql {
   /** Signed (candidate − original) ÷ original × 100, in the order of operations the tire core uses. */
   diffPct: SQL<number>;
-  /** Rules 1, 6 and 7, retired items left out, and the filters: what every result and near miss meets. */
+  /** Rules 1, 6 and 7: the fitments a search looks at at all. */
   eligible: SQL;
-  /** Rule 2, as the exact range of diameters it accepts (toleranceBand), so that the finder indexes serve it. */
+  /** Rule 2, as the exact range of diameters it accepts (toleranceBand). */
   diameterFits: SQL;
   loadIndexHolds: SQL;
   speedHolds: SQL;
   loadRangeHolds: SQL;
+  /** Rules 1 and 6 over stock_item: items of the original's rim, construction and service type. */
+  itemOfSize: SQL;
+  /** The filters, over stock_item; undefined when the search sets none. */
+  itemFilter: SQL | undefined;
+  /** How many current items of a fitment pass the filters, where the fitment's own counts tell; else undefined. */
+  countedItems: SQL<number> | undefined;
 }
 
 /** Filters on the line or brand, as a set of lines, so that the finder reads stock_item alone. */
@@ -103,33 +112,49 @@ function lineFilter(shape: FinderShape): SQL | undefined {
   return sql`${stockItem.lineId} in (select ${tireLine.id} from ${tireLine} inner join ${brand} on ${ofBrand} where ${and(...conditions)})`;
 }
 
+const fitmentCounts = {
+  any: sql<number>`${stockFitment.itemCount}`,
+  yes: sql<number>`${stockFitment.inStockCount}`,
+  no: sql<number>`(${stockFitment.itemCount} - ${stockFitment.inStockCount})`,
+};
+
 export function ruleSql(shape: FinderShape): RuleSql {
   const stockFilter = { any: undefined, yes: gt(stockItem.quantityOnHand, 0), no: eq(stockItem.quantityOnHand, 0) }[shape.inStock];
+  const itemOnlyFilters = shape.lineFilters.length > 0 || shape.minPrice || shape.maxPrice;
+  const fitment = stockFitment;
   return {
-    diffPct: sql<number>`((${stockItem.overallDiameterMm} - ${float("reference")}) / ${float("reference")} * 100)`,
+    diffPct: sql<number>`((${fitment.overallDiameterMm} - ${float("reference")}) / ${float("reference")} * 100)`,
     eligible: and(
-      not(stockItem.retired),
-      eq(stockItem.rimDiameterIn, placeholder("rim")),
-      eq(stockItem.construction, placeholder("construction")),
+      eq(fitment.rimDiameterIn, placeholder("rim")),
+      eq(fitment.construction, placeholder("construction")),
       // A temporary spare is never a candidate, not even for another temporary spare.
-      shape.hasCandidates ? eq(stockItem.serviceType, placeholder("serviceType")) : sql`false`,
-      shape.runFlatOnly ? eq(stockItem.runFlat, true) : undefined,
+      shape.hasCandidates ? eq(fitment.serviceType, placeholder("serviceType")) : sql`false`,
+      shape.runFlatOnly ? eq(fitment.runFlat, true) : undefined,
+      gt(fitment.itemCount, 0),
+    ) as SQL,
+    diameterFits: between(fitment.overallDiameterMm, placeholder("minMm"), placeholder("maxMm")),
+    loadIndexHolds: and(
+      gte(fitment.loadIndex, placeholder("loadIndex")),
+      shape.dualIndex ? or(isNull(fitment.loadIndexDual), gte(fitment.loadIndexDual, placeholder("loadIndexDual"))) : undefined,
+    ) as SQL,
+    speedHolds: gte(fitment.speedRank, placeholder("speedRank")),
+    loadRangeHolds: shape.loadRange ? sql`coalesce(${fitment.loadRangePly} >= ${placeholder("loadRangePly")}, false)` : sql`true`,
+    itemOfSize: and(
+      eq(stockItem.rimDiameterIn, placeholder("rim")),
+      eq(stockItem.serviceType, placeholder("serviceType")),
+      eq(stockItem.construction, placeholder("construction")),
+    ) as SQL,
+    itemFilter: and(
       lineFilter(shape),
       shape.minPrice ? gte(stockItem.priceCents, placeholder("minPriceCents")) : undefined,
       shape.maxPrice ? lte(stockItem.priceCents, placeholder("maxPriceCents")) : undefined,
       stockFilter,
-    ) as SQL,
-    diameterFits: between(stockItem.overallDiameterMm, placeholder("minMm"), placeholder("maxMm")),
-    loadIndexHolds: and(
-      gte(stockItem.loadIndex, placeholder("loadIndex")),
-      shape.dualIndex ? or(isNull(stockItem.loadIndexDual), gte(stockItem.loadIndexDual, placeholder("loadIndexDual"))) : undefined,
-    ) as SQL,
-    speedHolds: gte(stockItem.speedRank, placeholder("speedRank")),
-    loadRangeHolds: shape.loadRange ? sql`coalesce(${stockItem.loadRangePly} >= ${placeholder("loadRangePly")}, false)` : sql`true`,
+    ),
+    countedItems: itemOnlyFilters ? undefined : fitmentCounts[shape.inStock],
   };
 }
 
-/** The sort key, ascending; ties go by price, then SKU in plain character order. */
+/** The sort key of a fitment's items, ascending; ties go by price, then SKU in plain character order. */
 export function sortKeySql(sort: AlternativesSort, diffPct: SQL<number>): SQL<number> {
   switch (sort) {
     case "diameter":
@@ -138,7 +163,7 @@ export function sortKeySql(sort: AlternativesSort, diffPct: SQL<number>): SQL<nu
       return sql<number>`0::float8`;
     case "loadMargin":
       // The most load capacity to spare first: load capacity grows with the index.
-      return sql<number>`(-${stockItem.loadIndex})::float8`;
+      return sql<number>`(-${stockFitment.loadIndex})::float8`;
   }
 }
 
