@@ -1,20 +1,27 @@
 /**
  * Replacement finder speed. Seeds 1,000 and 50,000 stock items into two fresh embedded databases and
  * times 500 alternatives searches (one page plus its total and near misses) for random originals, each
- * original searched in both.
+ * original searched in both. Then times 200 requests to GET /api/v1/alternatives beside 200 to
+ * GET /api/health on the production server: the build in .next, started over a fresh embedded
+ * database holding the demo shop and 50,000 items (or a server already running, with --server).
  * Targets: p95 ≤ 10 ms at 50,000 items, and p95(50,000) ÷ p95(1,000) ≤ 1.5.
  *
- *   npm run bench:finder
- *   npm run bench:finder -- --server http://localhost:3000   # also time the HTTP route of a running server
+ *   npm run build && npm run bench:finder
+ *   npm run bench:finder -- --server http://localhost:3000   # time the HTTP route of a running server instead
  */
+import { mkdtempSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import path from "node:path";
 import { sql } from "drizzle-orm";
 import { migrateDatabase, openDatabase, type Database } from "../../db/client";
-import { seedCatalog } from "../../db/seed/catalog";
+import { seedDemoData } from "../../db/seed";
+import { clearCatalog, seedCatalog } from "../../db/seed/catalog";
 import { SIZE_OFFERS, type SizeOffer } from "../../db/seed/catalog-sizes";
 import { seededRandom, type Random } from "../../db/seed/random";
 import { findAlternatives } from "../../lib/catalog/alternatives";
 import { readOriginal, type Original, type OriginalInput } from "../../lib/catalog/original";
 import { readShopTolerance } from "../../lib/catalog/shop-tolerance";
+import { hasProductionBuild, startProductionServer } from "./production-server";
 
 const SEARCHES = 500;
 const WARM_UP = 50;
@@ -114,10 +121,40 @@ async function benchServer(base: string): Promise<void> {
   console.log(`${base}: GET /api/health          p50 ${percentile(healthTimes, 50).toFixed(2)} ms, p95 ${percentile(healthTimes, 95).toFixed(2)} ms (${HTTP_REQUESTS} requests each)`);
 }
 
+/** An embedded database folder with the demo shop and a 50,000-item catalog, for the production server. */
+async function largeCatalogFolder(): Promise<string> {
+  const dataDir = path.join(mkdtempSync(path.join(tmpdir(), "sidewise-bench-")), "pglite");
+  const handle = await openDatabase({ dataDir });
+  await migrateDatabase(handle);
+  await seedDemoData(handle.db);
+  await handle.db.transaction(async (tx) => {
+    await clearCatalog(tx);
+    await seedCatalog(tx, { itemCount: CATALOG_SIZES[1], seed: 7 });
+  });
+  await handle.close();
+  return dataDir;
+}
+
+async function benchProductionBuild(): Promise<void> {
+  if (!hasProductionBuild()) {
+    console.log("HTTP route not timed: no production build in .next (run `npm run build` first, or pass --server URL).");
+    return;
+  }
+  const dataDir = await largeCatalogFolder();
+  const server = await startProductionServer(dataDir);
+  try {
+    console.log(`production server over ${CATALOG_SIZES[1].toLocaleString("en-US")} items:`);
+    await benchServer(server.url);
+  } finally {
+    await server.stop();
+    rmSync(path.dirname(dataDir), { recursive: true, force: true });
+  }
+}
+
 const serverFlag = process.argv.indexOf("--server");
 const server = serverFlag >= 0 ? process.argv[serverFlag + 1] : undefined;
 if (serverFlag >= 0 && !server) throw new Error("--server needs a URL, e.g. --server http://localhost:3000");
 
 await benchCatalogs();
 if (server) await benchServer(server);
-else console.log("HTTP route not timed: pass --server http://localhost:PORT to time a running production server.");
+else await benchProductionBuild();

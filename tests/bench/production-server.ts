@@ -1,0 +1,60 @@
+import { spawn } from "node:child_process";
+import { existsSync } from "node:fs";
+import { createServer } from "node:net";
+import path from "node:path";
+
+export interface RunningServer {
+  url: string;
+  stop: () => Promise<void>;
+}
+
+export const hasProductionBuild = () => existsSync(path.join(process.cwd(), ".next", "BUILD_ID"));
+
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const probe = createServer();
+    probe.once("error", reject);
+    probe.listen(0, "127.0.0.1", () => {
+      const address = probe.address();
+      probe.close(() => (typeof address === "object" && address ? resolve(address.port) : reject(new Error("no port"))));
+    });
+  });
+}
+
+async function waitForHealth(url: string, timeoutMs: number): Promise<void> {
+  const deadline = Date.now() + timeoutMs;
+  while (Date.now() < deadline) {
+    try {
+      if ((await fetch(`${url}/api/health`)).ok) return;
+    } catch {
+      // Not listening yet.
+    }
+    await new Promise((resolve) => setTimeout(resolve, 250));
+  }
+  throw new Error(`the production server at ${url} did not become healthy in ${timeoutMs / 1000} s`);
+}
+
+/**
+ * `next start` on the existing production build, on a free port, over the embedded database in
+ * `dataDir`; its process is the server itself, so stopping it leaves nothing behind.
+ */
+export async function startProductionServer(dataDir: string): Promise<RunningServer> {
+  const port = await freePort();
+  const url = `http://localhost:${port}`;
+  const server = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-p", String(port)], {
+    env: { ...process.env, PGLITE_DATA_DIR: dataDir, DATABASE_URL: "", DEMO_SEED: "on", BETTER_AUTH_URL: url, NEXT_TELEMETRY_DISABLED: "1" },
+    stdio: "ignore",
+  });
+  const exited = new Promise<void>((resolve) => server.once("exit", () => resolve()));
+  const stop = async () => {
+    server.kill("SIGTERM");
+    await exited;
+  };
+  try {
+    await waitForHealth(url, 60_000);
+  } catch (error) {
+    await stop();
+    throw error;
+  }
+  return { url, stop };
+}
