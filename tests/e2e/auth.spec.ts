@@ -1,4 +1,4 @@
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test, type Page } from "./helpers/test";
 import { expectNoAxeViolations } from "./helpers/axe";
 
 async function signIn(page: Page, email: string) {

@@ -1,4 +1,4 @@
-import { expect, type Page, test } from "@playwright/test";
+import { expect, type Page, test } from "./helpers/test";
 import { expectNoAxeViolations } from "./helpers/axe";
 
 const sizeBox = (page: Page, name: string) => page.getByRole("textbox", { name, exact: true });

@@ -1,4 +1,4 @@
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test, type Page } from "./helpers/test";
 import { expectNoAxeViolations } from "./helpers/axe";
 
 const HEADER = "sku,brand,line,size,load_index,load_index_dual,speed_symbol,load_range,extra_load,price,quantity";

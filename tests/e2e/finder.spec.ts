@@ -1,4 +1,4 @@
-import { expect, type Page, test } from "@playwright/test";
+import { expect, type Page, test } from "./helpers/test";
 import { expectNoAxeViolations } from "./helpers/axe";
 
 const resultsHeading = (page: Page) => page.getByRole("heading", { level: 2, name: /equal-or-better|No tire in the catalog/ });
