@@ -213,7 +213,6 @@ export const stockItem = pgTable(
 export type Brand = typeof brand.$inferSelect;
 export type TireLine = typeof tireLine.$inferSelect;
 export type NewTireLine = typeof tireLine.$inferInsert;
-export type StockFitment = typeof stockFitment.$inferSelect;
 export type StockItem = typeof stockItem.$inferSelect;
 export type NewStockItem = typeof stockItem.$inferInsert;
 export type Season = (typeof SEASONS)[number];

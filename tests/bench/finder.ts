@@ -14,10 +14,11 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { sql } from "drizzle-orm";
 import { migrateDatabase, openDatabase, type Database } from "../../db/client";
-import { seedDemoData } from "../../db/seed";
-import { clearCatalog, seedCatalog } from "../../db/seed/catalog";
+import { shop } from "../../db/schema";
+import { seedCatalog } from "../../db/seed/catalog";
 import { SIZE_OFFERS, type SizeOffer } from "../../db/seed/catalog-sizes";
 import { seededRandom, type Random } from "../../db/seed/random";
+import { demoShop } from "../../db/seed/shop";
 import { findAlternatives } from "../../lib/catalog/alternatives";
 import { readOriginal, type Original, type OriginalInput } from "../../lib/catalog/original";
 import { readShopTolerance } from "../../lib/catalog/shop-tolerance";
@@ -126,9 +127,8 @@ async function largeCatalogFolder(): Promise<string> {
   const dataDir = path.join(mkdtempSync(path.join(tmpdir(), "sidewise-bench-")), "pglite");
   const handle = await openDatabase({ dataDir });
   await migrateDatabase(handle);
-  await seedDemoData(handle.db);
   await handle.db.transaction(async (tx) => {
-    await clearCatalog(tx);
+    await tx.insert(shop).values(demoShop);
     await seedCatalog(tx, { itemCount: CATALOG_SIZES[1], seed: 7 });
   });
   await handle.close();
