@@ -6,9 +6,9 @@ import { drizzle as drizzleNodePg } from "drizzle-orm/node-postgres";
 import { migrate as migrateNodePg } from "drizzle-orm/node-postgres/migrator";
 import { drizzle as drizzlePglite } from "drizzle-orm/pglite";
 import { migrate as migratePglite } from "drizzle-orm/pglite/migrator";
-import pg from "pg";
 import { readServerEnv } from "@/lib/env/server-env";
 import * as schema from "./schema";
+import { openServerPool } from "./server-pool";
 import { seedDemoDataIfEmpty } from "./seed";
 import { seedDemoAccounts } from "./seed/accounts";
 
@@ -34,9 +34,9 @@ const migrationsFolder = path.join(process.cwd(), "db", "migrations");
 
 export async function openDatabase(options: DatabaseOptions): Promise<DatabaseHandle> {
   if (options.url) {
-    const pool = new pg.Pool({ connectionString: options.url, max: 10 });
+    const { pool, close } = openServerPool(options.url);
     const db = drizzleNodePg({ client: pool, schema, casing: "snake_case" });
-    return { db, kind: "postgres", close: () => pool.end() };
+    return { db, kind: "postgres", close };
   }
   const dataDir = options.dataDir ?? "memory://";
   if (!dataDir.startsWith("memory://")) mkdirSync(dataDir, { recursive: true });
