@@ -28,25 +28,35 @@ async function openPgliteFromSnapshot(): Promise<DatabaseHandle> {
   return openDatabase({ dataDir: "memory://", loadDataDir: new Blob([bytes]) });
 }
 
-/** A throw-away database on the server: created, migrated, and dropped again on close. */
-async function openServerDatabase(serverUrl: string): Promise<DatabaseHandle> {
-  const name = `sidewise_test_${randomBytes(6).toString("hex")}`;
+async function onServer(serverUrl: string, statement: string): Promise<void> {
   const admin = new pg.Client({ connectionString: serverUrl });
   await admin.connect();
-  await admin.query(`create database ${name}`);
-  await admin.end();
+  try {
+    await admin.query(statement);
+  } finally {
+    await admin.end();
+  }
+}
+
+/** A new, empty database on the server: its address, and a way to drop it (ending any connection left to it). */
+export async function createServerDatabase(serverUrl: string): Promise<{ name: string; url: string; drop: () => Promise<void> }> {
+  const name = `sidewise_test_${randomBytes(6).toString("hex")}`;
+  await onServer(serverUrl, `create database ${name}`);
   const url = new URL(serverUrl);
   url.pathname = `/${name}`;
-  const handle = await openDatabase({ url: url.toString() });
+  return { name, url: url.toString(), drop: () => onServer(serverUrl, `drop database if exists ${name} with (force)`) };
+}
+
+/** A throw-away database on the server: created, migrated, and dropped again on close. */
+async function openServerDatabase(serverUrl: string): Promise<DatabaseHandle> {
+  const created = await createServerDatabase(serverUrl);
+  const handle = await openDatabase({ url: created.url });
   await migrateDatabase(handle);
   return {
     ...handle,
     close: async () => {
       await handle.close();
-      const cleanup = new pg.Client({ connectionString: serverUrl });
-      await cleanup.connect();
-      await cleanup.query(`drop database if exists ${name} with (force)`);
-      await cleanup.end();
+      await created.drop();
     },
   };
 }
