@@ -87,9 +87,9 @@ describe("reading maximum load and pressure", () => {
     expect(read("285/50R20 119S MAX LOAD 1360 KG (2998 LBS) MAX PRESS 350 KPA (51 PSI)").warnings).toEqual([]);
   });
 
-  it("warns when the maximum load disagrees with the load index (ISO 4000-1: LI 115 = 1,210 kg)", () => {
+  it("warns when the maximum load disagrees with the load index (ISO 4000-1: LI 115 = 1,215 kg)", () => {
     const m = read("265/70R17 115T MAX LOAD 1400 KG (3086 LBS)");
-    expect(m.warnings).toContain("The maximum load of 1,400 kg does not match load index 115 (1,210 kg).");
+    expect(m.warnings).toContain("The maximum load of 1,400 kg does not match load index 115 (1,215 kg).");
   });
 
   it("checks a pound-only maximum load against the load index (ISO 4000-1: LI 94 = 670 kg = 1,477 lb)", () => {

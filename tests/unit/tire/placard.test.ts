@@ -40,6 +40,12 @@ describe("the Placard check", () => {
     expect(check.minLoadIndexDual).toBe(113);
   });
 
+  it("rear GAWR 2,424 kg on LT tires: 1,212 kg per tire → 115, which the table publishes as 1,215 kg (not 10 × LI 35 = 1,210 kg)", () => {
+    const check = placardCheck([{ name: "Rear", gawrKg: 2424, dualWheels: false }], "mpv-truck-trailer", false, "metric");
+    expect(check.minLoadIndex).toBe(115);
+    expect(check.axles[0]?.steps.at(-1)).toBe("The lowest load index carrying at least 1,212 kg is 115 (1,215 kg).");
+  });
+
   it("takes the higher of front and rear", () => {
     const check = placardCheck(
       [
