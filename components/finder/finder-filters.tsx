@@ -1,6 +1,7 @@
 "use client";
 
-import { type FinderQuery, finderSorts, seasons, terrains } from "@/lib/finder/finder-query";
+import { type FinderQuery, finderSorts } from "@/lib/finder/finder-query";
+import { SEASONS, TERRAINS } from "@/lib/tire";
 
 const sortLabels: Record<(typeof finderSorts)[number], string> = {
   diameter: "Closest diameter",
@@ -38,8 +39,8 @@ export function FinderFilters({ query, brands, defaultTolerancePct, onChange }: 
           ))}
         </select>
       </label>
-      <ChoiceSelect label="Season" value={query.season} choices={seasons} onChange={(season) => onChange({ season: season as FinderQuery["season"] })} />
-      <ChoiceSelect label="Terrain" value={query.terrain} choices={terrains} onChange={(terrain) => onChange({ terrain: terrain as FinderQuery["terrain"] })} />
+      <ChoiceSelect label="Season" value={query.season} choices={SEASONS} onChange={(season) => onChange({ season: season as FinderQuery["season"] })} />
+      <ChoiceSelect label="Terrain" value={query.terrain} choices={TERRAINS} onChange={(terrain) => onChange({ terrain: terrain as FinderQuery["terrain"] })} />
       <ChoiceSelect label="Brand" value={query.brand} choices={brands} onChange={(brand) => onChange({ brand })} />
       <label className="flex flex-col gap-1">
         Lowest price ($)

@@ -1,16 +1,25 @@
 import type { FitCardDraft } from "@/components/fit-card/save-fit-card-button";
-import type { AlternativesResponse, Candidate } from "@/lib/finder/alternatives-response";
+import type { Candidate } from "@/lib/finder/alternatives-response";
+import type { FinderQuery, PlacardMinimums } from "@/lib/finder/finder-query";
 import { MAX_COMPARED_SIZES } from "@/lib/compare/read-sizes";
 
-/** A Fit card from the finder: the original's size first, then the picked tires' other sizes. */
-export function fitCardDraft(original: AlternativesResponse["original"], picked: readonly Candidate[], tolerancePct: number): FitCardDraft {
-  const sizes = [...new Set([original.designation, ...picked.map((tire) => tire.designation)])].slice(0, MAX_COMPARED_SIZES);
+/**
+ * A Fit card from the finder: the original's size first, then the picked tires' other sizes, with
+ * everything the judge reads about the original (as typed, and the Placard check's minimums apart).
+ */
+export function fitCardDraft(designation: string, query: FinderQuery, minimums: PlacardMinimums, picked: readonly Candidate[], tolerancePct: number): FitCardDraft {
+  const sizes = [...new Set([designation, ...picked.map((tire) => tire.designation)])].slice(0, MAX_COMPARED_SIZES);
   return {
     sizes,
     skus: picked.map((tire) => tire.sku),
-    loadIndex: original.loadIndex,
-    speedSymbol: original.speedSymbol ?? undefined,
-    loadRange: original.loadRange ?? undefined,
+    loadIndex: query.loadIndex,
+    loadIndexDual: query.loadIndexDual,
+    speedSymbol: query.speedSymbol,
+    loadRange: query.loadRange,
+    runFlat: query.runFlat !== undefined ? true : undefined,
+    minLoadIndex: minimums.loadIndex ?? undefined,
+    minLoadIndexDual: minimums.loadIndexDual ?? undefined,
+    originalSeason: query.originalSeason,
     tolerancePct,
   };
 }

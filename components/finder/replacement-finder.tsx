@@ -29,7 +29,8 @@ export function ReplacementFinder({ initialQuery, brands, defaultTolerancePct }:
   const [units, setUnits] = useUnitSystem();
   const original = useMemo(() => readOriginal(query), [query]);
   const placard = useMemo(() => (original.ok ? placardFor(query, original.passengerTire, units) : null), [query, original, units]);
-  const search = original.ok ? alternativesSearch(query, { loadIndex: placard?.minLoadIndex ?? null, loadIndexDual: placard?.minLoadIndexDual ?? null }) : null;
+  const minimums = { loadIndex: placard?.minLoadIndex ?? null, loadIndexDual: placard?.minLoadIndexDual ?? null };
+  const search = original.ok ? alternativesSearch(query, minimums) : null;
   const data = useAlternatives(search);
   const update = (patch: Partial<FinderQuery>) => setQuery((current) => ({ ...current, ...patch }));
   const [picked, setPicked] = useState<Candidate[]>([]);
@@ -67,7 +68,7 @@ export function ReplacementFinder({ initialQuery, brands, defaultTolerancePct }:
           picked={picked.map((tire) => tire.sku)}
           onPick={pick}
         />
-        {data.first ? <SaveFitCard draft={fitCardDraft(data.first.original, picked, data.first.tolerancePct)} /> : null}
+        {data.first ? <SaveFitCard draft={fitCardDraft(data.first.original.designation, query, minimums, picked, data.first.tolerancePct)} /> : null}
         {data.first ? <AskTheShop source="finder" tires={finderQuoteTires(data.first.original, picked)} /> : null}
       </div>
     </div>

@@ -6,12 +6,8 @@ import type { DrawnTire } from "@/components/diagram/drawing-layout";
 import { drawnTireOf } from "@/components/reader/drawn-tire";
 import type { Candidate, NearMiss } from "@/lib/finder/alternatives-response";
 import { formatPrice } from "@/lib/shop/money";
-import { formatSignedPercent, parseMarking, type UnitSystem } from "@/lib/tire";
-
-function serviceDescription(tire: Candidate | NearMiss): string {
-  const dual = tire.loadIndexDual === null ? "" : `/${tire.loadIndexDual}`;
-  return `${tire.loadIndex}${dual}${tire.speedSymbol}`;
-}
+import { formatServiceDescription, formatSignedPercent, parseMarking, type UnitSystem } from "@/lib/tire";
+import { RuleNotes } from "@/components/ui/rule-notes";
 
 function drawnFor(designation: string): DrawnTire | null {
   const marking = parseMarking(designation);
@@ -40,7 +36,7 @@ export function ResultCard({ tire, original, units, pick }: ResultCardProps) {
             {tire.brand} {tire.line}
           </h3>
           <p className="font-mono text-sm">
-            {tire.designation} {serviceDescription(tire)}
+            {tire.designation} {formatServiceDescription(tire)}
             <span className="ml-2 text-ink-soft">({formatSignedPercent(tire.diameterDiffPct)} diameter)</span>
           </p>
           <p className="text-sm text-ink-soft">
@@ -61,6 +57,7 @@ export function ResultCard({ tire, original, units, pick }: ResultCardProps) {
           </li>
         ))}
       </ul>
+      {"notes" in tire && tire.notes.length > 0 ? <RuleNotes notes={tire.notes} /> : null}
       {pick ? (
         <label className="mt-2 flex min-h-11 items-center gap-2 text-sm font-semibold">
           <input type="checkbox" checked={pick.picked} disabled={pick.disabled && !pick.picked} onChange={(event) => pick.onChange(event.target.checked)} className="size-5 accent-accent" />

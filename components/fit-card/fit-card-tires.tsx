@@ -1,6 +1,7 @@
 import type { CardTire } from "@/lib/fit-cards/read-card";
 import { formatPrice } from "@/lib/shop/money";
-import { formatSignedPercent } from "@/lib/tire";
+import { formatServiceDescription, formatSignedPercent } from "@/lib/tire";
+import { RuleNotes } from "@/components/ui/rule-notes";
 
 function priceLine(tire: CardTire): string {
   if (!tire.stillStocked) return `${formatPrice(tire.priceCentsAtSave)} when saved · no longer stocked`;
@@ -23,9 +24,7 @@ export function FitCardTires({ tires }: { tires: CardTire[] }) {
               {tire.brand} {tire.line}
             </h3>
             <p className="font-mono text-sm">
-              {tire.designation} {tire.loadIndex}
-              {tire.loadIndexDual === null ? "" : `/${tire.loadIndexDual}`}
-              {tire.speedSymbol}
+              {tire.designation} {formatServiceDescription(tire)}
               {tire.extraLoad ? " XL" : ""}
               {tire.loadRange ? ` LR ${tire.loadRange}` : ""}
               <span className="ml-2 text-ink-soft">({formatSignedPercent(tire.diameterDiffPct)} diameter)</span>
@@ -41,6 +40,7 @@ export function FitCardTires({ tires }: { tires: CardTire[] }) {
                 </li>
               ))}
             </ul>
+            {tire.notes.length > 0 ? <RuleNotes notes={tire.notes} /> : null}
           </li>
         ))}
       </ul>

@@ -2,6 +2,7 @@ import { AskTheShop } from "@/components/quotes/ask-the-shop";
 import { fitCardQuoteTires } from "@/components/quotes/quote-tires";
 import { PageIntro } from "@/components/ui/page-intro";
 import { SafetyCautions } from "@/components/ui/safety-cautions";
+import { originalServiceWords, placardMinimumWords } from "@/lib/fit-cards/original-words";
 import type { PublicFitCard } from "@/lib/fit-cards/read-card";
 import type { ShopContact } from "@/lib/shop/queries";
 import { FitCardComparison } from "./fit-card-comparison";
@@ -14,7 +15,8 @@ const day = new Intl.DateTimeFormat("en-US", { dateStyle: "long", timeZone: "UTC
 /** A Fit card as anyone with its link sees it: on screen, and on one printed page. */
 export function FitCardView({ card, shop, url }: { card: PublicFitCard; shop: ShopContact | null; url: string }) {
   const { original } = card;
-  const service = `${original.loadIndex}${original.speedSymbol}${original.loadRange ? `, load range ${original.loadRange}` : ""}`;
+  const service = originalServiceWords(original);
+  const placard = placardMinimumWords(original);
   const title = `Tires for ${original.designation}`;
   return (
     // Printed, the card fits one page: the print style sheet shrinks the type; here the drawing is capped and the tires sit three abreast.
@@ -24,6 +26,8 @@ export function FitCardView({ card, shop, url }: { card: PublicFitCard; shop: Sh
           The tire on the car: <span className="font-mono">{original.designation}</span>, load index and speed symbol{" "}
           <span className="font-mono">{service}</span>. Diameter tolerance ±{card.tolerancePct} %. Saved {day.format(new Date(card.createdAt))}
           {card.expiresAt ? `, shown until ${day.format(new Date(card.expiresAt))}` : ""}.
+          {placard ? ` ${placard}` : ""}
+          {original.season ? ` The tire on the car now is ${original.season === "all-season" || original.season === "all-weather" ? "an" : "a"} ${original.season} tire.` : ""}
         </p>
       </PageIntro>
       <ShareActions url={url} title={`${title} · Fit card`} />

@@ -3,12 +3,18 @@
 import dynamic from "next/dynamic";
 import { useState } from "react";
 
+/** What a card is saved with; the finder fills in everything the judge reads about the original. */
 export interface FitCardDraft {
   sizes: string[];
   skus?: string[];
   loadIndex?: number;
+  loadIndexDual?: number;
   speedSymbol?: string;
   loadRange?: string;
+  runFlat?: boolean;
+  minLoadIndex?: number;
+  minLoadIndexDual?: number;
+  originalSeason?: string;
   tolerancePct?: number;
 }
 

@@ -13,8 +13,9 @@ import {
   unique,
 } from "drizzle-orm/pg-core";
 
-export const SEASONS = ["all-season", "all-weather", "summer", "winter"] as const;
-export const TERRAINS = ["highway", "all-terrain", "mud-terrain"] as const;
+import { SEASONS, TERRAINS } from "../../lib/tire/vocabulary";
+
+export { SEASONS, TERRAINS };
 export const SERVICE_TYPES = ["passenger", "LT", "C", "ST", "T"] as const;
 export const SIZE_PREFIXES = ["P", "LT", "ST", "T"] as const;
 export const CONSTRUCTIONS = ["R", "D", "B"] as const;
@@ -215,6 +216,5 @@ export type TireLine = typeof tireLine.$inferSelect;
 export type NewTireLine = typeof tireLine.$inferInsert;
 export type StockItem = typeof stockItem.$inferSelect;
 export type NewStockItem = typeof stockItem.$inferInsert;
-export type Season = (typeof SEASONS)[number];
-export type Terrain = (typeof TERRAINS)[number];
+export type { Season, Terrain } from "../../lib/tire/vocabulary";
 export type CatalogServiceType = (typeof SERVICE_TYPES)[number];

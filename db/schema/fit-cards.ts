@@ -1,11 +1,13 @@
 import { sql } from "drizzle-orm";
-import { check, doublePrecision, index, integer, jsonb, pgTable, primaryKey, serial, smallint, text, timestamp } from "drizzle-orm/pg-core";
+import { boolean, check, doublePrecision, index, integer, jsonb, pgTable, primaryKey, serial, smallint, text, timestamp } from "drizzle-orm/pg-core";
+import { SEASONS } from "../../lib/tire/vocabulary";
 import { user } from "./auth";
 import { stockItem } from "./catalog";
 
 /**
- * A saved comparison with its own link (`/s/{slug}`): the sizes compared, the original's service
- * description, the tolerance and a note. The slug is random, never derived from the content.
+ * A saved comparison with its own link (`/s/{slug}`): the sizes compared, everything the judge of
+ * equal-or-better reads about the original (service description, load range, run-flat, the Placard
+ * check's minimums, its season), the tolerance and a note. The slug is random, never derived from the content.
  */
 export const fitCard = pgTable(
   "fit_card",
@@ -16,8 +18,14 @@ export const fitCard = pgTable(
     /** Normalized designations, the reference first. */
     sizes: jsonb().$type<string[]>().notNull(),
     loadIndex: smallint().notNull(),
+    loadIndexDual: smallint(),
     speedSymbol: text().notNull(),
     loadRange: text(),
+    runFlat: boolean().notNull().default(false),
+    /** The Placard check's minimums when the card was saved from it. */
+    minLoadIndex: smallint(),
+    minLoadIndexDual: smallint(),
+    originalSeason: text({ enum: SEASONS }),
     tolerancePct: doublePrecision().notNull(),
     note: text(),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
@@ -28,6 +36,11 @@ export const fitCard = pgTable(
     index("fit_card_author").on(table.authorId),
     check("fit_card_tolerance", sql`${table.tolerancePct} between 1 and 5`),
     check("fit_card_load_index", sql`${table.loadIndex} between 0 and 279`),
+    check(
+      "fit_card_other_load_indices",
+      sql`coalesce(${table.loadIndexDual}, 0) between 0 and 279 and coalesce(${table.minLoadIndex}, 0) between 0 and 279 and coalesce(${table.minLoadIndexDual}, 0) between 0 and 279`,
+    ),
+    check("fit_card_original_season", sql`${table.originalSeason} in ${sql.raw(`(${SEASONS.map((season) => `'${season}'`).join(", ")})`)}`),
     check("fit_card_note", sql`length(${table.note}) <= 1000`),
   ],
 );

@@ -10,7 +10,7 @@ export type AlternativesAnswer = { ok: true; body: Alternatives } | { ok: false;
 
 /** Answers a validated GET /api/v1/alternatives query: the original read, the shop's tolerance unless one is given. */
 export async function answerAlternatives(db: Database, query: AlternativesQuery): Promise<AlternativesAnswer> {
-  const read = readOriginal(query);
+  const read = readOriginal({ ...query, season: query.originalSeason });
   if (!read.ok) return { ok: false, code: read.code, message: read.message };
   const sort = query.sort ?? "diameter";
   const cursor = query.cursor === undefined ? null : decodeAlternativesCursor(query.cursor);

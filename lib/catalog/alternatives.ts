@@ -2,8 +2,9 @@ import type { Database } from "@/db/client";
 import { encodeAlternativesCursor, type AlternativesCursor, type AlternativesSort } from "./cursor";
 import { finderAnswerSchema } from "./finder-answer";
 import { finderStatement, NEAR_MISS_LIMIT } from "./finder-statement";
+import { failedRuleWords, isNearMiss, judgeCandidate, noteWords, qualifyingReasonWords, type Verdict } from "@/lib/tire";
+import { judgedCandidate } from "./judged-candidate";
 import type { Original } from "./original";
-import { failedRules, qualifyingReasons } from "./reasons";
 import { finderShape, finderValues, ruleSql, type CatalogFilters } from "./rule-sql";
 import { cachedStatement } from "./statement-cache";
 import { toTire, type Tire } from "./tire";
@@ -15,7 +16,8 @@ export interface AlternativesOptions extends CatalogFilters {
   cursor: AlternativesCursor | null;
 }
 
-export type Alternative = Tire & { diameterDiffPct: number; reasons: string[] };
+/** `notes`: what a driver should know beyond the rules (a change of season, a different inflation). */
+export type Alternative = Tire & { diameterDiffPct: number; reasons: string[]; notes: string[] };
 export type NearMiss = Tire & { diameterDiffPct: number; failed: string[] };
 
 /** The 200 body of GET /api/v1/alternatives. */
@@ -38,9 +40,25 @@ function cursorValues(cursor: AlternativesCursor | null) {
   return { cursorKey: cursor?.key, cursorPriceCents: cursor?.priceCents, cursorSku: cursor?.sku };
 }
 
+type CandidateRow = Parameters<typeof judgedCandidate>[0] & Parameters<typeof toTire>[0] & { diffPct: number };
+
 /**
- * Equal-or-better tires from stock for one original (rules 1–7, applied in SQL): one keyset page of
- * them, how many qualify in all, and the nearest tires that fail exactly one of rules 2–5.
+ * The SQL picks the rows; the judge decides what is said of each. A row the judge does not confirm
+ * is never shown (the property tests prove the two agree; this keeps a disagreement from reaching a driver).
+ */
+function confirmed<Row extends CandidateRow>(rows: Row[], verdictOf: (row: Row) => Verdict, holds: (verdict: Verdict) => boolean) {
+  return rows.flatMap((row) => {
+    const verdict = verdictOf(row);
+    if (holds(verdict)) return [{ row, verdict }];
+    console.error(`finder: the judge does not confirm ${row.sku} (rules ${verdict.failedRules.join(", ")})`);
+    return [];
+  });
+}
+
+/**
+ * Equal-or-better tires from stock for one original (rules 1–7, applied in SQL and confirmed by the
+ * judge): one keyset page of them, how many qualify in all, and the nearest tires that fail exactly
+ * one of rules 2–5.
  */
 export async function findAlternatives(db: Database, original: Original, options: AlternativesOptions): Promise<Alternatives> {
   const shape = finderShape(original, options);
@@ -51,6 +69,7 @@ export async function findAlternatives(db: Database, original: Original, options
   const answer = await run({ ...values, ...cursorValues(options.cursor), limit: options.limit + 1, nearMissLimit: NEAR_MISS_LIMIT });
   const { results: rows, total, nearMisses } = finderAnswerSchema.parse(answer);
 
+  const verdictOf = (row: CandidateRow) => judgeCandidate(original, judgedCandidate(row), { tolerancePct: options.tolerancePct });
   const page = rows.slice(0, options.limit);
   const last = page.at(-1);
   const hasMore = rows.length > options.limit && last !== undefined;
@@ -59,17 +78,22 @@ export async function findAlternatives(db: Database, original: Original, options
       designation: original.designation,
       overallDiameterMm: original.overallDiameterMm,
       loadIndex: original.loadIndex,
-      speedSymbol: original.speedSymbol,
+      speedSymbol: original.speedSymbol === "ZR" ? null : original.speedSymbol,
       loadRange: original.loadRange,
     },
     tolerancePct: options.tolerancePct,
     total,
-    results: page.map((row) => ({ ...toTire(row), diameterDiffPct: row.diffPct, reasons: qualifyingReasons(original, row, row.diffPct) })),
-    nextCursor: hasMore ? encodeAlternativesCursor({ sort: options.sort, key: last.sortKey, priceCents: last.priceCents, sku: last.sku }) : null,
-    nearMisses: nearMisses.map((row) => ({
+    results: confirmed(page, verdictOf, (verdict) => verdict.qualifies).map(({ row, verdict }) => ({
       ...toTire(row),
       diameterDiffPct: row.diffPct,
-      failed: failedRules(original, row, row.diffPct, options.tolerancePct),
+      reasons: qualifyingReasonWords(verdict),
+      notes: noteWords(verdict.notes),
+    })),
+    nextCursor: hasMore ? encodeAlternativesCursor({ sort: options.sort, key: last.sortKey, priceCents: last.priceCents, sku: last.sku }) : null,
+    nearMisses: confirmed(nearMisses, verdictOf, isNearMiss).map(({ row, verdict }) => ({
+      ...toTire(row),
+      diameterDiffPct: row.diffPct,
+      failed: failedRuleWords(verdict),
     })),
   };
 }

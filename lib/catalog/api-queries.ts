@@ -36,6 +36,8 @@ export const catalogQuerySchema = z.object({
 /**
  * GET /api/v1/alternatives. Load indices and speed symbols are only checked for form here: one
  * outside the published tables answers 422 (unknown_load_index, unknown_speed_symbol), not 400.
+ * `minLoadIndex` / `minLoadIndexDual` are the Placard check's minimums; `originalSeason` is the kind of
+ * tire on the car now (a candidate of another season carries a note).
  */
 export const alternativesQuerySchema = z
   .object({
@@ -45,6 +47,9 @@ export const alternativesQuerySchema = z
     speedSymbol: optional(z.string().trim()),
     loadRange: optional(z.string().trim().toUpperCase().pipe(z.enum(LOAD_RANGES))),
     runFlat: optional(yesNo),
+    minLoadIndex: optional(wholeNumber),
+    minLoadIndexDual: optional(wholeNumber),
+    originalSeason: optional(z.enum(SEASONS)),
     tolerancePct: optional(decimalIn(1, 5)),
     season: optional(z.enum(SEASONS)),
     terrain: optional(z.enum(TERRAINS)),

@@ -6,7 +6,11 @@ export const ofLine = eq(stockItem.lineId, tireLine.id);
 export const ofBrand = eq(tireLine.brandId, brand.id);
 
 /** What the rules read from a candidate, besides what a Tire shows. */
-export const ruleFactColumns = { speedRank: stockItem.speedRank, loadRangePly: stockItem.loadRangePly };
+export const ruleFactColumns = {
+  rimDiameterIn: stockItem.rimDiameterIn,
+  construction: stockItem.construction,
+  serviceType: stockItem.serviceType,
+};
 
 /** An item as staff edit it (the item form, the Counter's table, the CSV): its own fields and its brand and line by name. */
 export const staffItemColumns = {

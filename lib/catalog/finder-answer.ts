@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { SEASONS, TERRAINS } from "@/db/schema";
+import { CONSTRUCTIONS, SEASONS, SERVICE_TYPES, TERRAINS } from "@/db/schema";
 
 /** A stock item as the finder's statement returns it: a Tire's columns, what the rules read, its place in the order. */
 const candidateRowSchema = z.object({
@@ -19,8 +19,9 @@ const candidateRowSchema = z.object({
   overallDiameterMm: z.number(),
   priceCents: z.number().int(),
   quantityOnHand: z.number().int(),
-  speedRank: z.number().int(),
-  loadRangePly: z.number().int().nullable(),
+  rimDiameterIn: z.number(),
+  construction: z.enum(CONSTRUCTIONS),
+  serviceType: z.enum(SERVICE_TYPES),
   diffPct: z.number(),
   sortKey: z.number(),
 });

@@ -4,30 +4,21 @@ import {
   loadIndexKg,
   markedSpeedRank,
   plyRatingForLoadRange,
-  serviceType,
+  sizeFacts,
   sizeFromSlug,
-  sizeGeometry,
-  type Construction,
+  type JudgedOriginal,
   type LoadRange,
-  type ServiceType,
+  type Season,
   type SpeedSymbol,
 } from "@/lib/tire";
 
-/** The tire on the car, as the finder compares against it. */
-export interface Original {
+/** The tire on the car, as the finder compares against it: what the judge reads, and what the SQL reads. */
+export interface Original extends JudgedOriginal {
   designation: string;
-  serviceType: ServiceType;
-  rimDiameterIn: number;
-  construction: Construction;
   zr: boolean;
-  runFlat: boolean;
-  overallDiameterMm: number;
   loadIndex: number;
-  loadIndexDual: number | null;
-  /** Null only for a ZR size given without a service description. */
-  speedSymbol: SpeedSymbol | null;
+  /** The speed the candidates must reach, as a rank (a ZR size without a service description: above 240 km/h). */
   speedRank: number;
-  loadRange: LoadRange | null;
   loadRangePly: number | null;
 }
 
@@ -38,6 +29,11 @@ export interface OriginalInput {
   speedSymbol?: string;
   loadRange?: LoadRange;
   runFlat?: boolean;
+  /** The Placard check's minimums. */
+  minLoadIndex?: number;
+  minLoadIndexDual?: number;
+  /** What kind of tire is on the car now. */
+  season?: Season;
 }
 
 export type OriginalProblemCode = "missing_parameter" | "unreadable" | "unknown_load_index" | "unknown_speed_symbol";
@@ -57,7 +53,7 @@ export function normalizeSpeedSymbol(text: string): SpeedSymbol | undefined {
 export function readOriginal(input: OriginalInput): OriginalResult {
   const size = sizeFromSlug(input.size);
   if (!size) return { ok: false, code: "unreadable", message: `"${input.size}" is not a tire size (try 285/50R20 or 285-50R20).` };
-  for (const index of [input.loadIndex, input.loadIndexDual]) {
+  for (const index of [input.loadIndex, input.loadIndexDual, input.minLoadIndex, input.minLoadIndexDual]) {
     if (index !== undefined && loadIndexKg(index) === undefined) {
       return { ok: false, code: "unknown_load_index", message: `Load index ${index} is not in the load index table (0–279).` };
     }
@@ -74,19 +70,19 @@ export function readOriginal(input: OriginalInput): OriginalResult {
   return {
     ok: true,
     original: {
+      ...sizeFacts(size),
       designation: formatSize(size),
-      serviceType: serviceType(size),
-      rimDiameterIn: size.rimDiameterIn,
-      construction: size.construction,
       zr: size.zr,
       runFlat: size.runFlat || input.runFlat === true,
-      overallDiameterMm: sizeGeometry(size).overallDiameterMm,
       loadIndex: input.loadIndex,
       loadIndexDual: input.loadIndexDual ?? null,
-      speedSymbol,
+      minLoadIndex: input.minLoadIndex ?? null,
+      minLoadIndexDual: input.minLoadIndexDual ?? null,
+      speedSymbol: speedSymbol ?? "ZR",
       speedRank,
       loadRange: input.loadRange ?? null,
       loadRangePly: input.loadRange ? plyRatingForLoadRange(input.loadRange) : null,
+      season: input.season ?? null,
     },
   };
 }

@@ -1,5 +1,6 @@
-import { and, between, eq, gt, gte, isNull, lte, or, sql, type SQL } from "drizzle-orm";
-import { brand, stockFitment, stockItem, tireLine, type Season, type Terrain } from "@/db/schema";
+import { and, between, eq, gt, gte, lte, sql, type SQL } from "drizzle-orm";
+import { brand, stockFitment, stockItem, tireLine } from "@/db/schema";
+import { loadRequirements, type Season, type Terrain } from "@/lib/tire";
 import { ofBrand } from "./catalog-select";
 import type { AlternativesSort } from "./cursor";
 import type { Original } from "./original";
@@ -40,7 +41,7 @@ export function finderShape(original: Original, filters: CatalogFilters): Finder
   return {
     hasCandidates: original.serviceType !== "T",
     runFlatOnly: original.runFlat,
-    dualIndex: original.loadIndexDual !== null,
+    dualIndex: loadRequirements(original).dual !== null,
     loadRange: original.loadRangePly !== null,
     lineFilters: LINE_FILTERS.filter((name) => filters[name] !== undefined),
     minPrice: filters.minPriceCents !== undefined,
@@ -52,6 +53,7 @@ export function finderShape(original: Original, filters: CatalogFilters): Finder
 /** The values the placeholders of a shape's statements take for one search. */
 export function finderValues(original: Original, tolerancePct: number, filters: CatalogFilters) {
   const band = toleranceBand(original.overallDiameterMm, tolerancePct);
+  const load = loadRequirements(original);
   return {
     rim: original.rimDiameterIn,
     construction: original.construction,
@@ -59,8 +61,8 @@ export function finderValues(original: Original, tolerancePct: number, filters: 
     reference: original.overallDiameterMm,
     minMm: band.minMm,
     maxMm: band.maxMm,
-    loadIndex: original.loadIndex,
-    loadIndexDual: original.loadIndexDual,
+    loadIndex: load.single?.required ?? original.loadIndex,
+    loadIndexDual: load.dual?.required ?? null,
     speedRank: original.speedRank,
     loadRangePly: original.loadRangePly,
     season: filters.season,
@@ -135,7 +137,8 @@ export function ruleSql(shape: FinderShape): RuleSql {
     diameterFits: between(fitment.overallDiameterMm, placeholder("minMm"), placeholder("maxMm")),
     loadIndexHolds: and(
       gte(fitment.loadIndex, placeholder("loadIndex")),
-      shape.dualIndex ? or(isNull(fitment.loadIndexDual), gte(fitment.loadIndexDual, placeholder("loadIndexDual"))) : undefined,
+      // A tire with no dual index is never offered for dual mounting.
+      shape.dualIndex ? sql`coalesce(${fitment.loadIndexDual} >= ${placeholder("loadIndexDual")}, false)` : undefined,
     ) as SQL,
     speedHolds: gte(fitment.speedRank, placeholder("speedRank")),
     loadRangeHolds: shape.loadRange ? sql`coalesce(${fitment.loadRangePly} >= ${placeholder("loadRangePly")}, false)` : sql`true`,

@@ -1,13 +1,14 @@
+import { originalServiceWords } from "@/lib/fit-cards/original-words";
 import type { PublicFitCard } from "@/lib/fit-cards/read-card";
 import { formatPrice } from "@/lib/shop/money";
 import type { ShopContact } from "@/lib/shop/queries";
-import { compareSizes, formatSignedPercent, sizeFromSlug, type TireSize } from "@/lib/tire";
+import { compareSizes, formatServiceDescription, formatSignedPercent, sizeFromSlug, type TireSize } from "@/lib/tire";
 
 /** Everything a Fit card e-mail says, already worded, so the HTML and the text versions never differ. */
 export interface FitCardEmailContent {
   subject: string;
   link: string;
-  /** "225/45R17 91V", with the load range when there is one. */
+  /** "225/45R17 91V", "LT265/75R16 123/120R, load range E", as printed. */
   original: string;
   otherSizes: { designation: string; diameterChange: string }[];
   tires: { name: string; marking: string; price: string }[];
@@ -31,11 +32,11 @@ export function fitCardEmailContent({ card, shop, link, message }: { card: Publi
   return {
     subject: `Your Fit card: tires for ${original.designation}`,
     link,
-    original: `${original.designation} ${original.loadIndex}${original.speedSymbol}${original.loadRange ? `, load range ${original.loadRange}` : ""}`,
+    original: `${original.designation} ${originalServiceWords(original)}`,
     otherSizes: compared.slice(1).map((size) => ({ designation: size.designation, diameterChange: `${formatSignedPercent(size.diameterDiffPct)} overall diameter` })),
     tires: card.tires.map((tire) => ({
       name: `${tire.brand} ${tire.line}`,
-      marking: `${tire.designation} ${tire.loadIndex}${tire.loadIndexDual === null ? "" : `/${tire.loadIndexDual}`}${tire.speedSymbol}${tire.extraLoad ? " XL" : ""}${tire.loadRange ? ` LR ${tire.loadRange}` : ""}`,
+      marking: `${tire.designation} ${formatServiceDescription(tire)}${tire.extraLoad ? " XL" : ""}${tire.loadRange ? ` LR ${tire.loadRange}` : ""}`,
       price: tirePrice(tire),
     })),
     message: message?.trim() || null,

@@ -1,7 +1,6 @@
 import { z } from "zod";
+import { SEASONS, TERRAINS } from "@/lib/tire";
 
-export const seasons = ["all-season", "all-weather", "summer", "winter"] as const;
-export const terrains = ["highway", "all-terrain", "mud-terrain"] as const;
 export const finderSorts = ["diameter", "price", "loadMargin"] as const;
 export const vehicleTypes = ["passenger-car", "mpv-truck-trailer"] as const;
 
@@ -21,8 +20,9 @@ export const finderQuerySchema = z.object({
   loadRange: z.string().trim().toUpperCase().regex(/^[B-N]$/).optional().catch(undefined),
   runFlat: flag,
   tolerancePct: z.coerce.number().min(1).max(5).optional().catch(undefined),
-  season: z.enum(seasons).optional().catch(undefined),
-  terrain: z.enum(terrains).optional().catch(undefined),
+  originalSeason: z.enum(SEASONS).optional().catch(undefined),
+  season: z.enum(SEASONS).optional().catch(undefined),
+  terrain: z.enum(TERRAINS).optional().catch(undefined),
   threePeak: flag,
   brand: optionalText,
   minPriceCents: optionalCount(10_000_000),
@@ -53,14 +53,20 @@ export function finderSearch(query: FinderQuery): string {
 }
 
 const apiKeys = [
-  "size", "loadIndex", "loadIndexDual", "speedSymbol", "loadRange", "runFlat", "tolerancePct", "season", "terrain",
+  "size", "loadIndex", "loadIndexDual", "speedSymbol", "loadRange", "runFlat", "originalSeason", "tolerancePct", "season", "terrain",
   "threePeak", "brand", "minPriceCents", "maxPriceCents", "inStock", "sort",
 ] as const;
 
 const flagKeys = new Set<string>(["runFlat", "threePeak", "inStock"]);
 
+/** The Placard check's minimum load indices, when it was made. */
+export interface PlacardMinimums {
+  loadIndex: number | null;
+  loadIndexDual: number | null;
+}
+
 /** The alternatives API's query for this state, with the Placard check's minimums applied. */
-export function alternativesSearch(query: FinderQuery, minimums: { loadIndex: number | null; loadIndexDual: number | null }): URLSearchParams {
+export function alternativesSearch(query: FinderQuery, minimums: PlacardMinimums): URLSearchParams {
   const search = new URLSearchParams();
   for (const key of apiKeys) {
     const value = query[key];

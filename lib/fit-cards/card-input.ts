@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { LOAD_RANGES } from "@/lib/tire";
+import { LOAD_RANGES, SEASONS } from "@/lib/tire";
 import { MAX_COMPARED_SIZES } from "@/lib/compare/read-sizes";
 
 export const MAX_CARD_TIRES = 6;
@@ -7,6 +7,8 @@ export const MAX_CARD_TIRES = 6;
 /** The shape of a slug (see slug.ts), to refuse anything else before touching the database. */
 export const FIT_CARD_SLUG_PATTERN = /^[A-Za-z0-9_-]{24}$/;
 export const MAX_NOTE_LENGTH = 1000;
+
+const loadIndexField = z.number().int().min(0).max(279);
 
 /**
  * POST /api/v1/fit-cards. Sizes, load index and speed symbol are checked for form here and read
@@ -16,9 +18,14 @@ export const newFitCardSchema = z
   .object({
     sizes: z.array(z.string().trim().min(1).max(40)).min(1).max(MAX_COMPARED_SIZES),
     skus: z.array(z.string().regex(/^[!-~]{1,64}$/)).max(MAX_CARD_TIRES).default([]),
-    loadIndex: z.number().int().min(0).max(279),
+    loadIndex: loadIndexField,
+    loadIndexDual: loadIndexField.optional(),
     speedSymbol: z.string().trim().min(1).max(3),
     loadRange: z.enum(LOAD_RANGES).optional(),
+    runFlat: z.boolean().optional(),
+    minLoadIndex: loadIndexField.optional(),
+    minLoadIndexDual: loadIndexField.optional(),
+    originalSeason: z.enum(SEASONS).optional(),
     tolerancePct: z.number().min(1).max(5).optional(),
     note: z.string().trim().max(MAX_NOTE_LENGTH).optional(),
     expiresInDays: z.number().int().min(1).max(365).optional(),

@@ -20,8 +20,9 @@ export async function createFitCard(db: Database, authorId: string, input: NewFi
     if (!size) return { ok: false, code: "unreadable", message: `"${text.slice(0, 40)}" is not a tire size (try 285/50R20).` };
     designations.push(formatSize(size));
   }
-  const original = readOriginal({ size: input.sizes[0]!, loadIndex: input.loadIndex, speedSymbol: input.speedSymbol, loadRange: input.loadRange });
+  const original = readOriginal({ ...input, size: input.sizes[0]!, season: input.originalSeason });
   if (!original.ok) return { ok: false, code: original.code, message: original.message };
+  const { original: read } = original;
 
   return db.transaction(async (tx) => {
     const items = input.skus.length
@@ -41,9 +42,14 @@ export async function createFitCard(db: Database, authorId: string, input: NewFi
         slug,
         authorId,
         sizes: designations,
-        loadIndex: original.original.loadIndex,
-        speedSymbol: original.original.speedSymbol ?? input.speedSymbol.toUpperCase(),
-        loadRange: original.original.loadRange,
+        loadIndex: read.loadIndex,
+        loadIndexDual: read.loadIndexDual,
+        speedSymbol: read.speedSymbol === "ZR" || read.speedSymbol === null ? input.speedSymbol.toUpperCase() : read.speedSymbol,
+        loadRange: read.loadRange,
+        runFlat: read.runFlat,
+        minLoadIndex: read.minLoadIndex,
+        minLoadIndexDual: read.minLoadIndexDual,
+        originalSeason: read.season,
         tolerancePct: input.tolerancePct ?? (await readShopTolerance(tx)),
         note: input.note || null,
         expiresAt: input.expiresInDays ? new Date(Date.now() + input.expiresInDays * DAY_MS) : null,

@@ -4,7 +4,7 @@ import { brand, fitCard, fitCardTire, stockItem, tireLine } from "@/db/schema";
 import { ofBrand, ofLine, ruleFactColumns } from "@/lib/catalog/catalog-select";
 import { readOriginal } from "@/lib/catalog/original";
 import { tireColumns, toTire, type Tire } from "@/lib/catalog/tire";
-import type { LoadRange } from "@/lib/tire";
+import type { LoadRange, Season } from "@/lib/tire";
 import { cardTireVerdict, type TireVerdict } from "./tire-verdict";
 
 /** A chosen tire as the public card shows it: live price and stock beside the price when saved. */
@@ -16,7 +16,19 @@ export interface PublicFitCard {
   createdAt: string;
   expiresAt: string | null;
   sizes: string[];
-  original: { designation: string; overallDiameterMm: number; loadIndex: number; speedSymbol: string; loadRange: string | null };
+  original: {
+    designation: string;
+    overallDiameterMm: number;
+    loadIndex: number;
+    loadIndexDual: number | null;
+    speedSymbol: string;
+    loadRange: string | null;
+    runFlat: boolean;
+    /** The Placard check's minimums the card was saved with. */
+    minLoadIndex: number | null;
+    minLoadIndexDual: number | null;
+    season: Season | null;
+  };
   tolerancePct: number;
   note: string | null;
   tires: CardTire[];
@@ -31,11 +43,21 @@ export async function readFitCard(db: Database, slug: string, now = new Date()):
   if (card.revokedAt) return { status: "withdrawn", why: "revoked" };
   if (card.expiresAt && card.expiresAt <= now) return { status: "withdrawn", why: "expired" };
 
-  const read = readOriginal({ size: card.sizes[0] ?? "", loadIndex: card.loadIndex, speedSymbol: card.speedSymbol, loadRange: (card.loadRange ?? undefined) as LoadRange | undefined });
+  const read = readOriginal({
+    size: card.sizes[0] ?? "",
+    loadIndex: card.loadIndex,
+    loadIndexDual: card.loadIndexDual ?? undefined,
+    speedSymbol: card.speedSymbol,
+    loadRange: (card.loadRange ?? undefined) as LoadRange | undefined,
+    runFlat: card.runFlat,
+    minLoadIndex: card.minLoadIndex ?? undefined,
+    minLoadIndexDual: card.minLoadIndexDual ?? undefined,
+    season: card.originalSeason ?? undefined,
+  });
   if (!read.ok) throw new Error(`fit card ${card.id} holds an unreadable original: ${read.message}`);
   const { original } = read;
   const rows = await db
-    .select({ ...tireColumns, ...ruleFactColumns, rimDiameterIn: stockItem.rimDiameterIn, retired: stockItem.retired, priceCentsAtSave: fitCardTire.priceCentsAtSave })
+    .select({ ...tireColumns, ...ruleFactColumns, retired: stockItem.retired, priceCentsAtSave: fitCardTire.priceCentsAtSave })
     .from(fitCardTire)
     .innerJoin(stockItem, eq(fitCardTire.stockItemId, stockItem.id))
     .innerJoin(tireLine, ofLine)
@@ -54,8 +76,13 @@ export async function readFitCard(db: Database, slug: string, now = new Date()):
         designation: original.designation,
         overallDiameterMm: original.overallDiameterMm,
         loadIndex: card.loadIndex,
+        loadIndexDual: card.loadIndexDual,
         speedSymbol: card.speedSymbol,
         loadRange: card.loadRange,
+        runFlat: original.runFlat,
+        minLoadIndex: card.minLoadIndex,
+        minLoadIndexDual: card.minLoadIndexDual,
+        season: card.originalSeason,
       },
       tolerancePct: card.tolerancePct,
       note: card.note,

@@ -1,10 +1,6 @@
+import { judgedCandidate, type CandidateFacts } from "@/lib/catalog/judged-candidate";
 import type { Original } from "@/lib/catalog/original";
-import { diameterChangePct } from "@/lib/tire";
-import { failedRules, qualifyingReasons, type RuleFacts } from "@/lib/catalog/reasons";
-
-export interface CardTireFacts extends RuleFacts {
-  rimDiameterIn: number;
-}
+import { diameterChangePct, judgeCandidate, noteWords, verdictWords } from "@/lib/tire";
 
 export interface TireVerdict {
   /** The tire's overall diameter against the original's, in percent. */
@@ -13,15 +9,17 @@ export interface TireVerdict {
   equalOrBetter: boolean;
   /** Why it qualifies, or what it does not meet. */
   reasons: string[];
+  /** What a driver should know beyond the rules (a change of season, a different inflation). */
+  notes: string[];
 }
 
-/** A chosen tire measured against the card's original by the finder's own rules and words. */
-export function cardTireVerdict(original: Original, tire: CardTireFacts, tolerancePct: number): TireVerdict {
-  const diffPct = diameterChangePct(original.overallDiameterMm, tire.overallDiameterMm);
-  const failed = failedRules(original, tire, diffPct, tolerancePct);
-  if (tire.rimDiameterIn !== original.rimDiameterIn) {
-    failed.unshift(`${tire.rimDiameterIn}-inch rim, not ${original.rimDiameterIn}-inch: a plus size needs other wheels`);
-  }
-  const equalOrBetter = failed.length === 0;
-  return { diameterDiffPct: diffPct, equalOrBetter, reasons: equalOrBetter ? qualifyingReasons(original, tire, diffPct) : failed };
+/** A chosen tire measured against the card's original by the same judge, and in the same words, as the finder's results. */
+export function cardTireVerdict(original: Original, tire: CandidateFacts, tolerancePct: number): TireVerdict {
+  const verdict = judgeCandidate(original, judgedCandidate(tire), { tolerancePct });
+  return {
+    diameterDiffPct: diameterChangePct(original.overallDiameterMm, tire.overallDiameterMm),
+    equalOrBetter: verdict.qualifies,
+    reasons: verdictWords(verdict),
+    notes: noteWords(verdict.notes),
+  };
 }

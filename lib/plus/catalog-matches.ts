@@ -1,30 +1,27 @@
-import { and, count, eq, gte, inArray, not } from "drizzle-orm";
+import { and, eq, inArray, not } from "drizzle-orm";
 import type { Database } from "@/db/client";
-import { stockItem } from "@/db/schema";
-import type { ServiceType } from "@/lib/tire";
+import { stockItem, tireLine } from "@/db/schema";
+import { ofLine, ruleFactColumns } from "@/lib/catalog/catalog-select";
+import { judgedCandidate } from "@/lib/catalog/judged-candidate";
+import { tireStockColumns } from "@/lib/catalog/tire";
+import { judgeCandidate, type JudgedOriginal } from "@/lib/tire";
 
-export interface MatchCriteria {
-  designations: string[];
-  serviceType: ServiceType;
-  minLoadIndex: number | null;
-  minSpeedRank: number | null;
-}
-
-/** How many catalog tires of exactly each designation would serve: same service type, load and speed at least as given. */
-export async function countCatalogMatches(db: Database, criteria: MatchCriteria): Promise<Map<string, number>> {
-  if (criteria.designations.length === 0) return new Map();
-  const rows = await db
-    .select({ designation: stockItem.designation, matches: count() })
+/**
+ * How many current catalog tires of exactly each designation meet rules 2–7 against the original,
+ * each judged on a wheel of its own diameter (the Plus planner changes the rim on purpose).
+ */
+export async function countCatalogMatches(db: Database, original: JudgedOriginal, designations: string[], tolerancePct: number): Promise<Map<string, number>> {
+  const matches = new Map<string, number>();
+  if (designations.length === 0) return matches;
+  const items = await db
+    .select({ ...tireStockColumns, ...ruleFactColumns, season: tireLine.season })
     .from(stockItem)
-    .where(
-      and(
-        inArray(stockItem.designation, criteria.designations),
-        eq(stockItem.serviceType, criteria.serviceType),
-        not(stockItem.retired),
-        criteria.minLoadIndex === null ? undefined : gte(stockItem.loadIndex, criteria.minLoadIndex),
-        criteria.minSpeedRank === null ? undefined : gte(stockItem.speedRank, criteria.minSpeedRank),
-      ),
-    )
-    .groupBy(stockItem.designation);
-  return new Map(rows.map((row) => [row.designation, row.matches]));
+    .innerJoin(tireLine, ofLine)
+    .where(and(inArray(stockItem.designation, designations), eq(stockItem.serviceType, original.serviceType), not(stockItem.retired)));
+  for (const item of items) {
+    if (judgeCandidate(original, judgedCandidate(item), { tolerancePct, ownRim: true }).qualifies) {
+      matches.set(item.designation, (matches.get(item.designation) ?? 0) + 1);
+    }
+  }
+  return matches;
 }

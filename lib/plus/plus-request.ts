@@ -2,7 +2,9 @@ import { z } from "zod";
 import type { Database } from "@/db/client";
 import type { ApiErrorCode } from "@/lib/api/errors";
 import { readShopTolerance } from "@/lib/catalog/shop-tolerance";
-import { formatSize, loadIndexKg, type PlusCandidate, plusCandidates, serviceType, sizeFromSlug, sizeGeometry, speedSymbolInfo, speedSymbolRank } from "@/lib/tire";
+import {
+  formatSize, LOAD_RANGES, loadIndexKg, type PlusCandidate, plusCandidates, sizeFacts, sizeFromSlug, sizeGeometry, speedSymbolInfo,
+} from "@/lib/tire";
 import { countCatalogMatches } from "./catalog-matches";
 
 const wholeNumber = z.string().trim().regex(/^\d+$/, "expected a whole number").transform(Number);
@@ -11,7 +13,10 @@ const optional = <Schema extends z.ZodType>(schema: Schema) => z.preprocess((val
 export const plusQuerySchema = z.object({
   size: z.string().trim().min(1, "give the size on the tire, e.g. 285-50R20"),
   loadIndex: optional(wholeNumber),
+  loadIndexDual: optional(wholeNumber),
   speedSymbol: optional(z.string().trim().toUpperCase()),
+  loadRange: optional(z.string().trim().toUpperCase().pipe(z.enum(LOAD_RANGES))),
+  runFlat: optional(z.enum(["true", "false"]).transform((value) => value === "true")),
   tolerancePct: optional(
     z.string().trim().regex(/^\d+(\.\d+)?$/, "expected a number").transform(Number).pipe(z.number().min(1).max(5)),
   ),
@@ -51,8 +56,10 @@ export function toPlusBody(plan: PlusPlan) {
 export async function answerPlus(db: Database, query: PlusQuery): Promise<PlusAnswer> {
   const size = sizeFromSlug(query.size);
   if (!size) return { ok: false, code: "unreadable", message: `"${query.size.slice(0, 40)}" is not a tire size (try 285/50R20 or 285-50R20).` };
-  if (query.loadIndex !== undefined && loadIndexKg(query.loadIndex) === undefined) {
-    return { ok: false, code: "unknown_load_index", message: `Load index ${query.loadIndex} is not in the load index table (0–279).` };
+  for (const index of [query.loadIndex, query.loadIndexDual]) {
+    if (index !== undefined && loadIndexKg(index) === undefined) {
+      return { ok: false, code: "unknown_load_index", message: `Load index ${index} is not in the load index table (0–279).` };
+    }
   }
   const speed = query.speedSymbol === undefined ? undefined : speedSymbolInfo(query.speedSymbol);
   if (query.speedSymbol !== undefined && !speed) {
@@ -61,12 +68,20 @@ export async function answerPlus(db: Database, query: PlusQuery): Promise<PlusAn
   const tolerancePct = query.tolerancePct ?? (await readShopTolerance(db));
   const candidates = plusCandidates(size, tolerancePct);
   const minLoadIndex = query.loadIndex ?? null;
-  const matches = await countCatalogMatches(db, {
-    designations: candidates.map((candidate) => candidate.designation),
-    serviceType: serviceType(size),
-    minLoadIndex,
-    minSpeedRank: speed ? speedSymbolRank(speed.symbol) : null,
-  });
+  const original = {
+    ...sizeFacts(size),
+    runFlat: size.runFlat || query.runFlat === true,
+    loadIndex: minLoadIndex,
+    loadIndexDual: query.loadIndexDual ?? null,
+    minLoadIndex: null,
+    minLoadIndexDual: null,
+    // As in the finder: a ZR size named without a speed symbol is rated above 240 km/h.
+    speedSymbol: speed?.symbol ?? (size.zr ? ("ZR" as const) : null),
+    loadRange: query.loadRange ?? null,
+    season: null,
+  };
+  const designations = candidates.map((candidate) => candidate.designation);
+  const matches = await countCatalogMatches(db, original, designations, tolerancePct);
   const geometry = sizeGeometry(size);
   return {
     ok: true,

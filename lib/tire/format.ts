@@ -32,3 +32,8 @@ export function formatSize(size: TireSize): string {
 export function sizeToSlug(size: TireSize): string {
   return formatSize(size).replace("/", "-");
 }
+
+/** A service description as printed: "119S", or with a dual index "123/120R". */
+export function formatServiceDescription(service: { loadIndex: number; loadIndexDual: number | null; speedSymbol: string }): string {
+  return `${service.loadIndex}${service.loadIndexDual === null ? "" : `/${service.loadIndexDual}`}${service.speedSymbol}`;
+}

@@ -17,3 +17,6 @@ export * from "./placard";
 export * from "./compare";
 export { diameterChangePct } from "./diameter-change";
 export * from "./plus";
+export * from "./vocabulary";
+export * from "./rules/judge";
+export * from "./rules/words";

@@ -66,7 +66,7 @@ describe("GET /api/v1/alternatives", () => {
     expect(body.results).toHaveLength(5);
     expect(body.total).toBeGreaterThan(5);
     for (const tire of body.results) {
-      expect(Object.keys(tire).sort()).toEqual([...TIRE_KEYS, "diameterDiffPct", "reasons"].sort());
+      expect(Object.keys(tire).sort()).toEqual([...TIRE_KEYS, "diameterDiffPct", "notes", "reasons"].sort());
       expect(Math.abs(tire.diameterDiffPct)).toBeLessThanOrEqual(3);
       expect(tire.reasons).toContain("same 20-inch rim");
     }

@@ -1,7 +1,9 @@
 import fc from "fast-check";
-import { eq } from "drizzle-orm";
 import type { Database } from "@/db/client";
+import { and, eq, inArray, isNotNull } from "drizzle-orm";
 import { brand, SEASONS, stockItem, TERRAINS, tireLine } from "@/db/schema";
+import { buildStockRow } from "@/lib/catalog/stock-row";
+import { insertStockRows } from "@/lib/catalog/write-stock";
 import type { AlternativesSort } from "@/lib/catalog/cursor";
 import type { OriginalInput } from "@/lib/catalog/original";
 import type { CatalogFilters } from "@/lib/catalog/rule-sql";
@@ -22,6 +24,12 @@ export function loadWholeCatalog(db: Database) {
     .select({
       sku: stockItem.sku,
       designation: stockItem.designation,
+      rimDiameterIn: stockItem.rimDiameterIn,
+      construction: stockItem.construction,
+      serviceType: stockItem.serviceType,
+      runFlat: stockItem.runFlat,
+      overallDiameterMm: stockItem.overallDiameterMm,
+      extraLoad: stockItem.extraLoad,
       lineRunFlat: tireLine.runFlat,
       loadIndex: stockItem.loadIndex,
       loadIndexDual: stockItem.loadIndexDual,
@@ -62,7 +70,7 @@ function facts(designation: string, runFlatMark: boolean) {
   return { size, service: serviceType(size), diameter: sizeGeometry(size).overallDiameterMm, runFlat: size.runFlat || runFlatMark };
 }
 
-function passesFilters(row: CatalogRow, filters: CatalogFilters): boolean {
+export function passesFilters(row: CatalogRow, filters: CatalogFilters): boolean {
   return (
     (filters.season === undefined || row.season === filters.season) &&
     (filters.terrain === undefined || row.terrain === filters.terrain) &&
@@ -91,10 +99,12 @@ export function bruteForce(catalog: readonly CatalogRow[], search: Search) {
     const sameService = reference.service !== "T" && candidate.service === reference.service;
     if (!sameRimAndBuild || !sameService || (reference.runFlat && !candidate.runFlat)) continue;
     const diffPct = ((candidate.diameter - reference.diameter) / reference.diameter) * 100;
+    // Rule 3: the higher of the original's index and the Placard check's minimum; a dual requirement needs a dual rating.
+    const singleNeeded = Math.max(original.loadIndex, original.minLoadIndex ?? 0);
+    const dualNeeded = Math.max(original.loadIndexDual ?? -1, original.minLoadIndexDual ?? -1);
     const holds = [
       Math.abs(diffPct) <= search.tolerancePct,
-      row.loadIndex >= original.loadIndex &&
-        (original.loadIndexDual === undefined || row.loadIndexDual === null || row.loadIndexDual >= original.loadIndexDual),
+      row.loadIndex >= singleNeeded && (dualNeeded < 0 || (row.loadIndexDual !== null && row.loadIndexDual >= dualNeeded)),
       speedSymbolRank(row.speedSymbol as SpeedSymbol) >= originalSpeed,
       original.loadRange === undefined || (row.loadRange !== null && isLoadRange(row.loadRange) && compareLoadRanges(row.loadRange, original.loadRange) >= 0),
     ];
@@ -103,7 +113,7 @@ export function bruteForce(catalog: readonly CatalogRow[], search: Search) {
     if (failures === 0) results.push({ ...row, diffPct, key });
     if (failures === 1) nearMisses.push({ ...row, diffPct, key: Math.abs(diffPct) });
   }
-  return { results: results.sort(byKeyPriceSku), nearMisses: nearMisses.sort(byKeyPriceSku).slice(0, 20) };
+  return { results: results.sort(byKeyPriceSku), nearMisses: nearMisses.sort(byKeyPriceSku).slice(0, 20), nearMissCount: nearMisses.length };
 }
 
 /** Originals of every service type (and a few sizes not in stock), with filters, sorts and page sizes. */
@@ -129,6 +139,11 @@ export function arbitrarySearch(catalog: readonly CatalogRow[]): fc.Arbitrary<Se
       loadIndexShift: fc.integer({ min: -6, max: 3 }),
       speedSymbol: fc.constantFrom<string | undefined>("Q", "R", "S", "S", "T", "T", "H", "H", "V", "W", "Y", "(Y)", "U", undefined),
       dualShift: fc.option(fc.integer({ min: -6, max: 1 }), { nil: undefined }),
+      placard: fc.oneof(
+        { weight: 2, arbitrary: fc.constant(undefined) },
+        { weight: 1, arbitrary: fc.record({ single: fc.integer({ min: -4, max: 4 }), dual: fc.option(fc.integer({ min: -8, max: 0 }), { nil: undefined }) }) },
+      ),
+      season: fc.constantFrom(undefined, ...SEASONS),
       loadRange: fc.constantFrom(undefined, "C" as const, "D" as const, "E" as const),
       runFlat: fc.constantFrom(false, false, false, true),
       tolerancePct: fc.oneof(fc.constantFrom(1, 3, 5), fc.double({ min: 1, max: 5, noNaN: true })),
@@ -136,11 +151,15 @@ export function arbitrarySearch(catalog: readonly CatalogRow[]): fc.Arbitrary<Se
       sort: fc.constantFrom<AlternativesSort>("diameter", "diameter", "price", "loadMargin"),
       limit: fc.constantFrom(11, 50, 500),
     })
-    .map(({ size: [designation, loadIndex], loadIndexShift, speedSymbol, dualShift, loadRange, runFlat, ...rest }) => ({
+    .map(({ size: [designation, loadIndex], loadIndexShift, speedSymbol, dualShift, placard, season, loadRange, runFlat, ...rest }) => ({
       original: {
         size: designation,
         loadIndex: loadIndex + loadIndexShift,
         loadIndexDual: dualShift === undefined || !heavy(designation) ? undefined : loadIndex + loadIndexShift - 3 + dualShift,
+        // The Placard check may ask for more than the original, and for a dual index on any tire (a passenger one included).
+        minLoadIndex: placard === undefined ? undefined : loadIndex + placard.single,
+        minLoadIndexDual: placard?.dual === undefined ? undefined : loadIndex - 3 + placard.dual,
+        season,
         // Only a ZR size may be searched without a speed symbol.
         speedSymbol: speedSymbol ?? (designation.includes("ZR") ? undefined : "S"),
         loadRange: heavy(designation) ? loadRange : undefined,
@@ -148,4 +167,34 @@ export function arbitrarySearch(catalog: readonly CatalogRow[]): fc.Arbitrary<Se
       },
       ...rest,
     }));
+}
+
+/**
+ * Truck tires as a shop may stock them beside the dual-rated ones: for every third light-truck or
+ * commercial item with a dual index, one copy rated for single mounting only and one whose dual
+ * index is three lower, written through the same row builder as staff writes.
+ */
+export async function addSingleRatedTruckTires(db: Database): Promise<void> {
+  const rated = await db
+    .select({
+      id: stockItem.id, sku: stockItem.sku, designation: stockItem.designation, loadIndex: stockItem.loadIndex, loadIndexDual: stockItem.loadIndexDual,
+      speedSymbol: stockItem.speedSymbol, loadRange: stockItem.loadRange, priceCents: stockItem.priceCents, quantity: stockItem.quantityOnHand,
+      lineId: stockItem.lineId, runFlat: tireLine.runFlat,
+    })
+    .from(stockItem)
+    .innerJoin(tireLine, eq(stockItem.lineId, tireLine.id))
+    .where(and(isNotNull(stockItem.loadIndexDual), inArray(stockItem.serviceType, ["LT", "C"])));
+  const rows = rated
+    .filter((item) => item.id % 3 === 0)
+    .flatMap((item) =>
+      [
+        { suffix: "-S", loadIndexDual: null },
+        { suffix: "-L", loadIndexDual: (item.loadIndexDual ?? 0) - 3 },
+      ].map(({ suffix, loadIndexDual }) => {
+        const built = buildStockRow({ ...item, sku: `${item.sku}${suffix}`, loadIndexDual, loadRange: item.loadRange }, { id: item.lineId, runFlat: item.runFlat });
+        if (!built.ok) throw new Error(`${item.sku}: ${built.problem.reason}`);
+        return built.row;
+      }),
+    );
+  await insertStockRows(db, rows);
 }
