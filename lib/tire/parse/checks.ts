@@ -2,18 +2,32 @@ import { formatSize } from "../format";
 import { IMPLIED_ASPECT_RATIO } from "../geometry";
 import { loadIndexKg, loadIndexLb } from "../load-index";
 import { plyRatingForLoadRange, type LoadRange } from "../load-range";
+import { rimTwinCaution } from "../rim-twins";
 import type { LoadMark, PressureMark, ServiceDescription, TireSize } from "../types";
 import { kgToLb, kpaToPsi } from "../units";
 
 const fmt = (n: number): string => n.toLocaleString("en-US");
 
-/** Printed loads are rounded, and US tables round pounds their own way: allow 0.5 % (at least one unit). */
+/** Printed kilograms are rounded: allow 0.5 % (at least one kilogram). */
 function differs(marked: number, expected: number): boolean {
   return Math.abs(marked - expected) > Math.max(1, expected * 0.005);
 }
 
+/**
+ * Whether a printed pound figure disagrees with `kg` × 2.20462. Pound tables on sidewalls are rounded
+ * their own way (common practice): down to a multiple of 5 or 10 lb, or converted at 2.2 lb/kg
+ * (0.2 % low), so a figure up to 10 lb or 0.5 % below, whichever is more, agrees. A figure above
+ * would overstate the tire, so only rounding is allowed there: to the nearest 5 or 10 lb, or a
+ * kilogram figure rounded to 5 kg from a pound table, at most 6 lb or 0.2 %.
+ */
+function poundsDisagree(lb: number, kg: number): boolean {
+  const expected = kgToLb(kg);
+  const below = expected - lb;
+  return below > Math.max(10, expected * 0.005) || -below > Math.max(6, expected * 0.002);
+}
+
 function checkLoadMark(label: string, mark: LoadMark, loadIndex: number | null, warnings: string[]): void {
-  if (mark.kg !== null && mark.lb !== null && differs(mark.lb, kgToLb(mark.kg))) {
+  if (mark.kg !== null && mark.lb !== null && poundsDisagree(mark.lb, mark.kg)) {
     warnings.push(`The maximum ${label}load reads ${fmt(mark.kg)} kg but ${fmt(mark.lb)} lb; the two do not agree.`);
   }
   if (loadIndex === null) return;
@@ -21,7 +35,7 @@ function checkLoadMark(label: string, mark: LoadMark, loadIndex: number | null, 
   const lb = loadIndexLb(loadIndex) ?? Number.NaN;
   if (mark.kg !== null && differs(mark.kg, kg)) {
     warnings.push(`The maximum ${label}load of ${fmt(mark.kg)} kg does not match load index ${loadIndex} (${fmt(kg)} kg).`);
-  } else if (mark.kg === null && mark.lb !== null && differs(mark.lb, lb)) {
+  } else if (mark.kg === null && mark.lb !== null && poundsDisagree(mark.lb, kg)) {
     warnings.push(`The maximum ${label}load of ${fmt(mark.lb)} lb does not match load index ${loadIndex} (${fmt(lb)} lb).`);
   }
 }
@@ -49,6 +63,8 @@ export function checkSize(size: TireSize, service: ServiceDescription | null, wa
   if (size.prefix === "T") {
     warnings.push("T marks a temporary spare: for short distances at reduced speed, often 80 km/h (50 mph) at most; follow the label on the spare (common practice).");
   }
+  const rimCaution = Number.isInteger(size.rimDiameterIn) ? null : rimTwinCaution(size.rimDiameterIn);
+  if (rimCaution !== null) warnings.push(`This tire fits ${size.rimDiameterIn}-inch wheels only. ${rimCaution}`);
   if (size.zr && service && service.speedKmh < 240) {
     warnings.push(`ZR sizes are made for more than 240 km/h, yet the speed symbol ${service.speedSymbol} is lower; check the marking.`);
   }

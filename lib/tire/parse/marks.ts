@@ -38,12 +38,15 @@ export function readLoadRange(r: Reader, i: number): number {
   return j;
 }
 
-/** A lone load-range letter after a light-truck size: "LT265/75R16 123/120S E". */
+/**
+ * A lone load-range letter after a light-truck or trailer size: "LT265/75R16 123/120S E",
+ * "ST205/75R15 107/102M D". ST tires carry load ranges as LT tires do (TRA, common practice).
+ */
 export function readLoneLoadRange(r: Reader, i: number): number {
   const w = wordAt(r, i);
   const size = r.draft.size;
-  const lightTruck = size !== null && (size.prefix === "LT" || size.kind === "flotation");
-  if (!lightTruck || w?.length !== 1 || !isLoadRange(w) || !endsChunk(r, i + 1)) return 0;
+  const rangedSize = size !== null && (size.prefix === "LT" || size.prefix === "ST" || size.kind === "flotation");
+  if (!rangedSize || w?.length !== 1 || !isLoadRange(w) || !endsChunk(r, i + 1)) return 0;
   setLoadRange(r, w, i, i + 1);
   return i + 1;
 }

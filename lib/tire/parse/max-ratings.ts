@@ -7,6 +7,16 @@ type PressureUnit = keyof PressureMark;
 const LOAD_UNITS = new Map<string, LoadUnit>([["KG", "kg"], ["KGS", "kg"], ["LB", "lb"], ["LBS", "lb"]]);
 const PRESSURE_UNITS = new Map<string, PressureUnit | "bar">([["KPA", "kPa"], ["PSI", "psi"], ["BAR", "bar"]]);
 const PRESSURE_WORDS = new Set(["PRESS", "PRESSURE", "INFLATION", "INFL"]);
+const MAX_WORDS = new Set(["MAX", "MAXIMUM"]);
+
+/** "MAX. PRESS.", "MAX PRESSURE", "MAXIMUM INFLATION PRESSURE" at token j: the index after it, or 0. */
+function maxPressureLabel(r: Reader, j: number): number {
+  if (!MAX_WORDS.has(wordAt(r, j) ?? "")) return 0;
+  let k = skipPunct(r, j + 1, ".");
+  if (!PRESSURE_WORDS.has(wordAt(r, k) ?? "")) return 0;
+  k = skipPunct(r, k + 1, ".");
+  return PRESSURE_WORDS.has(wordAt(r, k) ?? "") ? skipPunct(r, k + 1, ".") : k;
+}
 
 /** One number and its unit at token k, stored in `values`; the index after it, or 0. */
 function quantity<U extends string>(r: Reader, k: number, units: ReadonlyMap<string, U>, values: Map<U, number>): number {
@@ -58,6 +68,7 @@ function readMaxLoad(r: Reader, i: number, j: number): number {
     if (p) {
       setPressure(r, p.values);
       next = p.next + (wordAt(r, p.next) === "COLD" ? 1 : 0);
+      next = maxPressureLabel(r, next) || next;
       addSpan(r, "maxPressure", q.next, next);
     }
   }
@@ -66,16 +77,23 @@ function readMaxLoad(r: Reader, i: number, j: number): number {
 
 /** "MAX LOAD 1360 KG (2998 LBS)", "MAX LOAD SINGLE … AT 550 KPA (80 PSI) COLD", "MAX. PRESS. 350 KPA (51 PSI)". */
 export function readMaxRating(r: Reader, i: number): number {
-  let j = skipPunct(r, i + 1, ".");
-  const what = wordAt(r, j) ?? "";
-  if (what === "LOAD") return readMaxLoad(r, i, skipPunct(r, j + 1, "."));
-  if (!PRESSURE_WORDS.has(what)) return 0;
-  j = skipPunct(r, j + 1, ".");
-  if (PRESSURE_WORDS.has(wordAt(r, j) ?? "")) j = skipPunct(r, j + 1, ".");
-  const p = quantities(r, skipPunct(r, j, ":"), PRESSURE_UNITS);
+  const j = skipPunct(r, i + 1, ".");
+  if (wordAt(r, j) === "LOAD") return readMaxLoad(r, i, skipPunct(r, j + 1, "."));
+  const label = maxPressureLabel(r, i);
+  const p = label === 0 ? null : quantities(r, skipPunct(r, label, ":"), PRESSURE_UNITS);
   if (!p) return 0;
   setPressure(r, p.values);
   const next = p.next + (wordAt(r, p.next) === "COLD" ? 1 : 0);
+  addSpan(r, "maxPressure", i, next);
+  return next;
+}
+
+/** A maximum pressure labelled after its figure: "350 KPA (51 PSI) MAX. PRESS.", "51 PSI MAX PRESSURE". */
+export function readPressureThenLabel(r: Reader, i: number): number {
+  const p = quantities(r, i, PRESSURE_UNITS);
+  const next = p ? maxPressureLabel(r, p.next) : 0;
+  if (!p || next === 0) return 0;
+  setPressure(r, p.values);
   addSpan(r, "maxPressure", i, next);
   return next;
 }

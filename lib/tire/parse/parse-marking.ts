@@ -2,7 +2,7 @@ import type { ParseOptions, ParseResult } from "../types";
 import { readDot } from "./dot";
 import { finish } from "./finish";
 import { readLoadRange, readLoadType, readLoneLoadRange, readMudAndSnow, readPlyRating, readRunFlat, readThreePeak } from "./marks";
-import { readMaxRating } from "./max-ratings";
+import { readMaxRating, readPressureThenLabel } from "./max-ratings";
 import { addSpan, newDraft, textOf, type PartReader, type Reader } from "./reader";
 import { readService } from "./service";
 import { diagnoseBareRim, diagnoseSize, readSize } from "./size";
@@ -23,7 +23,7 @@ function readAt(r: Reader, i: number): number {
   const t = r.tokens[i];
   switch (t?.kind) {
     case "num":
-      return readSize(r, i) || readUtqgGrades(r, i) || readService(r, i) || readPlyRating(r, i) || readThreePeak(r, i) || diagnoseSize(r, i);
+      return readSize(r, i) || readUtqgGrades(r, i) || readService(r, i) || readPlyRating(r, i) || readThreePeak(r, i) || readPressureThenLabel(r, i) || diagnoseSize(r, i);
     case "word":
       // "LRE" is read like "LR E".
       return BY_FIRST_WORD.get(t.text.length === 3 && t.text.startsWith("LR") ? "LR" : t.text)?.(r, i) || readSize(r, i) || readDot(r, i) || readLoneLoadRange(r, i) || diagnoseSize(r, i) || diagnoseBareRim(r, i);

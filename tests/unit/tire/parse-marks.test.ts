@@ -53,6 +53,26 @@ describe("reading load ranges and ply ratings", () => {
     expect(read("33x12.50R15LT 108Q C").loadRange).toBe("C");
   });
 
+  // ST tires carry load ranges as LT tires do (TRA, common practice); D is 8-ply (common practice).
+  it.each([
+    "ST205/75R15D 107/102M",
+    "ST205/75R15 D 107/102M",
+    "ST205/75R15 107/102M D",
+    "st205/75r15 107/102m d",
+    "ST205/75R15 107/102M LR D",
+    "ST205/75R15 107/102M LRD",
+    "ST205/75R15 107/102M LOAD RANGE D",
+    "ST205/75R15 107/102M Load Range: D",
+  ])("%s reads load range D, 8-ply implied, with no warning (TRA, common practice)", (text) => {
+    const m = read(text);
+    expect([m.loadRange, m.plyRating, m.warnings]).toEqual(["D", 8, []]);
+  });
+
+  it("reads a trailer tire's load range beside its ply rating (TRA, common practice: E is 10-ply)", () => {
+    const m = read("ST225/75R15 117/112L E 10PR");
+    expect([m.loadRange, m.plyRating, m.warnings]).toEqual(["E", 10, []]);
+  });
+
   it("does not take a lone letter after a passenger size for a load range", () => {
     const m = read("265/75R16 116S E");
     expect(m.loadRange).toBeNull();
@@ -109,9 +129,62 @@ describe("reading maximum load and pressure", () => {
     expect(read("MAX PRESS 350 KPA (44 PSI)").warnings.join(" ")).toContain("do not agree");
   });
 
+  it.each([
+    ["350 KPA (51 PSI) MAX. PRESS.", { kPa: 350, psi: 51 }],
+    ["51 PSI MAX PRESSURE", { kPa: null, psi: 51 }],
+    ["350 kPa max. inflation pressure", { kPa: 350, psi: null }],
+    ["285/50R20 119S MAX LOAD 1360 KG (2998 LBS) 350 KPA (51 PSI) MAX. PRESS.", { kPa: 350, psi: 51 }],
+    ["MAX LOAD 1360 KG (2998 LBS) AT 350 KPA (51 PSI) MAX PRESS", { kPa: 350, psi: 51 }],
+  ])("reads a maximum pressure labelled after its figure: %s", (text, pressure) => {
+    const m = read(text);
+    expect(m.maxPressure).toEqual(pressure);
+    expect(m.warnings).toEqual([]);
+    expect(parts(m).filter((part) => part.startsWith("unread"))).toEqual([]);
+  });
+
+  it("still leaves a pressure with no maximum label unread", () => {
+    expect(read("205/55R16 91V 44 PSI").warnings).toEqual(['Not read: "44 PSI".']);
+  });
+
+  // LI 115 = 1,215 kg (ISO 4000-1); 1,215 × 2.20462 = 2,678.6 lb.
+  it.each(["265/70R17 115T MAX LOAD 1215 KG (2679 LBS)", "265/70R17 115T MAX LOAD 1215 KG (2680 LBS)", "115T MAX LOAD 2679 LBS"])(
+    "reads %s as consistent (ISO 4000-1: LI 115 = 1,215 kg = 2,679 lb)",
+    (text) => expect(read(text).warnings).toEqual([]),
+  );
+
+  it("accepts pound figures a few pounds low, from tables rounded down to 5 or 10 lb or converted at 2.2 lb/kg (common practice)", () => {
+    // LI 62 = 265 kg = 584.2 lb, printed 580; LI 115: 1,215 kg × 2.2 = 2,673 lb.
+    expect(read("62T MAX LOAD 265 KG (580 LBS)").warnings).toEqual([]);
+    expect(read("115T MAX LOAD 1215 KG (2673 LBS)").warnings).toEqual([]);
+    expect(read("115T MAX LOAD 2670 LBS").warnings).toEqual([]);
+  });
+
+  it("warns about a pound figure above what its kilograms carry beyond rounding (ISO 4000-1: LI 115 = 2,679 lb)", () => {
+    expect(read("MAX LOAD 1215 KG (2690 LBS)").warnings).toEqual(["The maximum load reads 1,215 kg but 2,690 lb; the two do not agree."]);
+    expect(read("115T MAX LOAD 2690 LBS").warnings).toEqual(["The maximum load of 2,690 lb does not match load index 115 (2,679 lb)."]);
+    expect(read("115T MAX LOAD 2660 LBS").warnings).toEqual(["The maximum load of 2,660 lb does not match load index 115 (2,679 lb)."]);
+  });
+
   it("reads thousands separators and dotted abbreviations", () => {
     expect(read("MAX. LOAD 1,360 KG (2,998 LBS)").maxLoad?.single).toEqual({ kg: 1360, lb: 2998 });
     expect(read("Max. Press. 44 psi").maxPressure).toEqual({ kPa: null, psi: 44 });
+  });
+});
+
+describe("reading RF (common practice)", () => {
+  it("after the service description, RF means reinforced: extra load", () => {
+    const m = read("225/45R17 94W RF");
+    expect([m.extraLoad, m.runFlat]).toEqual([true, false]);
+    expect(parts(m)).toContain("loadType:RF");
+  });
+
+  it("inside the size, RF means run-flat", () => {
+    const m = read("225/45RF17 94W");
+    expect([m.extraLoad, m.runFlat, m.size?.runFlat]).toEqual([false, true, true]);
+  });
+
+  it("right after the size, before a service description, RF means run-flat", () => {
+    expect([read("225/45R17 RF 94W").runFlat, read("225/45R17 RF 94W").extraLoad]).toEqual([true, false]);
   });
 });
 
