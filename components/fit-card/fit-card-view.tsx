@@ -5,6 +5,7 @@ import { SafetyCautions } from "@/components/ui/safety-cautions";
 import { originalServiceWords, placardMinimumWords } from "@/lib/fit-cards/original-words";
 import type { PublicFitCard } from "@/lib/fit-cards/read-card";
 import type { ShopContact } from "@/lib/shop/queries";
+import { seasonTireWords } from "@/lib/tire";
 import { FitCardComparison } from "./fit-card-comparison";
 import { FitCardTires } from "./fit-card-tires";
 import { ShareActions } from "./share-actions";
@@ -27,7 +28,7 @@ export function FitCardView({ card, shop, url }: { card: PublicFitCard; shop: Sh
           <span className="font-mono">{service}</span>. Diameter tolerance ±{card.tolerancePct} %. Saved {day.format(new Date(card.createdAt))}
           {card.expiresAt ? `, shown until ${day.format(new Date(card.expiresAt))}` : ""}.
           {placard ? ` ${placard}` : ""}
-          {original.season ? ` The tire on the car now is ${original.season === "all-season" || original.season === "all-weather" ? "an" : "a"} ${original.season} tire.` : ""}
+          {original.season ? ` The tire on the car now is ${seasonTireWords(original.season)}.` : ""}
         </p>
       </PageIntro>
       <ShareActions url={url} title={`${title} · Fit card`} />

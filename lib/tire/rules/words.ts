@@ -1,6 +1,7 @@
 import { formatSignedPercent } from "../display";
 import type { ServiceType } from "../service-type";
 import { speedSymbolInfo, type SpeedSymbol } from "../speed-symbols";
+import type { Season } from "../vocabulary";
 import type { RuleCheck, RuleNote, Verdict } from "./judge";
 
 /** The judge's codes in English words: one line per rule that holds, one per rule that fails, one per note. */
@@ -108,10 +109,13 @@ export function failedRuleWords(verdict: Verdict): string[] {
 /** A verdict's reasons: why it qualifies, or what it does not meet. */
 export const verdictWords = (verdict: Verdict): string[] => (verdict.qualifies ? qualifyingReasonWords(verdict) : failedRuleWords(verdict));
 
+/** "an all-season tire", "a winter tire". */
+export const seasonTireWords = (season: Season): string => `${/^[aeiou]/.test(season) ? "an" : "a"} ${season} tire`;
+
 function noteText(note: RuleNote): string {
   switch (note.note) {
     case "seasonChange":
-      return `season change: a ${note.to} tire in place of the ${note.from} tire on the car now`;
+      return `season change: ${seasonTireWords(note.to)} in place of the ${note.from} tire on the car now`;
     case "inflation": {
       const kind = note.euroMetric ? `a Euro-metric${note.extraLoad ? " extra-load (XL)" : ""}` : "an extra-load (XL)";
       return `inflation: ${kind} tire needs a different pressure than a P-metric one for the same load; use the maker's load and inflation table and the placard`;

@@ -53,6 +53,38 @@ describe("GET /api/v1/plus", () => {
     expect(body.candidates.some((c: { catalogMatches: number }) => c.catalogMatches > 0)).toBe(true);
   });
 
+  it("counts only tires that meet rules 2–7 against the original, each on its own rim: dual index, load range and run-flat too", async () => {
+    const rows = await (await getDb())
+      .select({
+        designation: stockItem.designation, serviceType: stockItem.serviceType, loadIndex: stockItem.loadIndex, loadIndexDual: stockItem.loadIndexDual,
+        speedRank: stockItem.speedRank, loadRangePly: stockItem.loadRangePly, runFlat: stockItem.runFlat, retired: stockItem.retired,
+      })
+      .from(stockItem);
+    // An LT original marked 121/118S, load range E (10-ply rating): every count needs a dual index ≥ 118 and load range E or more.
+    const truck = await plus("size=LT265-70R17&loadIndex=121&loadIndexDual=118&speedSymbol=S&loadRange=E");
+    expect(truck.status).toBe(200);
+    for (const candidate of truck.body.candidates as { designation: string; catalogMatches: number }[]) {
+      const expected = rows.filter(
+        (row) =>
+          row.designation === candidate.designation && row.serviceType === "LT" && !row.retired && row.loadIndex >= 121 &&
+          row.loadIndexDual !== null && row.loadIndexDual >= 118 && row.speedRank >= speedSymbolRank("S") && (row.loadRangePly ?? 0) >= 10,
+      ).length;
+      expect(candidate.catalogMatches, candidate.designation).toBe(expected);
+    }
+    expect(truck.body.candidates.some((c: { catalogMatches: number }) => c.catalogMatches > 0)).toBe(true);
+    // A run-flat original counts run-flat tires only (rule 7).
+    const runFlat = await plus("size=225-45R17&loadIndex=91&speedSymbol=V&runFlat=true");
+    for (const candidate of runFlat.body.candidates as { designation: string; catalogMatches: number }[]) {
+      const expected = rows.filter(
+        (row) => row.designation === candidate.designation && row.serviceType === "passenger" && !row.retired && row.loadIndex >= 91 && row.speedRank >= speedSymbolRank("V") && row.runFlat,
+      ).length;
+      expect(candidate.catalogMatches, candidate.designation).toBe(expected);
+    }
+    // Passenger tires carry no dual rating: a dual minimum leaves none (common practice).
+    const dual = await plus("size=225-45R17&loadIndex=91&loadIndexDual=88&speedSymbol=V");
+    expect((dual.body.candidates as { catalogMatches: number }[]).every((c) => c.catalogMatches === 0)).toBe(true);
+  });
+
   it("gives null minimums without a load index, and refuses bad input with the published codes", async () => {
     expect((await plus("size=205-55R16")).body.candidates[0].minLoadIndex).toBeNull();
     expect((await plus("")).body.error.code).toBe("missing_parameter");
@@ -60,5 +92,8 @@ describe("GET /api/v1/plus", () => {
     expect((await plus("size=205-55R16&loadIndex=300")).body.error.code).toBe("unknown_load_index");
     expect((await plus("size=205-55R16&speedSymbol=X")).body.error.code).toBe("unknown_speed_symbol");
     expect((await plus("size=205-55R16&tolerancePct=9")).body.error.code).toBe("invalid_parameter");
+    expect((await plus("size=205-55R16&loadRange=Z")).body.error.code).toBe("invalid_parameter");
+    expect((await plus("size=205-55R16&runFlat=maybe")).body.error.code).toBe("invalid_parameter");
+    expect((await plus("size=205-55R16&loadIndexDual=300")).body.error.code).toBe("unknown_load_index");
   });
 });

@@ -2,6 +2,7 @@ import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { fitCard, stockItem, user } from "@/db/schema";
 import { newFitCardSchema } from "@/lib/fit-cards/card-input";
+import { search } from "../catalog/fixtures";
 import { createFitCard } from "@/lib/fit-cards/create-card";
 import { readFitCard } from "@/lib/fit-cards/read-card";
 import { listAllCards, listOwnCards } from "@/lib/fit-cards/queries";
@@ -26,6 +27,8 @@ describe.each(testDatabaseKinds)("Fit cards on %s", (kind) => {
       { sku: "FC-17", designation: "225/45R17", loadIndex: 94, speedSymbol: "W", extraLoad: true, priceCents: 15_900 },
       { sku: "FC-18", designation: "225/40R18", loadIndex: 92, speedSymbol: "Y", priceCents: 17_900 },
       { sku: "FC-OLD", designation: "225/45R17", loadIndex: 91, speedSymbol: "V", retired: true },
+      { sku: "FC-DUAL", designation: "LT265/75R16", loadIndex: 123, loadIndexDual: 120, loadRange: "E", speedSymbol: "S" },
+      { sku: "FC-SINGLE", designation: "LT265/75R16", loadIndex: 126, loadRange: "E", speedSymbol: "S" },
     ]);
   });
   afterAll(async () => {
@@ -50,6 +53,33 @@ describe.each(testDatabaseKinds)("Fit cards on %s", (kind) => {
     ]);
     expect(card.tires[0]?.reasons).toContain("same 17-inch rim");
     expect(card.tires[1]?.reasons[0]).toBe("18-inch rim, not 17-inch: a plus size needs other wheels");
+  });
+
+  it("keeps everything the judge reads about the original, and judges each tire exactly as the finder does", async () => {
+    const truck = {
+      size: "LT265/75R16", loadIndex: 123, loadIndexDual: 120, speedSymbol: "S", loadRange: "E" as const,
+      minLoadIndex: 121, minLoadIndexDual: 120, season: "winter" as const,
+    };
+    const saved = await createFitCard(
+      database.db,
+      staff.id,
+      cardInput({ sizes: [truck.size], skus: ["FC-DUAL", "FC-SINGLE"], note: "For the work truck", loadIndex: 123, loadIndexDual: 120, speedSymbol: "S", loadRange: "E", runFlat: false, minLoadIndex: 121, minLoadIndexDual: 120, originalSeason: "winter" }),
+    );
+    if (!saved.ok) throw new Error(saved.message);
+    const lookup = await readFitCard(database.db, saved.slug);
+    if (lookup.status !== "found") throw new Error(lookup.status);
+    expect(lookup.card.original).toMatchObject({ loadIndexDual: 120, runFlat: false, minLoadIndex: 121, minLoadIndexDual: 120, season: "winter", loadRange: "E" });
+    const [dual, single] = lookup.card.tires;
+    // Rule 3: a tire without a dual index never qualifies for a dual original (common practice).
+    expect([dual?.equalOrBetter, single?.equalOrBetter]).toEqual([true, false]);
+    expect(single?.reasons).toEqual(["no dual load index: not rated for dual wheels (needs a dual index of 120 or more)"]);
+    expect(dual?.notes).toEqual(["season change: an all-season tire in place of the winter tire on the car now"]);
+
+    const finder = await search(database.db, truck, { tolerancePct: lookup.card.tolerancePct });
+    const found = finder.results.find((tire) => tire.sku === "FC-DUAL");
+    expect(dual?.reasons).toEqual(found?.reasons);
+    expect(dual?.notes).toEqual(found?.notes);
+    expect(single?.reasons).toEqual(finder.nearMisses.find((tire) => tire.sku === "FC-SINGLE")?.failed);
   });
 
   it("keeps internal fields out of the public card", async () => {
