@@ -1,4 +1,5 @@
-import type { SidewallPartKey } from "@/lib/tire";
+import type { SidewallPartKey, TireSize } from "@/lib/tire";
+import { rimTwinCaution } from "@/lib/tire/rim-twins";
 
 /**
  * Plain-words explanations of each part of a sidewall marking, in our own words.
@@ -17,6 +18,12 @@ export const sidewallParts: Record<SidewallPartKey, PartExplanation> = {
     title: "Service type",
     summary:
       "A letter before the size says what the tire is built for: P for passenger cars, LT for light trucks that carry heavy loads, ST for trailers only, T for a temporary spare. No letter usually means a metric passenger tire.",
+  },
+  overallDiameter: {
+    title: "Overall diameter",
+    summary:
+      "On a flotation size such as 33x12.50R15LT, the first number is the tire's overall diameter in inches: how tall it stands, not how wide it is. The width follows the x, also in inches, then the rim diameter.",
+    learnTopic: "overall-diameter",
   },
   sectionWidth: {
     title: "Section width",
@@ -47,7 +54,7 @@ export const sidewallParts: Record<SidewallPartKey, PartExplanation> = {
   loadIndex: {
     title: "Load index",
     summary:
-      "A code for the most weight one tire may carry at its rated pressure. Never fit a lower load index than the vehicle's placard specifies. Two numbers (like 123/120) give the load for single and for dual wheels.",
+      "A code for the most weight one tire may carry at its rated pressure. Never fit a lower load index than the vehicle's placard specifies. Two numbers (like 123/120) give the load for single and for dual wheels. Passenger tires have one number only: they carry no dual rating and do not belong on dual wheels.",
     learnTopic: "load-index",
   },
   speedSymbol: {
@@ -59,7 +66,7 @@ export const sidewallParts: Record<SidewallPartKey, PartExplanation> = {
   loadRange: {
     title: "Load range",
     summary:
-      "On light-truck tires, a letter for how strong the carcass is and how much pressure it may hold: C, D, E and up. A replacement needs the same load range or higher.",
+      "On light-truck and trailer (ST) tires, a letter for how strong the carcass is and how much pressure it may hold: C, D, E and up. A replacement needs the same load range or higher.",
     learnTopic: "load-range",
   },
   plyRating: {
@@ -109,3 +116,25 @@ export const sidewallParts: Record<SidewallPartKey, PartExplanation> = {
       "The highest cold pressure the tire itself may hold. It is not the pressure to drive at: use the pressure on your vehicle's placard.",
   },
 };
+
+const INCH_WIDTH_SUMMARY =
+  "This size marks the section width in inches, not millimetres: the 12.50 of 33x12.50R15LT is 12.5 inches (about 318 mm), the 7.50 of 7.50R16 is 7.5 inches. It is measured from sidewall to sidewall on the tire's measuring rim.";
+
+const INCH_COMMERCIAL_SUMMARY =
+  "A size with its width in inches and no aspect ratio, such as 11R22.5 or 7.50-16, is made for trucks and other commercial vehicles. Replace it with a tire of the same kind, as the vehicle and tire makers specify.";
+
+/** The explanation of one part of a given size: inch widths and rim diameters that have a half-inch twin say so. */
+export function explainPart(key: SidewallPartKey, size: TireSize | null): PartExplanation {
+  const explanation = sidewallParts[key];
+  if (size === null) return explanation;
+  if (key === "sectionWidth" && size.kind !== "metric") return { ...explanation, summary: INCH_WIDTH_SUMMARY };
+  if (key === "commercial" && size.kind !== "metric") return { ...explanation, title: "Truck or commercial", summary: INCH_COMMERCIAL_SUMMARY };
+  const rimCaution = key === "rimDiameter" ? rimTwinCaution(size.rimDiameterIn) : null;
+  return rimCaution === null ? explanation : { ...explanation, summary: `${explanation.summary} ${rimCaution}` };
+}
+
+/** "More about …" in running text: lower case, but abbreviations keep their capitals (DOT, TIN, UTQG, XL). */
+export function moreAboutLabel(title: string): string {
+  const words = title.split(" ").map((word) => (/^\(?[A-Z0-9]+\)?$/.test(word) ? word : word.toLowerCase()));
+  return `More about ${words.join(" ")}`;
+}

@@ -1,11 +1,13 @@
 import Link from "next/link";
 import { sizeToSlug } from "@/lib/tire";
 import type { Marking } from "@/lib/tire";
+import { rimTwin } from "@/lib/tire/rim-twins";
 
 /** Where to go with a size that has been read, each link carrying everything already known. */
 export function NextSteps({ marking }: { marking: Marking }) {
   if (!marking.size) return null;
   const slug = sizeToSlug(marking.size);
+  const twin = rimTwin(marking.size.rimDiameterIn);
   const service = new URLSearchParams({ size: slug });
   if (marking.service) {
     service.set("loadIndex", String(marking.service.loadIndex));
@@ -34,7 +36,7 @@ export function NextSteps({ marking }: { marking: Marking }) {
         ))}
       </ul>
       <p className="mt-3 border-l-4 border-caution bg-caution-soft px-3 py-2 text-sm text-ink">
-        Before you buy: keep the {marking.size.rimDiameterIn}-inch rim diameter, and never choose a lower load index or speed rating than your
+        Before you buy: keep the {marking.size.rimDiameterIn}-inch rim diameter{twin === null ? "" : ` (never ${twin}-inch)`}, and never choose a lower load index or speed rating than your
         vehicle&apos;s placard asks for. A qualified fitter should mount and balance the tires.
       </p>
     </section>

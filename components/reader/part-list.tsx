@@ -1,19 +1,22 @@
 import Link from "next/link";
-import { sidewallParts } from "@/content/sidewall-parts";
+import { explainPart, moreAboutLabel } from "@/content/sidewall-parts";
+import type { TireSize } from "@/lib/tire";
 import type { DescribedPart, SidewallPartKey } from "@/lib/tire/describe";
 
 interface PartListProps {
   parts: DescribedPart[];
+  /** The size read, whose kind and rim choose some explanations (inch widths, half-inch rims). */
+  size: TireSize | null;
   active: SidewallPartKey | null;
   onActivate: (key: SidewallPartKey | null) => void;
 }
 
 /** Each part of the marking, what it says here, and what it means in plain words. */
-export function PartList({ parts, active, onActivate }: PartListProps) {
+export function PartList({ parts, size, active, onActivate }: PartListProps) {
   return (
     <ol className="grid gap-3" onMouseLeave={() => onActivate(null)}>
       {parts.map((part) => {
-        const explanation = sidewallParts[part.key];
+        const explanation = explainPart(part.key, size);
         const isActive = active === part.key;
         return (
           <li
@@ -37,7 +40,7 @@ export function PartList({ parts, active, onActivate }: PartListProps) {
             <p className="mt-1 text-sm text-ink-soft">{explanation.summary}</p>
             {explanation.learnTopic ? (
               <Link href={`/learn/${explanation.learnTopic}`} prefetch={false} className="mt-1 inline-block text-sm text-accent underline underline-offset-4">
-                More about {explanation.title.toLowerCase()}
+                {moreAboutLabel(explanation.title)}
               </Link>
             ) : null}
           </li>

@@ -59,7 +59,7 @@ export function SidewallReader({ initialText }: { initialText: string }) {
           <h2 id="parts-heading" className="mb-2 font-semibold">
             What each part means
           </h2>
-          <PartList parts={parts} active={active} onActivate={setActive} />
+          <PartList parts={parts} size={marking?.size ?? null} active={active} onActivate={setActive} />
         </section>
       ) : null}
       {marking ? (

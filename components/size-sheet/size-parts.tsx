@@ -1,5 +1,5 @@
 import Link from "next/link";
-import { sidewallParts } from "@/content/sidewall-parts";
+import { explainPart, moreAboutLabel } from "@/content/sidewall-parts";
 import { describeMarking, type Marking } from "@/lib/tire";
 
 /** Each part of the designation with its reading in both unit systems and its plain-words meaning. */
@@ -8,7 +8,7 @@ export function SizeParts({ marking }: { marking: Marking }) {
   return (
     <dl className="grid gap-3 sm:grid-cols-2">
       {describeMarking(marking, "metric").map((part) => {
-        const explanation = sidewallParts[part.key];
+        const explanation = explainPart(part.key, marking.size);
         const otherReading = imperial.get(part.key);
         return (
           <div key={part.key} className="rounded border border-rule bg-sheet p-3">
@@ -21,7 +21,7 @@ export function SizeParts({ marking }: { marking: Marking }) {
             {explanation.learnTopic ? (
               <dd className="mt-1 text-sm">
                 <Link href={`/learn/${explanation.learnTopic}`} className="text-accent underline underline-offset-4">
-                  More about {explanation.title.toLowerCase()}
+                  {moreAboutLabel(explanation.title)}
                 </Link>
               </dd>
             ) : null}

@@ -1,9 +1,11 @@
 import { parseMarking } from "@/lib/tire";
 import type { Lesson } from "./types";
 
-// The structure of the TIN (three-symbol plant codes and 13 symbols since the April 2015 rule, the
-// letters left out, the partial TIN on the second sidewall) and tire registration are written from
-// memory of 49 CFR 574. The age thresholds match the tire core's date warnings (common practice).
+// The April 2015 amendment of 49 CFR 574.5 (three-symbol plant codes for new tires, TINs of 13
+// symbols) is read from the final rule's summary, 80 FR 19553; its ten-year lead time for plants
+// with two-symbol codes (to April 2025) from a trade report of that rule. The letters left out, the
+// partial TIN on the second sidewall and tire registration are written from memory of 49 CFR 574.
+// The age thresholds match the tire core's date warnings (common practice).
 const example = "DOT 4B7X 2HRT 1523";
 const read = parseMarking(example);
 const dot = read.ok ? read.dot : null;
@@ -20,8 +22,15 @@ export const dotCodeLesson: Lesson = {
       heading: "What follows the letters DOT",
       paragraphs: [
         "DOT on a sidewall is the maker's statement that the tire meets the US federal safety standards. The letters and digits after it are the tire identification number, or TIN.",
-        "The TIN reads in three parts. First comes the plant code, which names the factory. Next comes a group the maker uses for its own purposes, often the size and the tire line. Last comes the date code. Plants given a code since the April 2015 rule have three-symbol plant codes and 13-symbol TINs; older plants keep two-symbol codes.",
+        "The TIN reads in three parts. First comes the plant code, which names the factory. Next comes a group the maker uses for its own purposes, often the size and the tire line. Last comes the date code.",
         "To avoid mix-ups with digits, the letters G, I, O, Q, S and Z are never used in a TIN.",
+      ],
+    },
+    {
+      heading: "Two- and three-symbol plant codes",
+      paragraphs: [
+        "Plant codes used to be two symbols long, and the two-symbol codes ran out. An amendment to the US rule that took effect in April 2015 gives plants making new tires three-symbol codes, and sets the TIN of a new tire at 13 symbols.",
+        "Plants that already had a two-symbol code were given ten years to change over. A tire made before April 2025 may still show a two-symbol plant code; one made from April 2025 on shows a three-symbol code. Either way the plant code comes first and the date code last, so the age reads the same.",
       ],
     },
     {
@@ -47,7 +56,10 @@ export const dotCodeLesson: Lesson = {
     },
   ],
   standards: [
-    { name: "49 CFR 574.5, Tire identification requirements", covers: "the TIN and its date code, as amended in April 2015 (three-symbol plant codes, 13-symbol TINs)" },
+    {
+      name: "49 CFR 574.5, Tire identification requirements",
+      covers: "the TIN and its date code, as amended in April 2015: three-symbol plant codes and 13-symbol TINs for new tires, two-symbol codes phased out by April 2025",
+    },
     { name: "49 CFR 574.7 and 574.8", covers: "registering tires so that owners hear of recalls" },
   ],
   commonPractice: [

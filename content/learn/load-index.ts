@@ -4,7 +4,8 @@ import { CAR_LOAD_INDEX_RANGE } from "./ranges";
 import type { Lesson } from "./types";
 
 // The load figures and the FMVSS 120 S5.1.2 divisor are read from the tire core; the dual-wheel
-// reasoning and the share of the axle rating per tire are written from memory.
+// reasoning and the share of the axle rating per tire are written from memory. That passenger tires
+// carry no dual rating and do not belong on dual wheels is common practice.
 const [carFrom, carTo] = CAR_LOAD_INDEX_RANGE;
 
 export const loadIndexLesson: Lesson = {
@@ -26,6 +27,7 @@ export const loadIndexLesson: Lesson = {
       heading: "Two numbers, like 123/120",
       paragraphs: [
         `Tires for vans and light trucks often show two indices. The first is for a tire running alone at the end of an axle, the second for a tire running beside a twin on a dual-wheel axle. 123 means ${loadOfIndex(123)}; 120 means ${loadOfIndex(120)} for each tire of a pair, because twins never share the weight perfectly evenly.`,
+        "Passenger tires show one index only: they carry no dual rating and do not belong on dual wheels. An axle with dual wheels needs tires whose second, dual index is at least what the vehicle asks for.",
       ],
     },
     {
@@ -47,10 +49,12 @@ export const loadIndexLesson: Lesson = {
   standards: [
     { name: "ISO 4000-1 and the ETRTO Standards Manual", covers: `the load-index table, ${LOAD_INDEX_MIN} to ${LOAD_INDEX_MAX}` },
     { name: "French Arrêté of 24 October 1994, Annex II", covers: "the published load-index table for indices 0 to 200" },
+    { name: "UN Regulation No. 54, Annex 4", covers: `the load-index table as published for commercial-vehicle tires, up to ${LOAD_INDEX_MAX}` },
     { name: "FMVSS 120 (49 CFR 571.120)", covers: "tire selection: each tire carries its share of the axle rating; S5.1.2 for passenger-car tires on trucks, MPVs and trailers" },
   ],
   commonPractice: [
     `Load indices of about ${carFrom} to ${carTo} cover most cars, SUVs and light trucks (common practice).`,
+    "Passenger tires carry no dual rating and do not belong on dual wheels: fit tires with a dual index there (common practice).",
     `Pounds in load tables are kilograms × ${LB_PER_KG}, rounded to the whole pound (common practice).`,
     "Drive at the pressure on the vehicle's placard, not at the maximum printed on the sidewall (common practice; the vehicle maker's figure prevails).",
   ],

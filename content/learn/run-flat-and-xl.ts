@@ -1,10 +1,19 @@
-import { REFERENCE_PRESSURE } from "@/lib/tire";
+import { parseMarking, REFERENCE_PRESSURE } from "@/lib/tire";
 import { bothPressures } from "./figures";
 import type { Lesson } from "./types";
 
 // How run-flat and reinforced tires are marked, the need for pressure monitoring with run-flats and
-// the makers' limits after a puncture are written from memory (UN R30, FMVSS 138). The XL reference
-// pressure is read from the tire core.
+// the makers' limits after a puncture are written from memory (UN R30, FMVSS 138); RF meaning
+// reinforced after the service description is common practice. The XL reference pressure is read
+// from the tire core, which must read both RF examples as the text says.
+const RUN_FLAT_EXAMPLE = "225/45RF17 94W";
+const REINFORCED_EXAMPLE = "225/45R17 94W RF";
+const runFlat = parseMarking(RUN_FLAT_EXAMPLE);
+const reinforced = parseMarking(REINFORCED_EXAMPLE);
+if (!runFlat.ok || !runFlat.runFlat || runFlat.extraLoad || !reinforced.ok || !reinforced.extraLoad || reinforced.runFlat) {
+  throw new Error("The RF examples no longer read as run-flat and as reinforced");
+}
+
 export const runFlatAndXlLesson: Lesson = {
   slug: "run-flat-and-xl",
   title: "Run-flat and Extra Load (XL) tires",
@@ -30,6 +39,7 @@ export const runFlatAndXlLesson: Lesson = {
       heading: "Extra Load (XL): more weight at more pressure",
       paragraphs: [
         "An Extra Load tire, marked XL, EXTRA LOAD or REINFORCED, is a passenger tire built to hold more pressure than a standard-load (SL) tire of the same size. With that extra pressure it carries more, so it has a higher load index.",
+        `The same two letters mean two things, and where they stand tells which. RF after the service description, as in ${REINFORCED_EXAMPLE}, means reinforced: an extra-load tire. RF inside the size, as in ${RUN_FLAT_EXAMPLE}, means run-flat.`,
         `The load index of an SL tire is set at ${bothPressures(REFERENCE_PRESSURE.SL.kPa)}, that of an XL tire at ${bothPressures(REFERENCE_PRESSURE.XL.kPa)}. At the same pressure, an XL tire carries about what an SL tire does.`,
       ],
     },
@@ -46,6 +56,7 @@ export const runFlatAndXlLesson: Lesson = {
     { name: "FMVSS 138 (49 CFR 571.138)", covers: "tire-pressure monitoring systems" },
   ],
   commonPractice: [
+    "RF after the service description means reinforced (extra load); RF inside the size means run-flat (common practice).",
     "Do not mix run-flat and ordinary tires on one vehicle (common practice).",
     "After driving a run-flat without air, have it replaced rather than repaired unless its maker says otherwise (common practice).",
   ],

@@ -1,7 +1,9 @@
 import { formatLength, formatLoad, formatPressure, formatSpeed, type UnitSystem } from "./display";
 import { loadIndexKg } from "./load-index";
-import type { DetailKind, Marking, PartKind, Span } from "./types";
-import { lbToKg, psiToKpa } from "./units";
+import { rimTwin } from "./rim-twins";
+import { serviceType } from "./service-type";
+import type { DetailKind, Marking, PartKind, ServiceDescription, Span, TireSize } from "./types";
+import { lbToKg, mmToIn, psiToKpa } from "./units";
 
 export interface PartSpan {
   start: number;
@@ -10,7 +12,7 @@ export interface PartSpan {
 
 /** The parts a marking is explained by: the pieces of a size and service description, and the other marks. */
 export type SidewallPartKey =
-  | Exclude<DetailKind, "overallDiameter" | "loadIndexDual">
+  | Exclude<DetailKind, "loadIndexDual">
   | "loadRange"
   | "plyRating"
   | "extraLoad"
@@ -49,36 +51,60 @@ function spanOf(spans: Span[], part: PartKind): PartSpan | null {
   return { start: found[0]!.start, end: found[found.length - 1]!.end };
 }
 
+/** Inches as marked on a size: 12.50, 7.50, 11. */
+function markedInches(mm: number): string {
+  const inches = mmToIn(mm);
+  return Number.isInteger(Math.round(inches * 100) / 100) ? String(Math.round(inches)) : inches.toFixed(2);
+}
+
+/** An inch figure as marked, with millimetres beside it for metric readers. */
+function inchesAsMarked(mm: number, units: UnitSystem): string {
+  return units === "metric" ? `${markedInches(mm)} in (${formatLength(mm, "metric")})` : `${markedInches(mm)} in`;
+}
+
+function describeSize(marking: Marking, size: TireSize, units: UnitSystem, add: AddPart): void {
+  const { geometry } = marking;
+  const sizeSpan = spanOf(marking.spans, "size");
+  const sub = (detail: DetailKind) => detailSpan(marking, detail) ?? sizeSpan;
+  if (size.prefix) add("prefix", `${size.prefix}: ${PREFIX_MEANING[size.prefix]}`, sub("prefix"));
+  if (size.flotationDiameterIn !== null && geometry) {
+    add("overallDiameter", `${inchesAsMarked(geometry.overallDiameterMm, units)} tall overall; sidewall ${formatLength(geometry.sidewallMm, units)} high`, sub("overallDiameter"), "overall");
+  }
+  // Metric sizes mark the width in millimetres; the others (flotation, inch-width) in inches.
+  const width = size.kind === "metric" ? formatLength(size.sectionWidthMm, units) : inchesAsMarked(size.sectionWidthMm, units);
+  add("sectionWidth", `${width} wide`, sub("sectionWidth"), "sectionWidth");
+  const aspect = geometry?.aspectRatio ?? null;
+  if (geometry && aspect !== null) {
+    const marked = size.aspectRatio === null ? ` (not marked: the ${aspect} series is assumed)` : "";
+    add("aspectRatio", `sidewall ${aspect} % of the width: ${formatLength(geometry.sidewallMm, units)} high${marked}`, sub("aspectRatio"), "sidewall");
+  }
+  const zr = size.zr ? ", ZR: built for speeds above 240 km/h (149 mph)" : "";
+  add("construction", `${CONSTRUCTION_MEANING[size.construction]}${zr}`, sub("construction"));
+  const twin = rimTwin(size.rimDiameterIn);
+  const never = twin === null ? "" : `, never ${twin}-inch ones`;
+  add("rimDiameter", `fits ${size.rimDiameterIn}-inch wheels only${never}`, sub("rimDiameter"), "rim");
+  if (size.commercial) add("commercial", size.kind === "metric" ? "commercial tire for vans and light trucks" : "truck or commercial tire", sub("commercial"));
+}
+
+function loadIndexReading(service: ServiceDescription, size: TireSize | null, units: UnitSystem): string {
+  const single = `${service.loadIndex}: carries up to ${formatLoad(service.loadKg, units)} per tire`;
+  const dualKg = service.loadIndexDual === null ? undefined : loadIndexKg(service.loadIndexDual);
+  if (dualKg !== undefined) return `${single}; ${service.loadIndexDual} on dual wheels: ${formatLoad(dualKg, units)} each`;
+  return size !== null && serviceType(size) === "passenger" ? `${single}; no dual rating: not for dual wheels` : single;
+}
+
+type AddPart = (key: SidewallPartKey, reading: string, span: PartSpan | null, dimension?: DrawnDimension | null) => void;
+
 /** Every part the marking holds, in sidewall order, each with its reading in plain words. */
 export function describeMarking(marking: Marking, units: UnitSystem): DescribedPart[] {
   const parts: DescribedPart[] = [];
-  const add = (key: SidewallPartKey, reading: string, span: PartSpan | null, dimension: DrawnDimension | null = null) =>
-    parts.push({ key, reading, span, dimension });
-  const { size, geometry, service } = marking;
-
-  if (size && geometry) {
-    const sizeSpan = spanOf(marking.spans, "size");
-    const sub = (detail: DetailKind) => detailSpan(marking, detail) ?? sizeSpan;
-    if (size.prefix) add("prefix", `${size.prefix}: ${PREFIX_MEANING[size.prefix]}`, sub("prefix"));
-    add("sectionWidth", `${formatLength(size.sectionWidthMm, units)} wide`, sub("sectionWidth"), "sectionWidth");
-    const aspect = geometry.aspectRatio;
-    if (aspect !== null) {
-      const marked = size.aspectRatio === null ? ` (not marked: the ${aspect} series is assumed)` : "";
-      add("aspectRatio", `sidewall ${aspect} % of the width: ${formatLength(geometry.sidewallMm, units)} high${marked}`, sub("aspectRatio"), "sidewall");
-    } else {
-      add("aspectRatio", `sidewall ${formatLength(geometry.sidewallMm, units)} high (flotation sizes give the overall diameter instead)`, sub("overallDiameter"), "sidewall");
-    }
-    const zr = size.zr ? ", ZR: built for speeds above 240 km/h (149 mph)" : "";
-    add("construction", `${CONSTRUCTION_MEANING[size.construction]}${zr}`, sub("construction"));
-    add("rimDiameter", `fits ${size.rimDiameterIn}-inch wheels only`, sub("rimDiameter"), "rim");
-    if (size.commercial) add("commercial", "commercial tire for vans and light trucks", sub("commercial"));
-  }
+  const add: AddPart = (key, reading, span, dimension = null) => parts.push({ key, reading, span, dimension });
+  const { size, service } = marking;
+  if (size) describeSize(marking, size, units, add);
 
   if (service) {
     const serviceSpan = spanOf(marking.spans, "service");
-    const dualKg = service.loadIndexDual === null ? undefined : loadIndexKg(service.loadIndexDual);
-    const dual = dualKg === undefined ? "" : `; ${service.loadIndexDual} on dual wheels: ${formatLoad(dualKg, units)} each`;
-    add("loadIndex", `${service.loadIndex}: carries up to ${formatLoad(service.loadKg, units)} per tire${dual}`, detailSpan(marking, "loadIndex", "loadIndexDual") ?? serviceSpan);
+    add("loadIndex", loadIndexReading(service, size, units), detailSpan(marking, "loadIndex", "loadIndexDual") ?? serviceSpan);
     const above = service.speedAbove ? "above " : "up to ";
     add("speedSymbol", `${service.speedSymbol}: built for ${above}${formatSpeed(service.speedKmh, units)}`, detailSpan(marking, "speedSymbol") ?? serviceSpan);
   }

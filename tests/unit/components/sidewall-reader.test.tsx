@@ -66,4 +66,35 @@ describe("the Sidewall reader", () => {
     const finder = screen.getByRole("link", { name: /Replacement finder/ });
     expect(finder.getAttribute("href")).toBe("/replace?size=LT265-75R16&loadIndex=123&speedSymbol=S&loadRange=E");
   });
+
+  it("explains a flotation size: the first number is the overall diameter in inches, the width is in inches (flotation designation)", () => {
+    window.localStorage.setItem("sidewise:units", "metric");
+    render(<SidewallReader initialText="33x12.50R15LT 108Q C" />);
+    const card = (title: string) => screen.getByRole("button", { name: title }).closest("li")!;
+    expect(card("Overall diameter").textContent).toMatch(/first number is the tire's overall diameter in inches/);
+    expect(card("Overall diameter").textContent).toContain("33 in (838 mm) tall overall");
+    expect(card("Section width").textContent).toMatch(/section width in inches, not millimetres/);
+    expect(screen.queryByRole("button", { name: "Aspect ratio" })).toBeNull();
+  });
+
+  it("warns on the rim card that 16- and 16.5-inch tires and wheels never interchange (common practice)", () => {
+    render(<SidewallReader initialText="LT235/85R16 120/116Q E" />);
+    const rim = screen.getByRole("button", { name: "Rim diameter" }).closest("li")!;
+    expect(rim.textContent).toContain("never 16.5-inch ones");
+    expect(rim.textContent).toContain("16- and 16.5-inch tires and wheels never interchange: a bead seated on the wrong rim diameter can burst while being seated");
+  });
+
+  it("keeps the capitals of DOT, TIN, UTQG and XL in its More about links", () => {
+    render(<SidewallReader initialText="245/40ZR18 97Y XL DOT 4B7X 2HRT 1523 500 A A" />);
+    expect(screen.getByRole("link", { name: "More about DOT code (TIN)" }).getAttribute("href")).toBe("/learn/dot-code");
+    expect(screen.getByRole("link", { name: "More about UTQG grades" })).toBeTruthy();
+    expect(screen.getByRole("link", { name: "More about extra load (XL)" })).toBeTruthy();
+    expect(screen.getByRole("link", { name: "More about load index" })).toBeTruthy();
+  });
+
+  it("reads a trailer tire's load range without a warning (TRA, common practice: D is 8-ply)", () => {
+    render(<SidewallReader initialText="ST205/75R15 107/102M D" />);
+    expect(screen.getByText("load range D")).toBeTruthy();
+    expect(screen.queryByText(/Not read/)).toBeNull();
+  });
 });

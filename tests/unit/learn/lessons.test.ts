@@ -45,6 +45,30 @@ describe("Sidewall school lessons", () => {
     expect(speedText).toContain("H means 210 km/h / 130 mph");
   });
 
+  const textOf = (slug: string) => findLesson(slug)?.sections.flatMap((section) => section.paragraphs).join(" ") ?? "";
+
+  it("say that passenger tires carry no dual rating and do not belong on dual wheels (common practice)", () => {
+    expect(textOf("load-index")).toContain("Passenger tires show one index only: they carry no dual rating and do not belong on dual wheels.");
+    expect(findLesson("load-index")?.commonPractice.join(" ")).toMatch(/no dual rating and do not belong on dual wheels/);
+  });
+
+  it("name UN Regulation No. 54, Annex 4 among the load table's published copies (from memory beyond index 200)", () => {
+    expect(findLesson("load-index")?.standards.map((standard) => standard.name)).toContain("UN Regulation No. 54, Annex 4");
+  });
+
+  it("explain three-symbol plant codes: the April 2015 amendment, 13-symbol TINs, two-symbol codes until April 2025 (49 CFR 574.5; 80 FR 19553)", () => {
+    const text = textOf("dot-code");
+    expect(text).toContain("three-symbol codes");
+    expect(text).toContain("13 symbols");
+    expect(text).toContain("April 2025");
+  });
+
+  it("tell reinforced RF after the service description from run-flat RF inside the size (common practice)", () => {
+    const text = textOf("run-flat-and-xl");
+    expect(text).toContain("RF after the service description, as in 225/45R17 94W RF, means reinforced: an extra-load tire.");
+    expect(text).toContain("RF inside the size, as in 225/45RF17 94W, means run-flat.");
+  });
+
   it("work the speedometer example through: 265/70R17 to 285/70R17 is +3.5 %, 100 km/h shown is about 103 km/h (worked example)", () => {
     const text = findLesson("overall-diameter")?.sections.flatMap((section) => section.paragraphs).join(" ");
     expect(text).toContain("a change of +3.5 %");

@@ -59,7 +59,8 @@ describe("describing a marking part by part", () => {
     const parts = describeMarking(read("285/50R20 119S"), "imperial");
     const reading = Object.fromEntries(parts.map((part) => [part.key, part.reading]));
     expect(reading.sectionWidth).toBe("11.2 in wide");
-    expect(reading.loadIndex).toBe("119: carries up to 2,998 lb per tire");
+    // A passenger size (no LT, ST or C): no dual rating (common practice).
+    expect(reading.loadIndex).toBe("119: carries up to 2,998 lb per tire; no dual rating: not for dual wheels");
     expect(reading.speedSymbol).toBe("S: built for up to 112 mph");
     expect(reading.rimDiameter).toBe("fits 20-inch wheels only");
   });
@@ -82,6 +83,37 @@ describe("describing a marking part by part", () => {
     const parts = describeMarking(read("DOT 4B7X 2HRT 1523 Treadwear 500 Traction A Temperature A M+S 3PMSF"), "metric");
     expect(parts.map((part) => part.key)).toEqual(["dot", "utqg", "winter"]);
     expect(parts[0]?.reading).toMatch(/^made in week 15 of 2023, about 3 years old$/);
+  });
+
+  it("says a passenger tire has no dual rating, but not when the size is unknown (common practice)", () => {
+    const reading = (text: string) => describeMarking(read(text), "metric").find((part) => part.key === "loadIndex")?.reading;
+    // Load index 91 = 615 kg (ISO 4000-1 load-index table).
+    expect(reading("205/55R16 91V")).toBe("91: carries up to 615 kg per tire; no dual rating: not for dual wheels");
+    expect(reading("91V")).toBe("91: carries up to 615 kg per tire");
+  });
+
+  it("reads a flotation size's first number as the overall diameter in inches, and its width in inches (flotation designation)", () => {
+    const marking = read("33x12.50R15LT 108Q C");
+    const metric = describeMarking(marking, "metric");
+    const typed = Object.fromEntries(metric.map((part) => [part.key, part.span && marking.input.slice(part.span.start, part.span.end)]));
+    expect(metric.map((part) => part.key).slice(0, 3)).toEqual(["prefix", "overallDiameter", "sectionWidth"]);
+    expect(typed).toMatchObject({ overallDiameter: "33", sectionWidth: "12.50", rimDiameter: "15" });
+    expect(metric.some((part) => part.key === "aspectRatio")).toBe(false);
+    // 33 in × 25.4 = 838.2 mm; sidewall (838.2 − 15 × 25.4) ÷ 2 = 228.6 mm; 12.50 in × 25.4 = 317.5 mm.
+    const reading = Object.fromEntries(metric.map((part) => [part.key, part.reading]));
+    expect(reading.overallDiameter).toBe("33 in (838 mm) tall overall; sidewall 229 mm high");
+    expect(reading.sectionWidth).toBe("12.50 in (318 mm) wide");
+    expect(metric.find((part) => part.key === "overallDiameter")?.dimension).toBe("overall");
+    const imperial = Object.fromEntries(describeMarking(marking, "imperial").map((part) => [part.key, part.reading]));
+    expect(imperial.overallDiameter).toBe("33 in tall overall; sidewall 9.0 in high");
+    expect(imperial.sectionWidth).toBe("12.50 in wide");
+  });
+
+  it("names the half-inch twin a rim diameter must never be mixed with (common practice)", () => {
+    const rim = (text: string) => describeMarking(read(text), "metric").find((part) => part.key === "rimDiameter")?.reading;
+    expect(rim("LT235/85R16 120/116Q")).toBe("fits 16-inch wheels only, never 16.5-inch ones");
+    expect(rim("33x12.50R16.5LT")).toBe("fits 16.5-inch wheels only, never 16-inch ones");
+    expect(rim("285/50R20")).toBe("fits 20-inch wheels only");
   });
 
   it("says when the aspect ratio was not marked (82 series, common practice)", () => {
