@@ -39,13 +39,14 @@ export function readLoadRange(r: Reader, i: number): number {
 }
 
 /**
- * A lone load-range letter after a light-truck or trailer size: "LT265/75R16 123/120S E",
- * "ST205/75R15 107/102M D". ST tires carry load ranges as LT tires do (TRA, common practice).
+ * A lone load-range letter after a light-truck, trailer or inch-width size: "LT265/75R16 123/120S E",
+ * "ST205/75R15 107/102M D", "11R22.5 146/143L G". ST and truck tires carry load ranges as LT tires
+ * do (TRA, common practice); metric sizes without a prefix have none.
  */
 export function readLoneLoadRange(r: Reader, i: number): number {
   const w = wordAt(r, i);
   const size = r.draft.size;
-  const rangedSize = size !== null && (size.prefix === "LT" || size.prefix === "ST" || size.kind === "flotation");
+  const rangedSize = size !== null && (size.prefix === "LT" || size.prefix === "ST" || size.kind !== "metric");
   if (!rangedSize || w?.length !== 1 || !isLoadRange(w) || !endsChunk(r, i + 1)) return 0;
   setLoadRange(r, w, i, i + 1);
   return i + 1;
