@@ -5,7 +5,7 @@ export const safetySummary =
 export const safetyCautions = [
   "Follow the tire and loading information placard on your vehicle (usually on the driver's door jamb).",
   "Never fit a lower load index or a lower speed rating than the vehicle specifies.",
-  "Keep the same rim diameter: a tire only fits a wheel of exactly its rim size.",
+  "Keep the same rim diameter: a tire only fits a wheel of exactly its rim size. 16- and 16.5-inch tires and wheels (likewise 15 and 15.5, 17 and 17.5) never interchange: a bead seated on the wrong rim can burst.",
   "A change of overall diameter changes what the speedometer shows and can affect ABS, stability control and clearance.",
   "Have tires mounted and balanced by a qualified fitter.",
   "Local rules and the vehicle and tire makers' guidance prevail over anything shown here.",

@@ -5,19 +5,23 @@ import { ScaledTireDrawing } from "@/components/diagram/scaled-tire-drawing";
 import { SaveFitCard } from "@/components/fit-card/save-fit-card-button";
 import { UnitsToggle } from "@/components/units/units-toggle";
 import { useUnitSystem } from "@/components/units/use-unit-system";
-import { compareSizes, formatSize, sizeFromSlug, sizeGeometry, sizeToSlug, type TireSize } from "@/lib/tire";
+import { compareSizes, formatSize, hasNominalDiameter, measurableSizeFromSlug, noDiameterMessage, sizeFromSlug, sizeGeometry, sizeToSlug, type MeasurableSize } from "@/lib/tire";
 import { DifferenceTable } from "./difference-table";
 import { type SizeEntry, SizeListEditor } from "./size-list-editor";
 import { SpeedometerTable } from "./speedometer-table";
 
-const entryOf = (text: string, id: number): SizeEntry => ({ id, text, valid: sizeFromSlug(text) !== null });
+function entryOf(text: string, id: number): SizeEntry {
+  const size = sizeFromSlug(text);
+  const problem = !size ? "Not a size yet: type it like 275/55R20." : hasNominalDiameter(size) ? null : noDiameterMessage(size);
+  return { id, text, problem };
+}
 
 /** Up to four sizes drawn over each other to one scale, with their differences and the speedometer. */
 export function SideBySide({ initialSizes }: { initialSizes: string[] }) {
   const [entries, setEntries] = useState<SizeEntry[]>(() => (initialSizes.length > 0 ? initialSizes : [""]).map(entryOf));
   const nextId = useRef(entries.length);
   const [units, setUnits] = useUnitSystem();
-  const sizes = useMemo(() => entries.map((entry) => sizeFromSlug(entry.text)).filter((size): size is TireSize => size !== null), [entries]);
+  const sizes = useMemo(() => entries.map((entry) => measurableSizeFromSlug(entry.text)).filter((size): size is MeasurableSize => size !== null), [entries]);
   const compared = useMemo(() => compareSizes(sizes), [sizes]);
 
   useEffect(() => {

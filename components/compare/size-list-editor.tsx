@@ -6,7 +6,8 @@ import { tireLineStyles } from "@/components/diagram/drawing-layout";
 export interface SizeEntry {
   id: number;
   text: string;
-  valid: boolean;
+  /** What is wrong with the text as a size to compare, or null when it compares. */
+  problem: string | null;
 }
 
 interface SizeListEditorProps {
@@ -34,17 +35,17 @@ export function SizeListEditor({ entries, onChange, onRemove, onMove, onAdd }: S
               <input
                 value={entry.text}
                 onChange={(event) => onChange(entry.id, event.target.value)}
-                aria-invalid={entry.text.trim() !== "" && !entry.valid}
-                aria-describedby={!entry.valid && entry.text.trim() ? `size-error-${entry.id}` : undefined}
+                aria-invalid={entry.text.trim() !== "" && entry.problem !== null}
+                aria-describedby={entry.problem !== null && entry.text.trim() ? `size-error-${entry.id}` : undefined}
                 placeholder="e.g. 275/55R20"
                 autoCapitalize="characters"
                 autoComplete="off"
                 spellCheck={false}
                 className="min-h-11 w-full rounded border border-ink/60 bg-sheet px-3 font-mono text-ink aria-invalid:border-danger"
               />
-              {!entry.valid && entry.text.trim() ? (
+              {entry.problem !== null && entry.text.trim() ? (
                 <span id={`size-error-${entry.id}`} className="text-danger">
-                  Not a size yet: type it like 275/55R20.
+                  {entry.problem}
                 </span>
               ) : null}
             </label>

@@ -53,7 +53,7 @@ export function ReplacementFinder({ initialQuery, brands, defaultTolerancePct }:
   return (
     <div className="grid gap-6 lg:grid-cols-[minmax(0,22rem)_minmax(0,1fr)] lg:items-start lg:gap-8">
       <div className="flex min-w-0 flex-col gap-4">
-        <OriginalSummary original={original.marking} units={units} tolerancePct={data.first?.tolerancePct ?? query.tolerancePct ?? defaultTolerancePct} />
+        <OriginalSummary original={original.marking} units={units} tolerancePct={data.first?.tolerancePct ?? query.tolerancePct ?? defaultTolerancePct} minimums={minimums} />
         <div className="flex justify-end">
           <UnitsToggle units={units} onChange={setUnits} />
         </div>

@@ -1,7 +1,5 @@
 import Link from "next/link";
-import { sizeToSlug } from "@/lib/tire";
-import type { Marking } from "@/lib/tire";
-import { rimTwin } from "@/lib/tire/rim-twins";
+import { hasNominalDiameter, rimTwin, sizeToSlug, type Marking } from "@/lib/tire";
 
 /** Where to go with a size that has been read, each link carrying everything already known. */
 export function NextSteps({ marking }: { marking: Marking }) {
@@ -11,14 +9,19 @@ export function NextSteps({ marking }: { marking: Marking }) {
   const service = new URLSearchParams({ size: slug });
   if (marking.service) {
     service.set("loadIndex", String(marking.service.loadIndex));
+    if (marking.service.loadIndexDual !== null) service.set("loadIndexDual", String(marking.service.loadIndexDual));
     service.set("speedSymbol", marking.service.speedSymbol);
   }
   if (marking.loadRange) service.set("loadRange", marking.loadRange);
-  const links = [
-    { href: `/size/${slug}`, label: "Size sheet", hint: "everything about this size, to bookmark or share" },
+  // Side-by-side, the Plus planner and the finder all work by overall diameter, which an inch-width size (11R22.5) does not give.
+  const byDiameter = [
     { href: `/compare?sizes=${slug}`, label: "Side-by-side", hint: "draw it against other sizes" },
     { href: `/plus?${service.toString()}`, label: "Plus planner", hint: "sizes for smaller or larger wheels" },
     { href: `/replace?${service.toString()}`, label: "Replacement finder", hint: "equal-or-better tires in stock" },
+  ];
+  const links = [
+    { href: `/size/${slug}`, label: "Size sheet", hint: "everything about this size, to bookmark or share" },
+    ...(hasNominalDiameter(marking.size) ? byDiameter : []),
   ];
   return (
     <section aria-labelledby="next-steps-heading" className="rounded border border-rule bg-sheet p-4">

@@ -1,11 +1,17 @@
 import Link from "next/link";
 
-/** Where to go from a Size sheet, with the size filled in. */
-export function SizeLinks({ slug, designation }: { slug: string; designation: string }) {
-  const links = [
+/**
+ * Where to go from a Size sheet, with the size filled in. The finder, the Plus planner and
+ * Side-by-side all work by overall diameter, so a size without one (11R22.5) links to the reader only.
+ */
+export function SizeLinks({ slug, designation, measurable }: { slug: string; designation: string; measurable: boolean }) {
+  const byDiameter = [
     { href: `/replace?size=${slug}`, label: "Find replacements in stock", hint: "equal-or-better tires for this size" },
     { href: `/plus?size=${slug}`, label: "Plan a plus size", hint: "sizes for smaller or larger wheels within tolerance" },
     { href: `/compare?sizes=${slug}`, label: "Compare side by side", hint: "draw it against up to three other sizes" },
+  ];
+  const links = [
+    ...(measurable ? byDiameter : []),
     { href: `/?q=${encodeURIComponent(designation)}`, label: "Read a full sidewall", hint: "add the load index, speed symbol or DOT code" },
   ];
   return (

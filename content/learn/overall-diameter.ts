@@ -3,8 +3,8 @@ import {
   formatOneDecimal,
   formatSignedPercent,
   IMPLIED_ASPECT_RATIO,
+  measurableSizeFromSlug,
   mmToIn,
-  sizeFromSlug,
   sizeGeometry,
   type Geometry,
 } from "@/lib/tire";
@@ -16,7 +16,7 @@ import type { Lesson } from "./types";
 // never shows less than the true speed) and the effects on ABS and stability control are written
 // from memory; "about 3 %" is the usual fitter's limit (common practice).
 function geometryOf(designation: string): Geometry {
-  const size = sizeFromSlug(designation);
+  const size = measurableSizeFromSlug(designation);
   if (!size) throw new Error(`The example size ${designation} no longer reads`);
   return sizeGeometry(size);
 }

@@ -120,7 +120,7 @@ export function onLine(row: CatalogCsvRow, line: StockLine): NewStockItem {
 function explain(problem: StockRowProblem, item: StockItemInput): string {
   const speedSymbol = item.speedSymbol.trim().toUpperCase();
   const loadRange = item.loadRange?.trim().toUpperCase() ?? null;
-  if (problem.field === "designation") return `size "${item.designation}" is not a tire size; write it as on the sidewall, such as 225/65R17`;
+  if (problem.field === "designation" && !problem.unmeasurable) return `size "${item.designation}" is not a tire size; write it as on the sidewall, such as 225/65R17`;
   if (problem.field === "speedSymbol" && !isSpeedSymbol(speedSymbol)) return `speed symbol "${item.speedSymbol}" is not in the published table (such as T, H, V or W)`;
   if (problem.field === "loadRange" && loadRange !== null && !isLoadRange(loadRange)) return `load range "${item.loadRange}" is not a load range letter such as C, D or E`;
   return problem.reason;

@@ -1,8 +1,10 @@
 import {
   formatSize,
+  hasNominalDiameter,
   isSpeedSymbol,
   loadIndexKg,
   markedSpeedRank,
+  noDiameterMessage,
   plyRatingForLoadRange,
   sizeFacts,
   sizeFromSlug,
@@ -53,6 +55,7 @@ export function normalizeSpeedSymbol(text: string): SpeedSymbol | undefined {
 export function readOriginal(input: OriginalInput): OriginalResult {
   const size = sizeFromSlug(input.size);
   if (!size) return { ok: false, code: "unreadable", message: `"${input.size}" is not a tire size (try 285/50R20 or 285-50R20).` };
+  if (!hasNominalDiameter(size)) return { ok: false, code: "unreadable", message: `${noDiameterMessage(size)} Replacements are found by overall diameter, so ask the shop.` };
   for (const index of [input.loadIndex, input.loadIndexDual, input.minLoadIndex, input.minLoadIndexDual]) {
     if (index !== undefined && loadIndexKg(index) === undefined) {
       return { ok: false, code: "unknown_load_index", message: `Load index ${index} is not in the load index table (0–279).` };

@@ -2,9 +2,11 @@ import { z } from "zod";
 import type { NewStockItem } from "@/db/schema";
 import {
   formatSize,
+  hasNominalDiameter,
   isLoadRange,
   isSpeedSymbol,
   loadIndexKg,
+  noDiameterMessage,
   plyRatingForLoadRange,
   serviceType,
   sizeFromSlug,
@@ -39,6 +41,8 @@ export interface StockLine {
 export interface StockRowProblem {
   field: keyof StockItemInput;
   reason: string;
+  /** A size that reads but that the catalog cannot hold (no overall diameter): the API answers 422, not 400. */
+  unmeasurable?: true;
 }
 
 export type StockRowResult = { ok: true; row: NewStockItem } | { ok: false; problem: StockRowProblem };
@@ -59,6 +63,9 @@ export function buildStockRow(input: StockItemInput, line: StockLine): StockRowR
   const item = parsed.data;
   const size = sizeFromSlug(item.designation);
   if (!size) return refuse("designation", `"${item.designation}" is not a tire size`);
+  if (!hasNominalDiameter(size)) {
+    return { ok: false, problem: { field: "designation", reason: `${noDiameterMessage(size)} The finder compares tires by overall diameter, so the catalog cannot hold it`, unmeasurable: true } };
+  }
   const service = serviceType(size);
   if (loadIndexKg(item.loadIndex) === undefined) return refuse("loadIndex", `${item.loadIndex} is not a load index (0–279)`);
   const dual = item.loadIndexDual ?? null;

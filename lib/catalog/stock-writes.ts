@@ -6,12 +6,14 @@ import { formatPrice } from "@/lib/shop/money";
 import { changedFields, recordAudit, type Actor } from "@/lib/audit/record";
 import { ofBrand, ofLine } from "./catalog-select";
 import type { NewStockItemBody, StockItemChanges } from "./stock-edit";
-import { buildStockRow, type StockItemInput, type StockLine } from "./stock-row";
+import { buildStockRow, type StockItemInput, type StockLine, type StockRowProblem } from "./stock-row";
 import { tireColumns, toTire, type Tire } from "./tire";
 
 export type StockWriteResult = { ok: true; tire: Tire } | { ok: false; code: ApiErrorCode; message: string };
 
 const refuse = (code: ApiErrorCode, message: string): StockWriteResult => ({ ok: false, code, message });
+const refusedRow = (problem: StockRowProblem) =>
+  problem.unmeasurable ? refuse("unreadable", `${problem.reason}.`) : refuse("invalid_parameter", `The field "${problem.field}" is invalid: ${problem.reason}.`);
 const unknownLine = (brandName: string, lineName: string) =>
   refuse("unknown_line", `The catalog has no line "${lineName}" from the brand "${brandName}"; add the line first.`);
 
@@ -74,7 +76,7 @@ export async function createStockItem(db: Database, body: NewStockItemBody, acto
     const line = await findLine(tx, brandName, lineName);
     if (!line) return unknownLine(brandName, lineName);
     const built = buildStockRow(input, line);
-    if (!built.ok) return refuse("invalid_parameter", `The field "${built.problem.field}" is invalid: ${built.problem.reason}.`);
+    if (!built.ok) return refusedRow(built.problem);
     const { row } = built;
     const inserted = await tx.insert(stockItem).values(row).onConflictDoNothing({ target: stockItem.sku }).returning({ id: stockItem.id });
     if (inserted.length === 0) return refuse("already_exists", `The SKU "${row.sku}" is taken (retired items keep theirs).`);
@@ -106,7 +108,7 @@ export async function updateStockItem(db: Database, sku: string, changes: StockI
       quantity: changes.quantity ?? current.quantityOnHand,
     };
     const built = buildStockRow(input, line);
-    if (!built.ok) return refuse("invalid_parameter", `The field "${built.problem.field}" is invalid: ${built.problem.reason}.`);
+    if (!built.ok) return refusedRow(built.problem);
     await tx.update(stockItem).set({ ...built.row, updatedAt: new Date() }).where(eq(stockItem.sku, sku));
     const audited = changedFields(current, { ...current, ...built.row }, AUDITED_FIELDS);
     if (Object.keys(audited).length > 0) {

@@ -1,9 +1,9 @@
-import { sizeFromSlug, type TireSize } from "@/lib/tire";
+import { hasNominalDiameter, noDiameterMessage, sizeFromSlug, type MeasurableSize } from "@/lib/tire";
 
 export const MAX_COMPARED_SIZES = 4;
 
 export type SizeListResult =
-  | { ok: true; sizes: TireSize[] }
+  | { ok: true; sizes: MeasurableSize[] }
   | { ok: false; code: "invalid_parameter" | "unreadable"; message: string };
 
 /** Reads "285-50R20,275/55R20,…" (slugs or ordinary spellings), at least `min` and at most four sizes. */
@@ -15,10 +15,11 @@ export function readSizeList(text: string, min: number): SizeListResult {
   if (parts.length < min || parts.length > MAX_COMPARED_SIZES) {
     return { ok: false, code: "invalid_parameter", message: `Give ${min === 2 ? "two" : "one"} to four sizes separated by commas; got ${parts.length}.` };
   }
-  const sizes: TireSize[] = [];
+  const sizes: MeasurableSize[] = [];
   for (const part of parts) {
     const size = sizeFromSlug(part);
     if (!size) return { ok: false, code: "unreadable", message: `"${part.slice(0, 40)}" is not a tire size this app can read (try the form 285/50R20).` };
+    if (!hasNominalDiameter(size)) return { ok: false, code: "unreadable", message: noDiameterMessage(size) };
     sizes.push(size);
   }
   return { ok: true, sizes };

@@ -2,7 +2,7 @@ import { originalServiceWords } from "@/lib/fit-cards/original-words";
 import type { PublicFitCard } from "@/lib/fit-cards/read-card";
 import { formatPrice } from "@/lib/shop/money";
 import type { ShopContact } from "@/lib/shop/queries";
-import { compareSizes, formatServiceDescription, formatSignedPercent, sizeFromSlug, type TireSize } from "@/lib/tire";
+import { compareSizes, formatServiceDescription, formatSignedPercent, measurableSizeFromSlug, type MeasurableSize } from "@/lib/tire";
 
 /** Everything a Fit card e-mail says, already worded, so the HTML and the text versions never differ. */
 export interface FitCardEmailContent {
@@ -27,7 +27,7 @@ function tirePrice(tire: PublicFitCard["tires"][number]): string {
 
 export function fitCardEmailContent({ card, shop, link, message }: { card: PublicFitCard; shop: ShopContact | null; link: string; message?: string | null }): FitCardEmailContent {
   const { original } = card;
-  const sizes = card.sizes.map(sizeFromSlug).filter((size): size is TireSize => size !== null);
+  const sizes = card.sizes.map(measurableSizeFromSlug).filter((size): size is MeasurableSize => size !== null);
   const compared = compareSizes(sizes);
   return {
     subject: `Your Fit card: tires for ${original.designation}`,

@@ -4,7 +4,7 @@ import { fitCard, fitCardTire, stockItem } from "@/db/schema";
 import type { ApiErrorCode } from "@/lib/api/errors";
 import { readOriginal } from "@/lib/catalog/original";
 import { readShopTolerance } from "@/lib/catalog/shop-tolerance";
-import { formatSize, sizeFromSlug } from "@/lib/tire";
+import { formatSize, hasNominalDiameter, noDiameterMessage, sizeFromSlug } from "@/lib/tire";
 import type { NewFitCard } from "./card-input";
 import { newFitCardSlug } from "./slug";
 
@@ -18,6 +18,7 @@ export async function createFitCard(db: Database, authorId: string, input: NewFi
   for (const text of input.sizes) {
     const size = sizeFromSlug(text);
     if (!size) return { ok: false, code: "unreadable", message: `"${text.slice(0, 40)}" is not a tire size (try 285/50R20).` };
+    if (!hasNominalDiameter(size)) return { ok: false, code: "unreadable", message: noDiameterMessage(size) };
     designations.push(formatSize(size));
   }
   const original = readOriginal({ ...input, size: input.sizes[0]!, season: input.originalSeason });

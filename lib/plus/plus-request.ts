@@ -3,7 +3,7 @@ import type { Database } from "@/db/client";
 import type { ApiErrorCode } from "@/lib/api/errors";
 import { readShopTolerance } from "@/lib/catalog/shop-tolerance";
 import {
-  formatSize, LOAD_RANGES, loadIndexKg, type PlusCandidate, plusCandidates, sizeFacts, sizeFromSlug, sizeGeometry, speedSymbolInfo,
+  formatSize, hasNominalDiameter, LOAD_RANGES, loadIndexKg, noDiameterMessage, type PlusCandidate, plusCandidates, sizeFacts, sizeFromSlug, sizeGeometry, speedSymbolInfo,
 } from "@/lib/tire";
 import { countCatalogMatches } from "./catalog-matches";
 
@@ -56,6 +56,7 @@ export function toPlusBody(plan: PlusPlan) {
 export async function answerPlus(db: Database, query: PlusQuery): Promise<PlusAnswer> {
   const size = sizeFromSlug(query.size);
   if (!size) return { ok: false, code: "unreadable", message: `"${query.size.slice(0, 40)}" is not a tire size (try 285/50R20 or 285-50R20).` };
+  if (!hasNominalDiameter(size)) return { ok: false, code: "unreadable", message: noDiameterMessage(size) };
   for (const index of [query.loadIndex, query.loadIndexDual]) {
     if (index !== undefined && loadIndexKg(index) === undefined) {
       return { ok: false, code: "unknown_load_index", message: `Load index ${index} is not in the load index table (0–279).` };

@@ -2,7 +2,8 @@ import { formatLength, formatSize, type Geometry, type Marking, parseMarking, si
 
 export interface SizeSheetData {
   size: TireSize;
-  geometry: Geometry;
+  /** Null for an inch-width size (11R22.5), whose marking gives no overall diameter. */
+  geometry: Geometry | null;
   marking: Marking;
   designation: string;
   /** The one spelling of this size in URLs: /size/285-50R20. */
@@ -24,8 +25,12 @@ export function readSizeSheet(segment: string): SizeSheetData | null {
   if (!size) return null;
   const designation = formatSize(size);
   const marking = parseMarking(designation);
-  if (!marking.ok || !marking.geometry) return null;
+  if (!marking.ok) return null;
   const geometry = marking.geometry;
+  if (!geometry) {
+    const summary = `${designation}: ${formatLength(size.sectionWidthMm, "imperial")} (${formatLength(size.sectionWidthMm, "metric")}) wide, for ${size.rimDiameterIn}-inch wheels; its overall diameter comes from the tire maker's data.`;
+    return { size, geometry, marking, designation, slug: sizeToSlug(size), summary };
+  }
   const summary =
     `${designation}: ${formatLength(geometry.sectionWidthMm, "metric")} wide, ` +
     `${formatLength(geometry.overallDiameterMm, "metric")} (${formatLength(geometry.overallDiameterMm, "imperial")}) tall, ` +

@@ -1,7 +1,6 @@
 import { diameterChangePct, trueSpeed } from "./diameter-change";
 import { formatSize } from "./format";
-import { sizeGeometry } from "./geometry";
-import type { TireSize } from "./types";
+import { sizeGeometry, type MeasurableSize } from "./geometry";
 import { KM_PER_MILE, mmToIn } from "./units";
 
 export interface SpeedometerRow {
@@ -43,7 +42,7 @@ function speedometerRows(referenceMm: number, fittedMm: number): SpeedometerRow[
 }
 
 /** Each size measured against the first, which is the reference the speedometer was set for. */
-export function compareSizes(sizes: readonly TireSize[]): ComparedSize[] {
+export function compareSizes(sizes: readonly MeasurableSize[]): ComparedSize[] {
   const reference = sizes[0] ? sizeGeometry(sizes[0]).overallDiameterMm : 0;
   return sizes.map((size) => {
     const geometry = sizeGeometry(size);

@@ -42,7 +42,21 @@ export function rollingLabel(factor: number): string {
 
 const DEFAULT_ROLLING_LABEL = rollingLabel(ROLLING_CIRCUMFERENCE_FACTOR);
 
-export function sizeGeometry(size: TireSize, rollingFactor = ROLLING_CIRCUMFERENCE_FACTOR): Geometry {
+/** A size whose marking gives its overall diameter: every metric and flotation size, not an inch-width one. */
+export type MeasurableSize = TireSize & { kind: "metric" | "flotation" };
+
+export function hasNominalDiameter(size: TireSize): size is MeasurableSize {
+  return size.kind !== "inch";
+}
+
+/**
+ * Why an inch-width size (11R22.5, 7.50-16) gets no drawing or figures: its marking gives no aspect
+ * ratio, and the 82 series assumed for 185R14 does not apply to it.
+ */
+export const NO_NOMINAL_DIAMETER =
+  "the marking gives no aspect ratio, and the 82 series of sizes like 185R14 does not apply to it; take the overall diameter from the tire maker's data";
+
+export function sizeGeometry(size: MeasurableSize, rollingFactor = ROLLING_CIRCUMFERENCE_FACTOR): Geometry {
   const rimDiameterMm = size.rimDiameterIn * MM_PER_INCH;
   let aspectRatio: number | null = null;
   let sidewallMm: number;

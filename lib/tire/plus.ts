@@ -1,7 +1,6 @@
 import { diameterChangePct } from "./diameter-change";
 import { formatSize } from "./format";
-import { sizeGeometry } from "./geometry";
-import type { TireSize } from "./types";
+import { sizeGeometry, type MeasurableSize } from "./geometry";
 import { MM_PER_INCH } from "./units";
 
 export const PLUS_GRID = {
@@ -12,7 +11,7 @@ export const PLUS_GRID = {
 
 export interface PlusCandidate {
   designation: string;
-  size: TireSize;
+  size: MeasurableSize;
   plus: number;
   rimDiameterIn: number;
   sectionWidthMm: number;
@@ -47,7 +46,7 @@ function range(from: number, to: number, step: number): number[] {
   return Array.from({ length: Math.floor((to - from) / step) + 1 }, (_, index) => from + index * step);
 }
 
-function candidateOf(original: TireSize, size: TireSize, plus: number, referenceMm: number): PlusCandidate {
+function candidateOf(original: MeasurableSize, size: MeasurableSize, plus: number, referenceMm: number): PlusCandidate {
   const geometry = sizeGeometry(size);
   const effectiveAspect = geometry.aspectRatio ?? (geometry.sidewallMm / geometry.sectionWidthMm) * 100;
   return {
@@ -70,7 +69,7 @@ function candidateOf(original: TireSize, size: TireSize, plus: number, reference
  * Grid sizes keep the original's service type marks (P or LT prefix, C, run-flat) so they can be
  * matched against the catalog.
  */
-export function plusCandidates(original: TireSize, tolerancePct: number): PlusCandidate[] {
+export function plusCandidates(original: MeasurableSize, tolerancePct: number): PlusCandidate[] {
   const referenceMm = sizeGeometry(original).overallDiameterMm;
   const originalCandidate = candidateOf(original, original, 0, referenceMm);
   const found: PlusCandidate[] = [originalCandidate];
@@ -78,7 +77,7 @@ export function plusCandidates(original: TireSize, tolerancePct: number): PlusCa
     const rimDiameterIn = original.rimDiameterIn + plus;
     for (const sectionWidthMm of range(PLUS_GRID.widthsMm.from, PLUS_GRID.widthsMm.to, PLUS_GRID.widthsMm.step)) {
       for (const aspectRatio of range(PLUS_GRID.aspectRatios.from, PLUS_GRID.aspectRatios.to, PLUS_GRID.aspectRatios.step)) {
-        const size: TireSize = {
+        const size: MeasurableSize = {
           kind: "metric",
           prefix: original.prefix,
           commercial: original.commercial,

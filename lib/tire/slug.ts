@@ -1,3 +1,5 @@
+import { formatSize } from "./format";
+import { hasNominalDiameter, NO_NOMINAL_DIAMETER, type MeasurableSize } from "./geometry";
 import { parseMarking } from "./parse/parse-marking";
 import type { TireSize } from "./types";
 
@@ -10,3 +12,12 @@ export function sizeFromSlug(slug: string): TireSize | null {
   if (!result.ok || !result.size) return null;
   return result.spans.every((s) => s.part === "size") ? result.size : null;
 }
+
+/** A size whose overall diameter its marking gives (not 11R22.5 or 7.50-16), or null. */
+export function measurableSizeFromSlug(slug: string): MeasurableSize | null {
+  const size = sizeFromSlug(slug);
+  return size && hasNominalDiameter(size) ? size : null;
+}
+
+/** Why an inch-width size cannot be measured, drawn or compared, in one sentence. */
+export const noDiameterMessage = (size: TireSize): string => `${formatSize(size)} cannot be measured: ${NO_NOMINAL_DIAMETER}.`;

@@ -2,7 +2,8 @@ import type { Geometry } from "./geometry";
 import type { LoadRange } from "./load-range";
 import type { SpeedSymbol } from "./speed-symbols";
 
-export type SizeKind = "metric" | "flotation";
+/** "inch": a width in inches and no aspect ratio (11R22.5, 7.50R16LT, 7.50-16), whose overall diameter the marking does not give. */
+export type SizeKind = "metric" | "flotation" | "inch";
 export type SizePrefix = "P" | "LT" | "ST" | "T";
 /** R radial, D diagonal (bias), B bias-belted. */
 export type Construction = "R" | "D" | "B";
@@ -12,9 +13,9 @@ export interface TireSize {
   prefix: SizePrefix | null;
   /** The ETRTO "C" after the rim (215/65R16C). */
   commercial: boolean;
-  /** Flotation sizes: the marked inches × 25.4. */
+  /** Flotation and inch sizes: the marked inches × 25.4. */
   sectionWidthMm: number;
-  /** Null for flotation sizes and for sizes marked without one (155R13). */
+  /** Null for flotation and inch sizes and for sizes marked without one (155R13). */
   aspectRatio: number | null;
   construction: Construction;
   zr: boolean;

@@ -7,7 +7,7 @@ import { FIT_CARD_SLUG_PATTERN } from "@/lib/fit-cards/card-input";
 import { readFitCard } from "@/lib/fit-cards/read-card";
 import { shareImageFonts, shareImageSize } from "@/lib/share-image/fonts";
 import { formatPrice } from "@/lib/shop/money";
-import { compareSizes, formatLength, formatSignedPercent, sizeFromSlug, sizeGeometry, type TireSize } from "@/lib/tire";
+import { compareSizes, formatLength, formatSignedPercent, measurableSizeFromSlug, sizeGeometry, type MeasurableSize } from "@/lib/tire";
 
 export const size = shareImageSize;
 export const contentType = "image/png";
@@ -19,7 +19,7 @@ export default async function FitCardShareImage({ params }: { params: Promise<{ 
   const lookup = await readFitCard(await getDb(), slug);
   if (lookup.status !== "found") return new Response("No Fit card to show", { status: lookup.status === "missing" ? 404 : 410 });
   const { card } = lookup;
-  const sizes = card.sizes.map(sizeFromSlug).filter((tireSize): tireSize is TireSize => tireSize !== null);
+  const sizes = card.sizes.map(measurableSizeFromSlug).filter((tireSize): tireSize is MeasurableSize => tireSize !== null);
   const compared = compareSizes(sizes);
   const stocked = card.tires.filter((tire) => tire.stillStocked);
   const facts: [string, string][] = compared.map((entry, index) => [

@@ -14,7 +14,13 @@ export default async function SizeShareImage({ params }: { params: Promise<{ siz
   const sheet = readSizeSheet((await params).size);
   if (!sheet) return new Response("Not a tire size", { status: 404 });
   const { geometry, size: tireSize, designation } = sheet;
-  const facts: [string, string][] = [
+  const facts: [string, string][] = !geometry
+    ? [
+        ["Section width", `${formatLength(tireSize.sectionWidthMm, "imperial")} · ${formatLength(tireSize.sectionWidthMm, "metric")}`],
+        ["Rim", `${tireSize.rimDiameterIn} in`],
+        ["Overall diameter", "from the maker's data"],
+      ]
+    : [
     ["Overall diameter", `${formatLength(geometry.overallDiameterMm, "metric")} · ${formatLength(geometry.overallDiameterMm, "imperial")}`],
     ["Section width", `${formatLength(geometry.sectionWidthMm, "metric")} · ${formatLength(geometry.sectionWidthMm, "imperial")}`],
     ["Sidewall", `${formatLength(geometry.sidewallMm, "metric")} · ${formatLength(geometry.sidewallMm, "imperial")}`],
@@ -23,9 +29,11 @@ export default async function SizeShareImage({ params }: { params: Promise<{ siz
   return new ImageResponse(
     (
       <div style={{ display: "flex", width: "100%", height: "100%", background: "#f5f3ec", color: "#1b2129", fontFamily: "Plex", padding: 56 }}>
-        <div style={{ display: "flex", alignItems: "center", justifyContent: "center", width: 520 }}>
-          <TireSketch tires={[drawnTireOf(tireSize, geometry)]} sizePx={500} />
-        </div>
+        {geometry ? (
+          <div style={{ display: "flex", alignItems: "center", justifyContent: "center", width: 520 }}>
+            <TireSketch tires={[drawnTireOf(tireSize, geometry)]} sizePx={500} />
+          </div>
+        ) : null}
         <div style={{ display: "flex", flexDirection: "column", justifyContent: "center", paddingLeft: 48, flex: 1 }}>
           <div style={{ fontSize: 28, color: "#244a9a", letterSpacing: 4 }}>SIDEWISE · SIZE SHEET</div>
           <div style={{ fontFamily: "Mono", fontSize: designation.length > 10 ? 58 : 76, fontWeight: 600, marginTop: 8 }}>{designation}</div>

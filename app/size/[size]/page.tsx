@@ -8,6 +8,7 @@ import { MeasurementsTable } from "@/components/reader/measurements-table";
 import { PageIntro } from "@/components/ui/page-intro";
 import { SafetyCautions } from "@/components/ui/safety-cautions";
 import { readSizeSheet } from "@/lib/size-sheet/read-size-sheet";
+import { NO_NOMINAL_DIAMETER } from "@/lib/tire";
 
 type Params = Promise<{ size: string }>;
 
@@ -35,15 +36,21 @@ export default async function SizeSheetPage({ params }: { params: Params }) {
         <p>{summary}</p>
       </PageIntro>
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1.1fr)_minmax(0,1fr)] lg:gap-10">
-        <figure className="min-w-0 rounded border border-rule bg-sheet p-3 sm:p-4">
-          <SizeDrawing size={size} geometry={geometry} />
-          <figcaption className="mt-3">
-            <MeasurementsTable geometry={geometry} unitSystems={["metric", "imperial"]} caption="Drawn to scale · nominal, new and unloaded" />
-            <p className="mt-2 text-xs text-ink-soft">{geometry.rolling.label}.</p>
-          </figcaption>
-        </figure>
+        {geometry ? (
+          <figure className="min-w-0 rounded border border-rule bg-sheet p-3 sm:p-4">
+            <SizeDrawing size={size} geometry={geometry} />
+            <figcaption className="mt-3">
+              <MeasurementsTable geometry={geometry} unitSystems={["metric", "imperial"]} caption="Drawn to scale · nominal, new and unloaded" />
+              <p className="mt-2 text-xs text-ink-soft">{geometry.rolling.label}.</p>
+            </figcaption>
+          </figure>
+        ) : (
+          <p className="self-start rounded border-l-4 border-accent bg-sheet p-4">
+            No drawing or measurements for {designation}: {NO_NOMINAL_DIAMETER}. Sizes like it are not matched from stock here; ask the shop.
+          </p>
+        )}
         <div className="flex min-w-0 flex-col gap-6">
-          <SizeLinks slug={slug} designation={designation} />
+          <SizeLinks slug={slug} designation={designation} measurable={geometry !== null} />
           <AskTheShop source="size-sheet" reference={designation} tires={designation} />
           <SafetyCautions />
         </div>

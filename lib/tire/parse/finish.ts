@@ -1,4 +1,5 @@
-import { sizeGeometry } from "../geometry";
+import { formatSize } from "../format";
+import { hasNominalDiameter, NO_NOMINAL_DIAMETER, sizeGeometry } from "../geometry";
 import { loadRangeForPlyRating, plyRatingForLoadRange } from "../load-range";
 import type { ParseOptions, ParseResult, Utqg } from "../types";
 import { checkMaxLoad, checkPly, checkPressure, checkSize } from "./checks";
@@ -42,6 +43,7 @@ export function finish(r: Reader, options: ParseOptions): ParseResult {
   }
   checkPly(d.loadRange, d.plyRating, warnings);
   if (size) checkSize(size, d.service, warnings);
+  if (size && !hasNominalDiameter(size)) warnings.push(`No overall diameter for ${formatSize(size)}: ${NO_NOMINAL_DIAMETER}.`);
   const utqg = utqgOf(r, warnings);
   checkMaxLoad(d.maxLoadSingle, d.maxLoadDual, d.service, warnings);
   checkPressure(d.maxPressure, warnings);
@@ -59,7 +61,7 @@ export function finish(r: Reader, options: ParseOptions): ParseResult {
     extraLoad: d.loadType === "XL",
     loadType: d.loadType,
     runFlat: d.runFlat || (size?.runFlat ?? false),
-    geometry: size ? sizeGeometry(size) : null,
+    geometry: size && hasNominalDiameter(size) ? sizeGeometry(size) : null,
     dot,
     utqg,
     winter: { mudAndSnow: d.mudAndSnow, threePeak: d.threePeak },

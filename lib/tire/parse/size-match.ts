@@ -3,7 +3,7 @@ import type { SizePrefix, TireSize } from "../types";
 import { MM_PER_INCH } from "../units";
 import { endsChunk, glued, numAt, punctAt, wordAt, type Reader } from "./reader";
 import {
-  CONSTRUCTION_CODES, construction, decimals, flotationExample, inRange, makeSize, metricExample, miss, PREFIXES, RADIAL,
+  BIAS, CONSTRUCTION_CODES, construction, decimals, flotationExample, inRange, makeSize, metricExample, miss, PREFIXES, RADIAL,
   RADIAL_ASSUMED, rimMiss, rimStatus, SIZE_BOUNDS, type SizeMatch, type SizeTokens,
 } from "./size-parts";
 import type { Token } from "./tokens";
@@ -16,7 +16,7 @@ function readSuffix(r: Reader, m: SizeMatch & { size: TireSize; at: SizeTokens }
   const w = wordAt(r, k);
   if (w === undefined || !endsChunk(r, k + 1)) return;
   const size = m.size;
-  const ltType = size.kind === "flotation" || size.prefix === "LT" || size.prefix === "ST";
+  const ltType = size.kind !== "metric" || size.prefix === "LT" || size.prefix === "ST";
   const canBeLt = size.prefix === null || size.prefix === "LT";
   let letter: string | null = null;
   if (w === "LT" && canBeLt) size.prefix = "LT";
@@ -55,6 +55,28 @@ function matchFlotation(r: Reader, i: number, j: number, prefix: SizePrefix | nu
   const size = makeSize("flotation", prefix, width.value * MM_PER_INCH, null, c.code, rim.value, diameter.value);
   const at = { prefix: prefix ? i : -1, first: j, second: j + 2, construction: c.assumed ? -1 : j + 3, rim: k, suffix: -1, runTogether: false };
   return found(r, size, at, c.assumed ? RADIAL_ASSUMED : null);
+}
+
+/**
+ * Truck and inch-width sizes: a width in inches, R or a dash (bias), the rim as marked: "11R22.5",
+ * "7.50R16LT", "7.50-16", "ST4.80-12". Anything else (a "10-PLY", a metric width) is left to the other readers.
+ */
+function matchInch(r: Reader, i: number, j: number, prefix: SizePrefix | null): SizeMatch | null {
+  if (prefix !== null && prefix !== "LT" && prefix !== "ST") return null;
+  const width = numAt(r, j);
+  if (!width || (width.plain && width.text.length > 2) || decimals(width) > 2 || !inRange(width.value, SIZE_BOUNDS.inchWidthIn)) return null;
+  const code = CONSTRUCTION_CODES.get(wordAt(r, j + 1) ?? "");
+  const marked = code && !code.zr && !code.runFlat && code.construction !== "B" ? code : punctAt(r, j + 1) === "-" ? BIAS : null;
+  if (!marked || rimStatus(r, j + 2) !== "ok") return null;
+  const rim = numAt(r, j + 2) as Token;
+  if (rim.value <= width.value) return null;
+  // Hundredths of an inch × 0.254 mm, in whole numbers first, so 4.80 in reads 121.92 mm, not 121.91999….
+  const size = makeSize("inch", prefix, (Math.round(width.value * 100) * 254) / 1000, null, marked, rim.value, null);
+  const at = { prefix: prefix ? i : -1, first: j, second: -1, construction: j + 1, rim: j + 2, suffix: -1, runTogether: false };
+  const m = found(r, size, at, null);
+  // Without LT or ST, an inch-width size is a truck or commercial size.
+  if (size.prefix === null) size.commercial = true;
+  return m;
 }
 
 /** Width and aspect ratio: "285/50", "285-50", "285 50", or run together as "28550". */
@@ -142,5 +164,5 @@ export function matchSize(r: Reader, i: number): SizeMatch | null {
     j = i + 1;
   }
   if (wordAt(r, j + 1) === "X" && numAt(r, j + 2)) return matchFlotation(r, i, j, prefix);
-  return matchMetric(r, i, j, prefix);
+  return matchInch(r, i, j, prefix) ?? matchMetric(r, i, j, prefix);
 }

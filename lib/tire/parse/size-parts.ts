@@ -10,6 +10,7 @@ export const SIZE_BOUNDS = {
   rimDiameterIn: [8, 30],
   flotationDiameterIn: [15, 60],
   flotationWidthIn: [5, 25],
+  inchWidthIn: [4, 25],
 } as const;
 
 export interface ConstructionCode {
@@ -36,7 +37,8 @@ interface ConstructionRead {
 
 const MARKED = new Map([...CONSTRUCTION_CODES].map(([k, code]) => [k, { code, tokens: 1, assumed: false } as ConstructionRead]));
 export const RADIAL = CONSTRUCTION_CODES.get("R") as ConstructionCode;
-const BIAS_BY_HYPHEN: ConstructionRead = { code: CONSTRUCTION_CODES.get("D") as ConstructionCode, tokens: 1, assumed: false };
+export const BIAS = CONSTRUCTION_CODES.get("D") as ConstructionCode;
+const BIAS_BY_HYPHEN: ConstructionRead = { code: BIAS, tokens: 1, assumed: false };
 const RADIAL_FOR_MARK: ConstructionRead = { code: RADIAL, tokens: 1, assumed: true };
 const RADIAL_FOR_SPACE: ConstructionRead = { code: RADIAL, tokens: 0, assumed: true };
 export const PREFIXES: ReadonlySet<string> = new Set<SizePrefix>(["P", "LT", "ST", "T"]);

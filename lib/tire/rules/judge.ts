@@ -1,10 +1,10 @@
 import { diameterChangePct } from "../diameter-change";
 import { loadIndexKg } from "../load-index";
 import { isLoadRange, plyRatingForLoadRange, type LoadRange } from "../load-range";
-import { sizeGeometry } from "../geometry";
+import { sizeGeometry, type MeasurableSize } from "../geometry";
 import { serviceType, type ServiceType } from "../service-type";
 import { isSpeedSymbol, speedSymbolRank, ZR_UNRATED_RANK, type SpeedSymbol } from "../speed-symbols";
-import type { Construction, TireSize } from "../types";
+import type { Construction } from "../types";
 import type { Season } from "../vocabulary";
 
 /** The tire on the car and what the vehicle asks of its replacement. */
@@ -184,7 +184,7 @@ export function isNearMiss(verdict: Verdict): boolean {
 }
 
 /** What the rules read from a size itself, for an original or a candidate. */
-export function sizeFacts(size: TireSize): Pick<JudgedOriginal, "rimDiameterIn" | "construction" | "serviceType" | "pMetric" | "runFlat" | "overallDiameterMm"> {
+export function sizeFacts(size: MeasurableSize): Pick<JudgedOriginal, "rimDiameterIn" | "construction" | "serviceType" | "pMetric" | "runFlat" | "overallDiameterMm"> {
   return {
     rimDiameterIn: size.rimDiameterIn,
     construction: size.construction,

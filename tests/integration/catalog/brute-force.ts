@@ -11,7 +11,7 @@ import {
   compareLoadRanges,
   isLoadRange,
   serviceType,
-  sizeFromSlug,
+  measurableSizeFromSlug,
   sizeGeometry,
   speedSymbolRank,
   ZR_UNRATED_RANK,
@@ -65,7 +65,7 @@ interface Judged extends CatalogRow {
 
 /** The size's facts, read straight from the tire core, not from the stored columns. */
 function facts(designation: string, runFlatMark: boolean) {
-  const size = sizeFromSlug(designation);
+  const size = measurableSizeFromSlug(designation);
   if (!size) throw new Error(`unreadable ${designation}`);
   return { size, service: serviceType(size), diameter: sizeGeometry(size).overallDiameterMm, runFlat: size.runFlat || runFlatMark };
 }

@@ -7,7 +7,7 @@ import type { PgliteDatabase } from "drizzle-orm/pglite";
 import { afterAll, describe, expect, it } from "vitest";
 import { migrateDatabase, openDatabase, type DatabaseHandle } from "@/db/client";
 import { readFitCard } from "@/lib/fit-cards/read-card";
-import { sizeFromSlug, sizeGeometry, speedSymbolRank } from "@/lib/tire";
+import { measurableSizeFromSlug, sizeGeometry, speedSymbolRank } from "@/lib/tire";
 
 const MIGRATIONS = path.join(process.cwd(), "db", "migrations");
 const FIRST_WITH_JUDGE_FACTS = "0009_fit_card_judge_facts";
@@ -40,7 +40,7 @@ describe("a Fit card saved before cards kept the dual index, run-flat, Placard m
       insert into stock_item (sku, line_id, designation, size_kind, section_width_mm, aspect_ratio, rim_diameter_in, construction, zr,
         commercial, run_flat, load_index, speed_symbol, speed_rank, extra_load, service_type, overall_diameter_mm, price_cents, quantity_on_hand)
       values ('OLD-1', (select id from tire_line), '205/55R16', 'metric', 205, 55, 16, 'R', false, false, false, 94, 'V', ${speedSymbolRank("V")}, true,
-        'passenger', ${sizeGeometry(sizeFromSlug("205/55R16")!).overallDiameterMm}, 12000, 4)`);
+        'passenger', ${sizeGeometry(measurableSizeFromSlug("205/55R16")!).overallDiameterMm}, 12000, 4)`);
     await handle.db.execute(sql`
       insert into fit_card (slug, sizes, load_index, speed_symbol, tolerance_pct) values ('OldCardOldCardOldCard123', '["205/55R16"]', 91, 'H', 3)`);
     await handle.db.execute(sql`

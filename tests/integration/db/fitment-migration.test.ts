@@ -8,7 +8,7 @@ import { afterAll, describe, expect, it } from "vitest";
 import { migrateDatabase, openDatabase, type DatabaseHandle } from "@/db/client";
 import { findAlternatives } from "@/lib/catalog/alternatives";
 import { readOriginal } from "@/lib/catalog/original";
-import { sizeFromSlug, sizeGeometry, speedSymbolRank } from "@/lib/tire";
+import { measurableSizeFromSlug, sizeGeometry, speedSymbolRank } from "@/lib/tire";
 
 const MIGRATIONS = path.join(process.cwd(), "db", "migrations");
 const FIRST_WITH_FITMENTS = "0006_stock_fitment";
@@ -42,7 +42,7 @@ describe("a database that had stock before fitments", () => {
       insert into stock_item (sku, line_id, designation, size_kind, section_width_mm, aspect_ratio, rim_diameter_in, construction, zr,
         commercial, run_flat, load_index, speed_symbol, speed_rank, extra_load, service_type, overall_diameter_mm, price_cents, quantity_on_hand, retired)
       select sku, (select id from tire_line), '205/55R16', 'metric', 205, 55, 16, 'R', false, false, false, 91, 'H', ${speedSymbolRank("H")}, false,
-        'passenger', ${sizeGeometry(sizeFromSlug("205/55R16")!).overallDiameterMm}, price, quantity, retired
+        'passenger', ${sizeGeometry(measurableSizeFromSlug("205/55R16")!).overallDiameterMm}, price, quantity, retired
       from (values ('OLD-1', 12000, 4, false), ('OLD-2', 11000, 0, false), ('OLD-3', 10000, 2, true)) as old (sku, price, quantity, retired)`);
 
     await migrateDatabase(handle);

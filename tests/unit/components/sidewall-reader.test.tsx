@@ -61,10 +61,17 @@ describe("the Sidewall reader", () => {
     expect(screen.getByText(/Extra Load: reinforced/)).toBeTruthy();
   });
 
-  it("links onward with the size, load index and speed symbol filled in", () => {
+  it("links onward with the size, load index (single and dual) and speed symbol filled in", () => {
     render(<SidewallReader initialText="LT265/75R16 123/120S Load Range E" />);
     const finder = screen.getByRole("link", { name: /Replacement finder/ });
-    expect(finder.getAttribute("href")).toBe("/replace?size=LT265-75R16&loadIndex=123&speedSymbol=S&loadRange=E");
+    expect(finder.getAttribute("href")).toBe("/replace?size=LT265-75R16&loadIndex=123&loadIndexDual=120&speedSymbol=S&loadRange=E");
+  });
+
+  it("links a truck size (11R22.5) only to its Size sheet: the finder, Plus planner and Side-by-side need an overall diameter", () => {
+    render(<SidewallReader initialText="11R22.5 146/143L" />);
+    expect(screen.getByRole("link", { name: /Size sheet/ }).getAttribute("href")).toBe("/size/11R22.5");
+    expect(screen.queryByRole("link", { name: /Replacement finder/ })).toBeNull();
+    expect(screen.getByText(/No overall diameter for 11R22\.5/)).toBeTruthy();
   });
 
   it("explains a flotation size: the first number is the overall diameter in inches, the width is in inches (flotation designation)", () => {

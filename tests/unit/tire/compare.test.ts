@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { compareSizes, sizeFromSlug, type TireSize } from "@/lib/tire";
+import { compareSizes, measurableSizeFromSlug, type MeasurableSize } from "@/lib/tire";
 
-const sizes = (...designations: string[]): TireSize[] => designations.map((designation) => sizeFromSlug(designation)!);
+const sizes = (...designations: string[]): MeasurableSize[] => designations.map((designation) => measurableSizeFromSlug(designation)!);
 
 describe("comparing sizes", () => {
   it("reproduces the worked example of the encyclopedia article \"Speedometer\": 185/70R14 → 195/50R15 reads 6.7 % high", () => {

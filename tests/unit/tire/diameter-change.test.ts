@@ -1,9 +1,9 @@
 import { describe, expect, it } from "vitest";
-import { sizeFromSlug, sizeGeometry } from "@/lib/tire";
+import { measurableSizeFromSlug, sizeGeometry } from "@/lib/tire";
 import { diameterChangePct, trueSpeed } from "@/lib/tire/diameter-change";
 
 function diameterOf(designation: string): number {
-  const size = sizeFromSlug(designation);
+  const size = measurableSizeFromSlug(designation);
   if (!size) throw new Error(`test size ${designation} did not read`);
   return sizeGeometry(size).overallDiameterMm;
 }

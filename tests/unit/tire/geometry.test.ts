@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
-import { IMPLIED_ASPECT_RATIO, parseMarking, ROLLING_CIRCUMFERENCE_FACTOR, sizeFromSlug, sizeGeometry, type TireSize } from "@/lib/tire";
+import { IMPLIED_ASPECT_RATIO, parseMarking, ROLLING_CIRCUMFERENCE_FACTOR, measurableSizeFromSlug, sizeGeometry, type MeasurableSize } from "@/lib/tire";
 
-function size(text: string): TireSize {
-  const s = sizeFromSlug(text);
+function size(text: string): MeasurableSize {
+  const s = measurableSizeFromSlug(text);
   if (!s) throw new Error(`test size ${text} did not read`);
   return s;
 }

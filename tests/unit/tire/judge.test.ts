@@ -7,7 +7,7 @@ import {
   noteWords,
   qualifyingReasonWords,
   sizeFacts,
-  sizeFromSlug,
+  measurableSizeFromSlug,
   type JudgedCandidate,
 } from "@/lib/tire";
 
@@ -21,7 +21,7 @@ function original(input: Partial<OriginalInput> & { size: string; loadIndex: num
 }
 
 function candidate(designation: string, loadIndex: number, speedSymbol: string, extra: Partial<JudgedCandidate> = {}): JudgedCandidate {
-  const size = sizeFromSlug(designation);
+  const size = measurableSizeFromSlug(designation);
   if (!size) throw new Error(designation);
   return { ...sizeFacts(size), extraLoad: false, loadIndex, loadIndexDual: null, speedSymbol, loadRange: null, season: null, ...extra };
 }

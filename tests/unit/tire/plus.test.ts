@@ -1,11 +1,11 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { PLUS_GRID, plusCandidates, sizeFromSlug, sizeGeometry, theoreticalRimWidthIn, type TireSize } from "@/lib/tire";
+import { PLUS_GRID, plusCandidates, measurableSizeFromSlug, sizeGeometry, theoreticalRimWidthIn, type MeasurableSize } from "@/lib/tire";
 
-const size = (designation: string): TireSize => sizeFromSlug(designation)!;
+const size = (designation: string): MeasurableSize => measurableSizeFromSlug(designation)!;
 
 /** Brute force: every grid size, measured the long way, for comparison with the planner. */
-function bruteForce(original: TireSize, tolerancePct: number): string[] {
+function bruteForce(original: MeasurableSize, tolerancePct: number): string[] {
   const reference = sizeGeometry(original).overallDiameterMm;
   const found: string[] = [];
   for (let plus = -1; plus <= 3; plus++) {
