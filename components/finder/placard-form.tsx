@@ -7,6 +7,8 @@ interface PlacardFormProps {
   query: FinderQuery;
   check: PlacardCheck | null;
   originalLoadIndex: number | undefined;
+  /** The tire on the car is a passenger tire, which carries no dual rating. */
+  passengerTire: boolean;
   onChange: (patch: Partial<FinderQuery>) => void;
 }
 
@@ -18,7 +20,7 @@ function readWeight(value: string): number | undefined {
 }
 
 /** Axle ratings → the minimum load index per tire, with the arithmetic shown. */
-export function PlacardForm({ query, check, originalLoadIndex, onChange }: PlacardFormProps) {
+export function PlacardForm({ query, check, originalLoadIndex, passengerTire, onChange }: PlacardFormProps) {
   const unit = query.gawrUnit ?? "lb";
   const raised = check?.minLoadIndex != null && originalLoadIndex !== undefined && check.minLoadIndex > originalLoadIndex;
   return (
@@ -63,11 +65,20 @@ export function PlacardForm({ query, check, originalLoadIndex, onChange }: Placa
               <li key={step}>{step}</li>
             ))}
           </ol>
-          <p className={`mt-2 border-l-4 px-3 py-1 ${raised ? "border-accent bg-accent-soft" : "border-rule"}`}>
-            {raised
-              ? `The axles need load index ${check.minLoadIndex} or higher: the list below now starts there instead of at ${originalLoadIndex}.`
-              : `The current tire's load index${originalLoadIndex === undefined ? "" : ` (${originalLoadIndex})`} already covers the axles.`}
-          </p>
+          {check.minLoadIndex !== null ? (
+            <p className={`mt-2 border-l-4 px-3 py-1 ${raised ? "border-accent bg-accent-soft" : "border-rule"}`}>
+              {raised
+                ? `The axles need load index ${check.minLoadIndex} or higher: the list below now starts there instead of at ${originalLoadIndex}.`
+                : `The current tire's load index${originalLoadIndex === undefined ? "" : ` (${originalLoadIndex})`} already covers the axles.`}
+            </p>
+          ) : null}
+          {check.minLoadIndexDual !== null ? (
+            <p className="mt-2 border-l-4 border-accent bg-accent-soft px-3 py-1">
+              {passengerTire
+                ? `Passenger tires carry no dual rating and do not belong on dual wheels, so the list below offers none for the rear axle. Ask the shop for light-truck tires with a dual load index of ${check.minLoadIndexDual} or higher.`
+                : `The dual-wheel axle needs a dual load index of ${check.minLoadIndexDual} or higher; tires without a dual rating are left out.`}
+            </p>
+          ) : null}
         </div>
       ) : null}
     </details>

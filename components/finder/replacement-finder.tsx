@@ -57,7 +57,7 @@ export function ReplacementFinder({ initialQuery, brands, defaultTolerancePct }:
         <div className="flex justify-end">
           <UnitsToggle units={units} onChange={setUnits} />
         </div>
-        <PlacardForm query={query} check={placard} originalLoadIndex={query.loadIndex} onChange={update} />
+        <PlacardForm query={query} check={placard} originalLoadIndex={query.loadIndex} passengerTire={original.passengerTire} onChange={update} />
       </div>
       <div className="flex min-w-0 flex-col gap-4">
         <FinderFilters query={query} brands={brands} defaultTolerancePct={defaultTolerancePct} onChange={update} />

@@ -50,6 +50,26 @@ test.describe("the Replacement finder", () => {
     await expect(page).toHaveURL(/gawrRear=2860/);
   });
 
+  test("dual rear wheels on a car with passenger tires leave every passenger tire out, and say why (common practice: no dual rating)", async ({ page }) => {
+    await page.goto("/replace?size=P265-70R17&loadIndex=113&speedSymbol=S&vehicle=mpv-truck-trailer");
+    await expect(resultsHeading(page)).toBeVisible();
+    expect(await totalShown(page)).toBeGreaterThan(0);
+    await page.getByText("Placard check: is the load index enough for the axles?").click();
+    await page.getByLabel("Rear GAWR (lb)").fill("6000");
+    await page.getByLabel("Dual wheels on the rear axle").check();
+    await expect(page.getByText(/Passenger tires carry no dual rating and do not belong on dual wheels/)).toBeVisible();
+    await expect.poll(() => totalShown(page)).toBe(0);
+    await expect(page.getByText(/no dual load index: not rated for dual wheels/).first()).toBeVisible();
+  });
+
+  test("notes a change of season on each result when the driver says what is on the car now", async ({ page }) => {
+    await page.goto("/replace?size=225-45R17&loadIndex=91&speedSymbol=V&originalSeason=summer&season=all-season");
+    await expect(resultsHeading(page)).toBeVisible();
+    const first = page.locator("article[data-sku]").first();
+    await expect(first.getByRole("list", { name: "Notes" })).toContainText("season change: an all-season tire in place of the summer tire on the car now");
+    await expect(page.getByLabel("Kind of tire on the car now")).toHaveValue("summer");
+  });
+
   test("without a size, asks for the current tire", async ({ page }) => {
     await page.goto("/replace");
     await page.getByLabel("Size").fill("LT265/75R16");
