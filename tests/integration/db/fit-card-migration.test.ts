@@ -1,6 +1,4 @@
-import { cpSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
-import { tmpdir } from "node:os";
-import path from "node:path";
+import { rmSync } from "node:fs";
 import { sql } from "drizzle-orm";
 import { migrate } from "drizzle-orm/pglite/migrator";
 import type { PgliteDatabase } from "drizzle-orm/pglite";
@@ -8,24 +6,11 @@ import { afterAll, describe, expect, it } from "vitest";
 import { migrateDatabase, openDatabase, type DatabaseHandle } from "@/db/client";
 import { readFitCard } from "@/lib/fit-cards/read-card";
 import { measurableSizeFromSlug, sizeGeometry, speedSymbolRank } from "@/lib/tire";
-
-const MIGRATIONS = path.join(process.cwd(), "db", "migrations");
-const FIRST_WITH_JUDGE_FACTS = "0009_fit_card_judge_facts";
-
-/** A copy of the migrations that stops before Fit cards kept the judge's facts. */
-function migrationsBeforeJudgeFacts(): string {
-  const folder = mkdtempSync(path.join(tmpdir(), "sidewise-migrations-"));
-  cpSync(MIGRATIONS, folder, { recursive: true });
-  const journalPath = path.join(folder, "meta", "_journal.json");
-  const journal = JSON.parse(readFileSync(journalPath, "utf8")) as { entries: { tag: string }[] };
-  const cut = journal.entries.findIndex((entry) => entry.tag === FIRST_WITH_JUDGE_FACTS);
-  writeFileSync(journalPath, JSON.stringify({ ...journal, entries: journal.entries.slice(0, cut) }));
-  return folder;
-}
+import { migrationsBefore } from "../helpers/migrations-before";
 
 describe("a Fit card saved before cards kept the dual index, run-flat, Placard minimums and season", () => {
   let handle: DatabaseHandle | undefined;
-  const folder = migrationsBeforeJudgeFacts();
+  const folder = migrationsBefore("0009_fit_card_judge_facts");
   afterAll(async () => {
     await handle?.close();
     rmSync(folder, { recursive: true, force: true });

@@ -1,6 +1,4 @@
-import { cpSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
-import { tmpdir } from "node:os";
-import path from "node:path";
+import { rmSync } from "node:fs";
 import { sql } from "drizzle-orm";
 import { migrate } from "drizzle-orm/pglite/migrator";
 import type { PgliteDatabase } from "drizzle-orm/pglite";
@@ -9,24 +7,11 @@ import { migrateDatabase, openDatabase, type DatabaseHandle } from "@/db/client"
 import { findAlternatives } from "@/lib/catalog/alternatives";
 import { readOriginal } from "@/lib/catalog/original";
 import { measurableSizeFromSlug, sizeGeometry, speedSymbolRank } from "@/lib/tire";
-
-const MIGRATIONS = path.join(process.cwd(), "db", "migrations");
-const FIRST_WITH_FITMENTS = "0006_stock_fitment";
-
-/** A copy of the migrations that stops before stock fitments existed. */
-function migrationsBeforeFitments(): string {
-  const folder = mkdtempSync(path.join(tmpdir(), "sidewise-migrations-"));
-  cpSync(MIGRATIONS, folder, { recursive: true });
-  const journalPath = path.join(folder, "meta", "_journal.json");
-  const journal = JSON.parse(readFileSync(journalPath, "utf8")) as { entries: { tag: string }[] };
-  const cut = journal.entries.findIndex((entry) => entry.tag === FIRST_WITH_FITMENTS);
-  writeFileSync(journalPath, JSON.stringify({ ...journal, entries: journal.entries.slice(0, cut) }));
-  return folder;
-}
+import { migrationsBefore } from "../helpers/migrations-before";
 
 describe("a database that had stock before fitments", () => {
   let handle: DatabaseHandle | undefined;
-  const folder = migrationsBeforeFitments();
+  const folder = migrationsBefore("0006_stock_fitment");
   afterAll(async () => {
     await handle?.close();
     rmSync(folder, { recursive: true, force: true });
