@@ -88,6 +88,24 @@ describe("GET /api/v1/decode", () => {
     expect(load.body.error.code).toBe("unknown_load_index");
   });
 
+  it.each([
+    // ISO 4000-1 / ETRTO load index table (published values, not ten times the index 80 below): kg, and kg × 2.20462 rounded.
+    ["LT265/75R16 115/112S E", 1215, 2679],
+    ["LT245/75R17 117/114R E", 1285, 2833],
+    ["10.00R20 161/157K", 4625, 10196],
+    ["225/70R19.5 128/126L F", 1800, 3968],
+  ])("reads %s with the published load of its single index", async (text, loadKg, loadLb) => {
+    const { status, body } = await decode(`?q=${encodeURIComponent(text)}`);
+    expect(status).toBe(200);
+    expect(body.service).toMatchObject({ loadKg, loadLb });
+  });
+
+  it("reads a load range after a trailer size, with no warning (TRA, common practice: D is an 8-ply rating)", async () => {
+    const { body } = await decode(`?q=${encodeURIComponent("ST205/75R15 107/102M D")}`);
+    expect(body).toMatchObject({ loadRange: "D", plyRating: 8, size: { prefix: "ST" }, service: { loadIndex: 107, loadIndexDual: 102 } });
+    expect(body.warnings).toEqual([]);
+  });
+
   it("never answers 5xx for odd input", async () => {
     for (const text of ["%00", "%F0%9F%9A%97", "((((", "DOT", "1/2/3/4/5", "R" + "9".repeat(300)]) {
       const { status } = await decode(`?q=${text}`);
