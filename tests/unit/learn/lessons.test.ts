@@ -26,6 +26,12 @@ describe("Sidewall school lessons", () => {
     }
   });
 
+  it("state the pressures at which a passenger load index is defined: SL 250 kPa (36 psi), XL 290 kPa (42 psi) (ETRTO, from memory)", () => {
+    const text = JSON.stringify(findLesson("load-index"));
+    expect(text).toMatch(/250 kPa[^"]*36 psi|36 psi[^"]*250 kPa/);
+    expect(text).toMatch(/290 kPa[^"]*42 psi|42 psi[^"]*290 kPa/);
+  });
+
   it.each(lessons.map((lesson) => [lesson.slug, lesson] as const))("%s names its standards, related topics and a readable example", (_, lesson) => {
     expect(lesson.standards.length).toBeGreaterThan(0);
     expect(lesson.sections.length).toBeGreaterThan(0);

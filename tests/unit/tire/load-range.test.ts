@@ -4,9 +4,7 @@ import {
   isLoadRange,
   LOAD_RANGES,
   loadRangeForPlyRating,
-  LT_MAX_PRESSURE_PSI,
   plyRatingForLoadRange,
-  REFERENCE_PRESSURE,
 } from "@/lib/tire";
 
 describe("load ranges", () => {
@@ -28,14 +26,5 @@ describe("load ranges", () => {
     expect(isLoadRange("I")).toBe(false);
     expect(isLoadRange("K")).toBe(false);
     expect(loadRangeForPlyRating(7)).toBeUndefined();
-  });
-
-  it("typical LT maximum pressures are C 50, D 65, E 80, F 95 psi (common practice)", () => {
-    expect(LT_MAX_PRESSURE_PSI).toEqual({ C: 50, D: 65, E: 80, F: 95 });
-  });
-
-  it("reference pressures are SL 250 kPa / 36 psi and XL 290 kPa / 42 psi (ETRTO, from memory)", () => {
-    expect(REFERENCE_PRESSURE.SL).toEqual({ kPa: 250, psi: 36 });
-    expect(REFERENCE_PRESSURE.XL).toEqual({ kPa: 290, psi: 42 });
   });
 });
