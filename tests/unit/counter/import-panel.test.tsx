@@ -105,7 +105,7 @@ describe("the import panel", () => {
     const refused = screen.getByRole("table", { name: "Rows the server refused" });
     expect(within(refused).getAllByRole("row")[1]?.textContent).toBe("4load_indexload index 999 is outside the published table");
     fireEvent.click(screen.getByRole("button", { name: "Upload another file" }));
-    expect(document.activeElement).toBe(screen.getByLabelText(/choose a file/));
+    await waitFor(() => expect(document.activeElement).toBe(screen.getByLabelText(/choose a file/)));
     expect(screen.queryByRole("heading", { name: "Import report" })).toBeNull();
   });
 

@@ -49,7 +49,7 @@ describe("the item form", () => {
     expect(screen.getByLabelText("Size").getAttribute("aria-describedby")).toContain("item-size-reading");
   });
 
-  it("names each unreadable field and focuses the first, sending nothing", () => {
+  it("names each unreadable field and focuses the first, sending nothing", async () => {
     render(<ItemForm brands={brands} initial={empty} />);
     fill("Load index", "ninety");
     submit();
@@ -57,7 +57,7 @@ describe("the item form", () => {
     expect(sku.getAttribute("aria-invalid")).toBe("true");
     expect(document.getElementById(sku.getAttribute("aria-describedby")!)?.textContent).toBe("Enter the SKU.");
     expect(screen.getByText("Enter the load index as a whole number, like 91.")).toBeTruthy();
-    expect(document.activeElement).toBe(sku);
+    await waitFor(() => expect(document.activeElement).toBe(sku));
     expect(fetchMock).not.toHaveBeenCalled();
   });
 
@@ -93,7 +93,7 @@ describe("the item form", () => {
     fillValidItem();
     submit();
     await waitFor(() => expect(screen.getByText('The SKU "QNS-NEW-1" is taken (retired items keep theirs).')).toBeTruthy());
-    expect(document.activeElement).toBe(screen.getByLabelText("SKU"));
+    await waitFor(() => expect(document.activeElement).toBe(screen.getByLabelText("SKU")));
   });
 
   it("sends an edit as a PATCH without the SKU", async () => {
@@ -118,7 +118,7 @@ describe("retiring an item", () => {
     fireEvent.click(screen.getByRole("button", { name: "Retire this item" }));
     expect(fetchMock).not.toHaveBeenCalled();
     const confirm = screen.getByRole("button", { name: "Yes, retire QNS-7" });
-    expect(document.activeElement).toBe(confirm);
+    await waitFor(() => expect(document.activeElement).toBe(confirm));
     fireEvent.click(confirm);
     await waitFor(() => expect(push).toHaveBeenCalledWith("/counter?retired=QNS-7"));
     expect(fetchMock).toHaveBeenCalledWith("/api/v1/catalog/QNS-7", expect.objectContaining({ method: "DELETE" }));

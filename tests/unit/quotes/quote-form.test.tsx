@@ -1,5 +1,5 @@
 // @vitest-environment jsdom
-import { act, cleanup, fireEvent, render, screen } from "@testing-library/react";
+import { act, cleanup, fireEvent, render, screen, waitFor } from "@testing-library/react";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import QuoteForm from "@/components/quotes/quote-form";
 
@@ -40,7 +40,7 @@ describe("the Ask the shop form", () => {
     await send();
     const name = screen.getByLabelText("Your name");
     expect(name.getAttribute("aria-invalid")).toBe("true");
-    expect(document.activeElement).toBe(name);
+    await waitFor(() => expect(document.activeElement).toBe(name));
     const email = screen.getByLabelText("E-mail (the answer goes here)");
     expect(document.getElementById(email.getAttribute("aria-describedby")!)?.textContent).toBe("Check the e-mail address: it should look like name@example.com");
     expect(screen.getByLabelText("Phone (optional)").getAttribute("aria-invalid")).toBeNull();
@@ -76,6 +76,6 @@ describe("the Ask the shop form", () => {
     await send();
     const alert = screen.getByRole("alert");
     expect(alert.textContent).toBe(message);
-    expect(document.activeElement).toBe(alert);
+    await waitFor(() => expect(document.activeElement).toBe(alert));
   });
 });
