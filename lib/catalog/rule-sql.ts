@@ -1,10 +1,9 @@
-import { and, between, eq, gt, gte, lte, sql, type SQL } from "drizzle-orm";
+import { and, eq, gt, gte, lte, sql, type SQL } from "drizzle-orm";
 import { brand, stockFitment, stockItem, tireLine } from "@/db/schema";
 import { loadRequirements, type Season, type Terrain } from "@/lib/tire";
 import { ofBrand } from "./catalog-select";
 import type { AlternativesSort } from "./cursor";
 import type { Original } from "./original";
-import { toleranceBand } from "./tolerance-band";
 
 /** Narrowing a search beyond the rules; each filter is an equality or a bound. */
 export interface CatalogFilters {
@@ -52,15 +51,13 @@ export function finderShape(original: Original, filters: CatalogFilters): Finder
 
 /** The values the placeholders of a shape's statements take for one search. */
 export function finderValues(original: Original, tolerancePct: number, filters: CatalogFilters) {
-  const band = toleranceBand(original.overallDiameterMm, tolerancePct);
   const load = loadRequirements(original);
   return {
     rim: original.rimDiameterIn,
     construction: original.construction,
     serviceType: original.serviceType,
     reference: original.overallDiameterMm,
-    minMm: band.minMm,
-    maxMm: band.maxMm,
+    tolerancePct,
     loadIndex: load.single?.required ?? original.loadIndex,
     loadIndexDual: load.dual?.required ?? null,
     speedRank: original.speedRank,
@@ -84,11 +81,15 @@ const float = (name: keyof FinderValues) => sql`${placeholder(name)}::float8`;
  * facts, so they are judged once per fitment; the filters read the items themselves.
  */
 export interface RuleSql {
-  /** Signed (candidate − original) ÷ original × 100, in the order of operations the tire core uses. */
+  /**
+   * Signed (candidate − original) ÷ original × 100, in the order of operations the tire core's
+   * diameterChangePct uses: float8 arithmetic is IEEE's on PGlite and PostgreSQL alike, so the SQL and
+   * the judge get the same number to the last bit, and rule 2 compares it as the judge does.
+   */
   diffPct: SQL<number>;
   /** Rules 1, 6 and 7: the fitments a search looks at at all. */
   eligible: SQL;
-  /** Rule 2, as the exact range of diameters it accepts (toleranceBand). */
+  /** Rule 2: |diffPct| ≤ the tolerance, the limit included. */
   diameterFits: SQL;
   loadIndexHolds: SQL;
   speedHolds: SQL;
@@ -124,8 +125,9 @@ export function ruleSql(shape: FinderShape): RuleSql {
   const stockFilter = { any: undefined, yes: gt(stockItem.quantityOnHand, 0), no: eq(stockItem.quantityOnHand, 0) }[shape.inStock];
   const itemOnlyFilters = shape.lineFilters.length > 0 || shape.minPrice || shape.maxPrice;
   const fitment = stockFitment;
+  const diffPct = sql<number>`((${fitment.overallDiameterMm} - ${float("reference")}) / ${float("reference")} * 100)`;
   return {
-    diffPct: sql<number>`((${fitment.overallDiameterMm} - ${float("reference")}) / ${float("reference")} * 100)`,
+    diffPct,
     eligible: and(
       eq(fitment.rimDiameterIn, placeholder("rim")),
       eq(fitment.construction, placeholder("construction")),
@@ -134,7 +136,7 @@ export function ruleSql(shape: FinderShape): RuleSql {
       shape.runFlatOnly ? eq(fitment.runFlat, true) : undefined,
       gt(fitment.itemCount, 0),
     ) as SQL,
-    diameterFits: between(fitment.overallDiameterMm, placeholder("minMm"), placeholder("maxMm")),
+    diameterFits: sql`abs(${diffPct}) <= ${float("tolerancePct")}`,
     loadIndexHolds: and(
       gte(fitment.loadIndex, placeholder("loadIndex")),
       // A tire with no dual index is never offered for dual mounting.

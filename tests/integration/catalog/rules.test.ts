@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
 import { decodeAlternativesCursor } from "@/lib/catalog/cursor";
-import { diameterDiffPct } from "@/lib/catalog/tolerance-band";
+import { diameterChangePct } from "@/lib/tire";
 import { openTestDatabase, type TestDatabase, testDatabaseKinds } from "../helpers/test-database";
 import { search, seedFixture, skus } from "./fixtures";
 
@@ -118,7 +118,7 @@ describe.each(testDatabaseKinds)("rules of equal-or-better on %s", (kind) => {
   it("includes a diameter exactly on the tolerance and refuses one a hair beyond it (common practice: within ±3 %, the limit included)", async () => {
     // 205/55R16 = 631.9 mm, 215/55R16 = 642.9 mm (nominal geometry: rim × 25.4 + 2 × width × aspect ÷ 100).
     await seedFixture(database.db, [{ sku: "EDGE", designation: "215/55R16", loadIndex: 93, speedSymbol: "H" }]);
-    const exact = diameterDiffPct(642.9, 631.9);
+    const exact = diameterChangePct(631.9, 642.9);
     const onIt = await search(database.db, { size: "205/55R16", loadIndex: 91, speedSymbol: "H" }, { tolerancePct: exact });
     expect(skus(onIt.results)).toEqual(["EDGE"]);
     expect(onIt.results[0]?.diameterDiffPct).toBe(exact);
