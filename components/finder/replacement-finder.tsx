@@ -5,7 +5,7 @@ import { drawnTireOf } from "@/components/reader/drawn-tire";
 import { useUnitSystem } from "@/components/units/use-unit-system";
 import { UnitsToggle } from "@/components/units/units-toggle";
 import { alternativesSearch, type FinderQuery, finderSearch } from "@/lib/finder/finder-query";
-import { readOriginal, placardFor } from "@/lib/finder/original";
+import { placardFor, readOriginalMarking } from "@/lib/finder/original-marking";
 import { SaveFitCard } from "@/components/fit-card/save-fit-card-button";
 import { AskTheShop } from "@/components/quotes/ask-the-shop";
 import { finderQuoteTires } from "@/components/quotes/quote-tires";
@@ -27,7 +27,7 @@ interface ReplacementFinderProps {
 export function ReplacementFinder({ initialQuery, brands, defaultTolerancePct }: ReplacementFinderProps) {
   const [query, setQuery] = useState(initialQuery);
   const [units, setUnits] = useUnitSystem();
-  const original = useMemo(() => readOriginal(query), [query]);
+  const original = useMemo(() => readOriginalMarking(query), [query]);
   const placard = useMemo(() => (original.ok ? placardFor(query, original.passengerTire, units) : null), [query, original, units]);
   const minimums = { loadIndex: placard?.minLoadIndex ?? null, loadIndexDual: placard?.minLoadIndexDual ?? null };
   const search = original.ok ? alternativesSearch(query, minimums) : null;

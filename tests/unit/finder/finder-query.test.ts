@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { alternativesSearch, finderSearch, readFinderQuery } from "@/lib/finder/finder-query";
-import { placardFor, readOriginal } from "@/lib/finder/original";
+import { placardFor, readOriginalMarking } from "@/lib/finder/original-marking";
 
 describe("the finder's address", () => {
   it("round-trips its state through the query string", () => {
@@ -38,13 +38,13 @@ describe("the finder's address", () => {
 describe("the Placard check in the finder", () => {
   it("converts pounds from the label before checking: 6,000 lb rear ÷ 2 × 1.10 on a truck with P-metric tires", () => {
     const query = readFinderQuery({ size: "P265/70R17", loadIndex: "113", speedSymbol: "S", gawrRear: "6000", vehicle: "mpv-truck-trailer" });
-    const original = readOriginal(query);
+    const original = readOriginalMarking(query);
     expect(original.ok && original.passengerTire).toBe(true);
     // 6,000 lb = 2,721.6 kg; ÷ 2 = 1,360.8 kg; × 1.10 = 1,496.9 kg → 122 (1,500 kg) (ISO 4000-1 table; FMVSS 120 S5.1.2).
     expect(placardFor(query, true, "metric")?.minLoadIndex).toBe(122);
   });
 
   it("needs the size, load index and speed symbol before it can read the current tire", () => {
-    expect(readOriginal(readFinderQuery({ size: "285-50R20" })).ok).toBe(false);
+    expect(readOriginalMarking(readFinderQuery({ size: "285-50R20" })).ok).toBe(false);
   });
 });

@@ -6,7 +6,7 @@ export type OriginalReading =
   | { ok: false; message: string };
 
 /** The tire on the car, read from the finder's address by the same reader as everything else. */
-export function readOriginal(query: FinderQuery): OriginalReading {
+export function readOriginalMarking(query: FinderQuery): OriginalReading {
   if (!query.size || query.loadIndex === undefined || !query.speedSymbol) {
     return { ok: false, message: "Enter the size, load index and speed symbol of the tire on the car." };
   }
