@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { findControlCharacters } from "@/lib/validation/text";
+import { CONTROL_CHARACTER_MESSAGE, findControlCharacters } from "@/lib/validation/text";
 import { apiError } from "./errors";
 
 /** Largest JSON body a route reads. */
@@ -64,7 +64,7 @@ export function readJson(bytes: Uint8Array): BodyResult<unknown> {
   const controlAt = findControlCharacters(raw);
   if (!controlAt) return { ok: true, value: raw };
   const field = controlAt.join(".") || "body";
-  return { ok: false, response: apiError("invalid_parameter", `The field "${field}" is invalid: it must not contain control characters such as NUL.`, undefined, field) };
+  return { ok: false, response: apiError("invalid_parameter", `The field "${field}" is invalid: ${CONTROL_CHARACTER_MESSAGE}.`, undefined, field) };
 }
 
 /**

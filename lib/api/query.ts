@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { hasControlCharacters } from "@/lib/validation/text";
+import { CONTROL_CHARACTER_MESSAGE, hasControlCharacters } from "@/lib/validation/text";
 import { apiError } from "./errors";
 
 /** Longest text parameter the API reads; anything longer answers 414. */
@@ -27,7 +27,7 @@ export function parseQuery<Schema extends z.ZodType>(url: URL, schema: Schema): 
   if (control) {
     return {
       ok: false,
-      response: apiError("invalid_parameter", `The parameter "${control[0]}" is invalid: it must not contain control characters such as NUL.`, undefined, control[0]),
+      response: apiError("invalid_parameter", `The parameter "${control[0]}" is invalid: ${CONTROL_CHARACTER_MESSAGE}.`, undefined, control[0]),
     };
   }
 

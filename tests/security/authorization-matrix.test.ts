@@ -4,29 +4,35 @@ import type { NextRequest } from "next/server";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { getDatabaseHandle, getDb } from "@/db/client";
 import { seedDemoAccounts } from "@/db/seed/accounts";
-import { callRoute, signIn } from "../helpers/auth-session";
+import { callRoute, signIn } from "../integration/helpers/auth-session";
 
 vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typeof import("next/server")>()), connection: async () => undefined }));
-// Server actions read the caller's cookie through next/headers; here it is whoever the test says.
+// Server actions read the caller's cookie through next/headers; here it is whoever the test says,
+// on a page of the app's own origin (APP_ORIGIN of the helpers; a hoisted mock cannot import it).
 const actionCaller = vi.hoisted(() => ({ cookie: undefined as string | undefined }));
-vi.mock("next/headers", () => ({ headers: async () => new Headers(actionCaller.cookie ? { cookie: actionCaller.cookie } : {}) }));
+vi.mock("next/headers", () => ({ headers: async () => new Headers({ origin: "http://localhost:3000", ...(actionCaller.cookie ? { cookie: actionCaller.cookie } : {}) }) }));
 vi.mock("next/cache", () => ({ revalidatePath: () => undefined }));
 
 type Who = "anonymous" | "customer" | "staff" | "admin";
 type Handler = (request: NextRequest, context: { params: Promise<Record<string, string>> }) => Promise<Response>;
 
-/** Route files anyone may call; the auth library's own endpoints check their own requests. */
-const PUBLIC_ROUTE_FILES = [
-  "auth/[...all]/route.ts",
-  "health/route.ts",
-  "v1/alternatives/route.ts",
+/** Handlers anyone may call, per route file and method; the auth library's own endpoints check their own requests. */
+const PUBLIC_HANDLERS = [
+  "auth/[...all]/route.ts#GET",
+  "auth/[...all]/route.ts#POST",
+  "health/route.ts#GET",
+  "v1/alternatives/route.ts#GET",
   "v1/catalog/route.ts#GET",
-  "v1/compare/route.ts",
-  "v1/decode/route.ts",
+  "v1/compare/route.ts#GET",
+  "v1/decode/route.ts#GET",
   "v1/fit-cards/[slug]/route.ts#GET",
-  "v1/plus/route.ts",
+  "v1/plus/route.ts#GET",
+  "v1/quote-requests/form-token/route.ts#GET",
   "v1/quote-requests/route.ts#POST",
 ];
+
+/** Every method a route file can answer; Next.js answers 405 for one the file does not export. */
+const HTTP_METHODS = ["GET", "HEAD", "POST", "PUT", "PATCH", "DELETE", "OPTIONS"] as const;
 
 /**
  * Every protected handler, called so that nothing changes once authorization passes (an invalid
@@ -97,10 +103,15 @@ afterAll(async () => {
 });
 
 describe("authorization matrix", () => {
-  it("lists every route file under app/api, as public or in the matrix", () => {
-    const listed = new Set([...PUBLIC_ROUTE_FILES.map((entry) => entry.split("#")[0]), ...MATRIX.map((row) => row.file)]);
-    expect(routeFiles.filter((file) => !listed.has(file))).toEqual([]);
-    expect([...listed].filter((file) => !routeFiles.includes(file as string))).toEqual([]);
+  it("lists every handler of every route file under app/api, per method, as public or in the matrix", async () => {
+    const exported: string[] = [];
+    for (const file of routeFiles) {
+      const routeModule = (await import(/* @vite-ignore */ path.join(apiFolder, file))) as Record<string, unknown>;
+      exported.push(...HTTP_METHODS.filter((method) => typeof routeModule[method] === "function").map((method) => `${file}#${method}`));
+    }
+    const listed = new Set([...PUBLIC_HANDLERS, ...MATRIX.map((row) => `${row.file}#${row.method}`)]);
+    expect(exported.filter((entry) => !listed.has(entry))).toEqual([]);
+    expect([...listed].filter((entry) => !exported.includes(entry))).toEqual([]);
   });
 
   it.each(MATRIX.flatMap((row) => (["anonymous", "customer", "staff", "admin"] as const).map((who) => ({ ...row, who, status: row.expected[who] }))))(
