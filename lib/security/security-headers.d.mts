@@ -1,0 +1,5 @@
+export function pagePolicy(options?: { nonce?: string; development?: boolean; https?: boolean }): string;
+export const API_POLICY: string;
+export function commonHeaders(options?: { https?: boolean }): { key: string; value: string }[];
+export function servesHttps(url: string | undefined): boolean;
+export const NONCE_PAGE_PREFIXES: string[];
