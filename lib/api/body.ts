@@ -8,10 +8,11 @@ export const maxJsonBodyBytes = 64 * 1024;
 type BodyResult<T> = { ok: true; value: T } | { ok: false; response: Response };
 export type BytesResult = { ok: true; bytes: Uint8Array<ArrayBuffer> } | { ok: false; tooLarge: true };
 
-/** Whether the request says it carries a body at all (RFC 9112 §6.3: a length, or a transfer coding). */
-export function declaresBody(headers: Headers): boolean {
-  const length = headers.get("content-length");
-  return (length !== null && length.trim() !== "0") || headers.has("transfer-encoding");
+/** Whether the request carries a body (RFC 9112 §6.3: a length over 0, a transfer coding, or a stream of its own). */
+export function hasBody(request: Request): boolean {
+  const length = request.headers.get("content-length");
+  if (length !== null) return length.trim() !== "0";
+  return request.headers.has("transfer-encoding") || request.body !== null;
 }
 
 /** `application/json`, with or without parameters such as `charset` (RFC 9110 §8.3.1). */
@@ -74,7 +75,7 @@ export function readJson(bytes: Uint8Array): BodyResult<unknown> {
  * wrong → 400 invalid_parameter. Errors about one field name it in `field`.
  */
 export async function parseJsonBody<Schema extends z.ZodType>(request: Request, schema: Schema): Promise<BodyResult<z.infer<Schema>>> {
-  if (declaresBody(request.headers) && !isJsonMediaType(request.headers.get("content-type"))) return { ok: false, response: wrongMediaType() };
+  if (hasBody(request) && !isJsonMediaType(request.headers.get("content-type"))) return { ok: false, response: wrongMediaType() };
   const read = await readBodyBytes(request, maxJsonBodyBytes);
   if (!read.ok) return { ok: false, response: tooLargeBody() };
   const json = readJson(read.bytes);

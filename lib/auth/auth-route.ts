@@ -1,5 +1,5 @@
 import { apiError } from "@/lib/api/errors";
-import { declaresBody, isJsonMediaType, maxJsonBodyBytes, readBodyBytes, readJson, tooLargeBody, wrongMediaType } from "@/lib/api/body";
+import { hasBody, isJsonMediaType, maxJsonBodyBytes, readBodyBytes, readJson, tooLargeBody, wrongMediaType } from "@/lib/api/body";
 import { CLIENT_ADDRESS_HEADER, clientAddress } from "@/lib/security/client-address";
 import { checkRequestOrigin, isStateChanging } from "@/lib/security/request-origin";
 import { appOrigin } from "./auth-env";
@@ -39,7 +39,7 @@ export async function handleAuthRequest(request: Request, handlers: AuthHandlers
 
   const origin = checkRequestOrigin(request.headers, appOrigin());
   if (!origin.ok) return apiError("forbidden", origin.message);
-  if (declaresBody(request.headers) && !isJsonMediaType(request.headers.get("content-type"))) return wrongMediaType();
+  if (hasBody(request) && !isJsonMediaType(request.headers.get("content-type"))) return wrongMediaType();
   const read = await readBodyBytes(request, maxJsonBodyBytes);
   if (!read.ok) return tooLargeBody();
   if (read.bytes.length > 0) {

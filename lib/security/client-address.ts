@@ -13,7 +13,7 @@ const hopsSchema = z.coerce.number().int().min(0).max(10);
  * TRUSTED_PROXY_HOPS: how many reverse proxies stand in front of the app, each appending the address
  * it saw to X-Forwarded-For (default 1). A bad value fails loudly rather than trusting the wrong entry.
  */
-export function trustedProxyHops(source: NodeJS.ProcessEnv = process.env): number {
+export function trustedProxyHops(source: Record<string, string | undefined> = process.env): number {
   const parsed = hopsSchema.safeParse(source.TRUSTED_PROXY_HOPS?.trim() || 1);
   if (!parsed.success) throw new Error("Invalid environment: TRUSTED_PROXY_HOPS must be a whole number from 0 to 10");
   return parsed.data;

@@ -54,3 +54,17 @@ export function servesHttps(url) {
 
 /** Paths whose pages are rendered per request and get the nonce policy from proxy.ts instead. */
 export const NONCE_PAGE_PREFIXES = ["/counter", "/account"];
+
+/**
+ * The rules of next.config's `headers()`: applied to static files and prerendered pages too, so no
+ * page turns dynamic for a header.
+ * @param {{ development?: boolean, https?: boolean }} options
+ */
+export function headerRules({ development = false, https = false } = {}) {
+  const noncePages = NONCE_PAGE_PREFIXES.map((prefix) => `${prefix.slice(1)}/|${prefix.slice(1)}$`).join("|");
+  return [
+    { source: "/:path*", headers: commonHeaders({ https }) },
+    { source: `/((?!api/|${noncePages}).*)`, headers: [{ key: "Content-Security-Policy", value: pagePolicy({ development, https }) }] },
+    { source: "/api/:path*", headers: [{ key: "Content-Security-Policy", value: API_POLICY }] },
+  ];
+}
