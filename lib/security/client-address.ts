@@ -46,7 +46,7 @@ function ipv6Groups(address: string): number[] {
  * address, and any other IPv6 address as its /64 network, which one subscriber usually holds whole
  * (RFC 6177), so that rotating through it never makes a new client.
  */
-export function clientBucket(address: string): string {
+function clientBucket(address: string): string {
   const version = isIP(address);
   if (version === 4) return address;
   if (version !== 6) return UNKNOWN_CLIENT;
