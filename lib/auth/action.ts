@@ -25,8 +25,8 @@ function formToObject(form: FormData): Record<string, FormDataEntryValue> {
 /**
  * The server-action twin of withRoute: a request from another origin → 403 (proxy.ts refuses the
  * foreign origins Next.js would otherwise answer with 500 before this runs), anonymous → 401,
- * signed in without the role → 403, then the
- * input (an object, or a form's FormData) validated with zod → 400 with a message per field.
+ * signed in without the role → 403, then the input (an object, or a form's FormData) validated
+ * with zod → 400 with a message per field.
  * Use as `export const changeRole = withAction({ role: "admin", input: schema }, handler)` in a
  * "use server" module; for `useActionState`, call it as `(previous, form) => changeRole(form)`.
  */

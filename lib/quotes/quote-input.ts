@@ -6,7 +6,10 @@ export const MIN_QUANTITY = 1;
 export const MAX_QUANTITY = 16;
 export const DEFAULT_QUANTITY = 4;
 export const PREFERRED_DAY_MAX_AHEAD = 90;
-/** A person needs longer than this to fill in a name, an address and a vehicle; a script does not. The server's signed `renderedAt` measures it. */
+/**
+ * A person needs longer than this to fill in a name, an address and a vehicle; a script does not.
+ * Measured from the server's signed `renderedAt`.
+ */
 export const MIN_FILL_MS = 3000;
 /** The field no person sees: anything typed into it came from a script. */
 export const HONEYPOT_FIELD = "website";
@@ -29,7 +32,8 @@ const optionalText = (schema: z.ZodString) => z.preprocess((value) => (typeof va
 export const quoteRequestSchema = z.object({
   name: lineText("Type your name so the shop knows who is asking")
     .trim()
-    .min(1, "Type your name so the shop knows who is asking").max(100, "Keep the name under 100 characters"),
+    .min(1, "Type your name so the shop knows who is asking")
+    .max(100, "Keep the name under 100 characters"),
   email: z
     .string({ error: "Type your e-mail address: the shop answers there" })
     .trim()
