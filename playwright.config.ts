@@ -28,7 +28,7 @@ const e2eDataDir = process.env.E2E_PGLITE_DATA_DIR ?? path.join(mkdtempSync(path
 process.env.E2E_PGLITE_DATA_DIR = e2eDataDir;
 
 export default defineConfig({
-  testDir: "tests/e2e",
+  testDir: "tests",
   fullyParallel: false,
   workers: 1,
   forbidOnly: Boolean(process.env.CI),
@@ -52,8 +52,10 @@ export default defineConfig({
     },
   },
   projects: [
-    { name: "phone", use: { ...devices["Pixel 7"], viewport: { width: 360, height: 780 }, defaultBrowserType: "chromium" } },
-    { name: "desktop", use: { ...devices["Desktop Chrome"], viewport: { width: 1280, height: 900 } } },
+    { name: "phone", testMatch: "e2e/**/*.spec.ts", use: { ...devices["Pixel 7"], viewport: { width: 360, height: 780 }, defaultBrowserType: "chromium" } },
+    { name: "desktop", testMatch: "e2e/**/*.spec.ts", use: { ...devices["Desktop Chrome"], viewport: { width: 1280, height: 900 } } },
+    // Requests from outside, over HTTP only: the security checks against the production build.
+    { name: "http", testMatch: "security/**/*.spec.ts" },
   ],
   webServer: [
     {

@@ -7,7 +7,7 @@ export default defineConfig({
   resolve: { alias: { "@": fileURLToPath(new URL("./", import.meta.url)) } },
   test: {
     environment: "node",
-    include: ["tests/unit/**/*.test.{ts,tsx}", "tests/integration/**/*.test.{ts,tsx}"],
+    include: ["tests/unit/**/*.test.{ts,tsx}", "tests/integration/**/*.test.{ts,tsx}", "tests/security/**/*.test.{ts,tsx}"],
     globalSetup: ["tests/integration/global-setup.ts"],
     reporters: process.env.CI ? ["verbose"] : ["default"],
     testTimeout: 30_000,

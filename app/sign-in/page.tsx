@@ -7,7 +7,7 @@ import { safeNextPath } from "@/lib/auth/next-path";
 export const metadata: Metadata = { title: "Sign in" };
 
 export default async function SignInPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
-  const { next: nextParam, reset } = await searchParams;
+  const { next: nextParam, reset, signedUp } = await searchParams;
   const next = safeNextPath(nextParam);
   return (
     <section>
@@ -17,6 +17,12 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
       {reset === "done" ? (
         <p role="status" className="mb-6 max-w-md rounded border border-accent bg-accent-soft px-4 py-3">
           Your password is changed. Sign in with the new one.
+        </p>
+      ) : null}
+      {signedUp === "1" ? (
+        <p role="status" className="mb-6 max-w-md rounded border border-accent bg-accent-soft px-4 py-3">
+          Thank you. If the address was new to us, your account is ready: sign in with it below. If it already had an account, we have sent its owner an
+          e-mail instead.
         </p>
       ) : null}
       <AuthForm kind="sign-in" next={next}>

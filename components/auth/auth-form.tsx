@@ -8,10 +8,11 @@ import { TextField } from "./text-field";
 
 /**
  * A sign-in or sign-up form: checked in the browser for a quick answer next to each field, then sent
- * to the sign-in service, which checks again. On success the whole page reloads at `next`.
+ * to the sign-in service, which checks again. On success the whole page reloads at `next` (after
+ * signing up: at sign-in, which then leads to `next`).
  */
 export function AuthForm({ kind, next, children }: { kind: AuthFormKind; next: string; children?: ReactNode }) {
-  const { fields, schema, endpoint, submitLabel } = authForms[kind];
+  const { fields, schema, endpoint, submitLabel, after } = authForms[kind];
   const [errors, setErrors] = useState<FieldErrors>({});
   const [busy, setBusy] = useState(false);
 
@@ -26,7 +27,7 @@ export function AuthForm({ kind, next, children }: { kind: AuthFormKind; next: s
     setBusy(true);
     const result = await postAuth(endpoint, parsed.data);
     if (result.ok) {
-      window.location.assign(next);
+      window.location.assign(after(next));
       return;
     }
     setBusy(false);

@@ -6,7 +6,7 @@ export type ItemFormCheck = { ok: true; body: NewStockItemBody } | { ok: false; 
 
 // The line is not known in the browser; the server checks run-flat against the real one.
 const PLACEHOLDER_LINE = { id: 0, runFlat: false };
-const PLACEHOLDER_SKU = "NEW";
+const PLACEHOLDER_SKU = "EDITED-ITEM";
 
 const sentence = (text: string) => `${text.charAt(0).toUpperCase()}${text.slice(1)}${/[.!?]$/.test(text) ? "" : "."}`;
 

@@ -22,30 +22,33 @@ export function OutboxFakeInbox({ outbox }: { outbox: DevOutbox }) {
   }
   if (outbox.emails.length === 0) return <p className="text-ink-soft">The local fake at {outbox.url} has received nothing since it started.</p>;
   return (
-    <ol className="flex flex-col gap-3">
-      {outbox.emails.map((email) => (
-        <li key={email.id} className="rounded border border-rule bg-sheet p-4">
-          <p className="font-semibold break-words">{email.subject}</p>
-          <p className="text-sm text-ink-soft">
-            To <span className="break-all">{email.to}</span> · <time dateTime={email.receivedAt.toISOString()}>{when.format(email.receivedAt)} UTC</time>
-          </p>
-          {email.links.length > 0 ? (
-            <ul className="mt-2 flex flex-col">
-              {email.links.map((link) => (
-                <li key={link}>
-                  <a href={link} className="inline-flex min-h-11 items-center font-mono text-sm break-all text-accent underline underline-offset-4">
-                    {link}
-                  </a>
-                </li>
-              ))}
-            </ul>
-          ) : null}
-          <details className="mt-2">
-            <summary className="inline-flex min-h-11 cursor-pointer items-center font-semibold text-accent">Show the text</summary>
-            <pre className="mt-2 overflow-x-auto text-sm whitespace-pre-wrap">{email.text || "(no text version)"}</pre>
-          </details>
-        </li>
-      ))}
-    </ol>
+    <>
+      <p className="text-ink-soft">Links that would sign their reader in or set a password, such as password resets, are hidden: only the recipient may use them.</p>
+      <ol className="flex flex-col gap-3">
+        {outbox.emails.map((email) => (
+          <li key={email.id} className="rounded border border-rule bg-sheet p-4">
+            <p className="font-semibold break-words">{email.subject}</p>
+            <p className="text-sm text-ink-soft">
+              To <span className="break-all">{email.to}</span> · <time dateTime={email.receivedAt.toISOString()}>{when.format(email.receivedAt)} UTC</time>
+            </p>
+            {email.links.length > 0 ? (
+              <ul className="mt-2 flex flex-col">
+                {email.links.map((link) => (
+                  <li key={link}>
+                    <a href={link} className="inline-flex min-h-11 items-center font-mono text-sm break-all text-accent underline underline-offset-4">
+                      {link}
+                    </a>
+                  </li>
+                ))}
+              </ul>
+            ) : null}
+            <details className="mt-2">
+              <summary className="inline-flex min-h-11 cursor-pointer items-center font-semibold text-accent">Show the text</summary>
+              <pre className="mt-2 overflow-x-auto text-sm whitespace-pre-wrap">{email.text || "(no text version)"}</pre>
+            </details>
+          </li>
+        ))}
+      </ol>
+    </>
   );
 }

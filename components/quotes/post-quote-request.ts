@@ -14,12 +14,22 @@ const text = (form: FormData, name: string) => {
   return typeof value === "string" ? value : undefined;
 };
 
+/** The signed time the server handed out when the form opened; null when it could not be reached (the send then says so). */
+export async function fetchFormToken(): Promise<string | null> {
+  try {
+    const response = await fetch("/api/v1/quote-requests/form-token", { cache: "no-store" });
+    const answer = (await response.json()) as { renderedAt?: unknown };
+    return typeof answer.renderedAt === "string" ? answer.renderedAt : null;
+  } catch {
+    return null;
+  }
+}
+
 /**
  * Checks the request in the browser with a message per field, then sends it to POST /api/v1/quote-requests
- * with how long the form was open (from its rendered-at time).
+ * with the form's signed opening time.
  */
-export async function postQuoteRequest(context: QuoteContext, form: FormData, now = Date.now()): Promise<QuoteOutcome> {
-  const renderedAt = Number(text(form, "renderedAt"));
+export async function postQuoteRequest(context: QuoteContext, form: FormData): Promise<QuoteOutcome> {
   const body = {
     name: text(form, "name"),
     email: text(form, "email"),
@@ -31,7 +41,7 @@ export async function postQuoteRequest(context: QuoteContext, form: FormData, no
     source: context.source,
     reference: context.reference,
     [HONEYPOT_FIELD]: text(form, HONEYPOT_FIELD) ?? "",
-    fillMs: Number.isFinite(renderedAt) ? Math.max(0, Math.round(now - renderedAt)) : 0,
+    renderedAt: text(form, "renderedAt") || undefined,
   };
   const parsed = quoteRequestSchema.safeParse(body);
   if (!parsed.success) return { ok: false, message: "Some fields need another look.", fieldErrors: quoteFieldErrors(parsed.error) };

@@ -2,7 +2,7 @@
 
 import { useEffect, useId, useRef, useState, type FormEvent } from "react";
 import { DEFAULT_QUANTITY, HONEYPOT_FIELD, MAX_QUANTITY, MIN_QUANTITY, PREFERRED_DAY_MAX_AHEAD } from "@/lib/quotes/quote-input";
-import { postQuoteRequest, type QuoteContext, type QuoteOutcome } from "./post-quote-request";
+import { fetchFormToken, postQuoteRequest, type QuoteContext, type QuoteOutcome } from "./post-quote-request";
 import { describedBy, fieldClass, FormField } from "@/components/ui/form-field";
 
 const FIELD_ORDER = ["name", "email", "phone", "vehicle", "tires", "quantity", "preferredDay"] as const;
@@ -16,12 +16,22 @@ function localDay(offsetDays = 0): string {
 /** The request form itself; loaded only when a driver opens "Ask the shop for a price". */
 export default function QuoteForm({ context, tires, onCancel }: { context: QuoteContext; tires: string; onCancel: () => void }) {
   const id = useId();
-  const [renderedAt] = useState(() => Date.now());
+  const [renderedAt, setRenderedAt] = useState("");
   const [busy, setBusy] = useState(false);
   const [outcome, setOutcome] = useState<QuoteOutcome | null>(null);
   const formRef = useRef<HTMLFormElement>(null);
   const doneRef = useRef<HTMLDivElement>(null);
   const alertRef = useRef<HTMLParagraphElement>(null);
+
+  useEffect(() => {
+    let current = true;
+    void fetchFormToken().then((token) => {
+      if (current && token) setRenderedAt(token);
+    });
+    return () => {
+      current = false;
+    };
+  }, []);
 
   useEffect(() => {
     if (!outcome) return;

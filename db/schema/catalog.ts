@@ -183,8 +183,8 @@ export const stockItem = pgTable(
       .on(table.designation)
       .where(sql`not ${table.retired}`),
     index("stock_item_line").on(table.lineId),
-    // Printable ASCII without spaces, so that plain character order is the same everywhere.
-    check("stock_item_sku_shape", sql`${table.sku} ~ '^[!-~]{1,64}$'`),
+    // Characters that survive a URL path as they are (lib/catalog/sku.ts), in the same plain order everywhere.
+    check("stock_item_sku_shape", sql`${table.sku} ~ '^[A-Za-z0-9._-]{1,64}$' and ${table.sku} not in ('.', '..') and lower(${table.sku}) <> 'new'`),
     check("stock_item_designation", sql`length(${table.designation}) between 1 and 40`),
     check("stock_item_size_kind", sql`${table.sizeKind} in ${oneOf(SIZE_KINDS)}`),
     check("stock_item_prefix", sql`${table.prefix} in ${oneOf(SIZE_PREFIXES)}`),

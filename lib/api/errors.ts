@@ -11,6 +11,7 @@ export const apiErrorStatus = {
   gone: 410,
   too_large: 413,
   too_long: 414,
+  unsupported_media_type: 415,
   unreadable: 422,
   unknown_load_index: 422,
   unknown_speed_symbol: 422,
@@ -20,6 +21,7 @@ export const apiErrorStatus = {
 
 export type ApiErrorCode = keyof typeof apiErrorStatus;
 
-export function apiError(code: ApiErrorCode, message: string, headers?: HeadersInit): NextResponse {
-  return NextResponse.json({ error: { code, message } }, { status: apiErrorStatus[code], headers });
+/** `{"error":{"code","message"}}`, with `"field"` when the error is about one field of the request. */
+export function apiError(code: ApiErrorCode, message: string, headers?: HeadersInit, field?: string): NextResponse {
+  return NextResponse.json({ error: field === undefined ? { code, message } : { code, message, field } }, { status: apiErrorStatus[code], headers });
 }

@@ -1,6 +1,8 @@
 import { headers } from "next/headers";
 import { z } from "zod";
 import { getDb, type Database } from "@/db/client";
+import { checkRequestOrigin } from "@/lib/security/request-origin";
+import { appOrigin } from "./auth-env";
 import { hasRole, type Role } from "./roles";
 import { getSessionUser, type SessionUser } from "./session";
 
@@ -21,8 +23,10 @@ function formToObject(form: FormData): Record<string, FormDataEntryValue> {
 }
 
 /**
- * The server-action twin of withRoute: anonymous → 401, signed in without the role → 403, then the
- * input (an object, or a form's FormData) validated with zod → 400 with a message per field.
+ * The server-action twin of withRoute: a request from another origin → 403 (proxy.ts refuses the
+ * foreign origins Next.js would otherwise answer with 500 before this runs), anonymous → 401,
+ * signed in without the role → 403, then the input (an object, or a form's FormData) validated
+ * with zod → 400 with a message per field.
  * Use as `export const changeRole = withAction({ role: "admin", input: schema }, handler)` in a
  * "use server" module; for `useActionState`, call it as `(previous, form) => changeRole(form)`.
  */
@@ -31,7 +35,10 @@ export function withAction<Schema extends z.ZodType, T>(
   handler: (input: ActionInput<z.infer<Schema>>) => Promise<ActionResult<T>>,
 ) {
   return async (raw: unknown): Promise<ActionResult<T>> => {
-    const user = await getSessionUser(await headers());
+    const requestHeaders = await headers();
+    const origin = checkRequestOrigin(requestHeaders, appOrigin());
+    if (!origin.ok) return { ok: false, status: 403, message: origin.message };
+    const user = await getSessionUser(requestHeaders);
     if (!user) return { ok: false, status: 401, message: "Your session has ended: sign in again." };
     if (!hasRole(user.role, options.role)) return { ok: false, status: 403, message: `Only ${options.role} accounts can do this.` };
     const parsed = options.input.safeParse(raw instanceof FormData ? formToObject(raw) : raw);

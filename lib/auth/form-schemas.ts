@@ -1,10 +1,17 @@
 import { z } from "zod";
+import { lineText } from "@/lib/validation/text";
+
+/** The one password rule: sign-up, resets and accounts an admin creates. */
+export const PASSWORD_LENGTH = { min: 8, max: 128 } as const;
 
 const email = z.email("Enter an e-mail address, like name@example.com.").max(254);
-const password = z.string().min(8, "Use at least 8 characters.").max(128, "Use at most 128 characters.");
+const password = z
+  .string()
+  .min(PASSWORD_LENGTH.min, `Use at least ${PASSWORD_LENGTH.min} characters.`)
+  .max(PASSWORD_LENGTH.max, `Use at most ${PASSWORD_LENGTH.max} characters.`);
 
 export const signInSchema = z.object({ email, password: z.string().min(1, "Enter your password.") });
-export const signUpSchema = z.object({ name: z.string().trim().min(1, "Enter your name.").max(100), email, password });
+export const signUpSchema = z.object({ name: lineText().trim().min(1, "Enter your name.").max(100), email, password });
 
 export type FieldErrors = Partial<Record<string, string>>;
 

@@ -4,23 +4,33 @@ import { getDb, type Database } from "@/db/client";
 import { parseJsonBody } from "@/lib/api/body";
 import { apiError } from "@/lib/api/errors";
 import { parseQuery } from "@/lib/api/query";
+import { clientAddress } from "@/lib/security/client-address";
+import { checkRequestOrigin, isStateChanging } from "@/lib/security/request-origin";
+import { appOrigin } from "./auth-env";
 import { hasRole, type Role } from "./roles";
 import { getSessionUser, type SessionUser } from "./session";
 
 type Schema = z.ZodType;
 type Parsed<S> = S extends Schema ? z.infer<S> : undefined;
+type Access = Role | "public";
 
-export interface RouteOptions<Q extends Schema | undefined, B extends Schema | undefined, P extends Schema | undefined> {
-  /** The least role allowed; admin includes staff, staff includes customer. */
-  role: Role;
+export interface RouteOptions<A extends Access, Q extends Schema | undefined, B extends Schema | undefined, P extends Schema | undefined> {
+  /** "public", or the least role allowed: admin includes staff, staff includes customer. */
+  role: A;
   query?: Q;
   body?: B;
   params?: P;
+  /**
+   * A limit per client address, counted before anything is validated so that every request from
+   * the address counts, valid or not; a Response (429) refuses the request.
+   */
+  limitByAddress?: (db: Database, address: string) => Promise<Response | null>;
 }
 
-export interface RouteInput<Q, B, P> {
+export interface RouteInput<A, Q, B, P> {
   request: NextRequest;
-  user: SessionUser;
+  /** Null on public routes, which never look the session up. */
+  user: A extends "public" ? null : SessionUser;
   db: Database;
   query: Parsed<Q>;
   body: Parsed<B>;
@@ -32,19 +42,34 @@ interface RouteContext {
 }
 
 /**
- * The one wrapper around every protected route handler: anonymous → 401 unauthenticated, signed in
- * without the role → 403 forbidden, then the path, query and body validated with zod (400 in the
- * API's error shape) before the handler runs with the signed-in user and the database.
+ * The one wrapper around every route handler that reads the database or changes anything:
+ * a state-changing request from another origin → 403 forbidden; anonymous → 401 unauthenticated,
+ * signed in without the role → 403 forbidden; then the address limit, then the path, query and body
+ * validated with zod (400/413/415 in the API's error shape) before the handler runs.
  */
-export function withRoute<Q extends Schema | undefined = undefined, B extends Schema | undefined = undefined, P extends Schema | undefined = undefined>(
-  options: RouteOptions<Q, B, P>,
-  handler: (input: RouteInput<Q, B, P>) => Promise<Response>,
-) {
+export function withRoute<
+  A extends Access,
+  Q extends Schema | undefined = undefined,
+  B extends Schema | undefined = undefined,
+  P extends Schema | undefined = undefined,
+>(options: RouteOptions<A, Q, B, P>, handler: (input: RouteInput<A, Q, B, P>) => Promise<Response>) {
   return async (request: NextRequest, context?: RouteContext): Promise<Response> => {
+    if (isStateChanging(request.method)) {
+      const origin = checkRequestOrigin(request.headers, appOrigin());
+      if (!origin.ok) return apiError("forbidden", origin.message);
+    }
     await connection();
-    const user = await getSessionUser(request.headers);
-    if (!user) return apiError("unauthenticated", "Sign in to use this endpoint.");
-    if (!hasRole(user.role, options.role)) return apiError("forbidden", `This endpoint is for ${options.role} accounts.`);
+    let user: SessionUser | null = null;
+    if (options.role !== "public") {
+      user = await getSessionUser(request.headers);
+      if (!user) return apiError("unauthenticated", "Sign in to use this endpoint.");
+      if (!hasRole(user.role, options.role)) return apiError("forbidden", `This endpoint is for ${options.role} accounts.`);
+    }
+    const db = await getDb();
+    if (options.limitByAddress) {
+      const refused = await options.limitByAddress(db, clientAddress(request.headers));
+      if (refused) return refused;
+    }
 
     let params: unknown = undefined;
     if (options.params) {
@@ -64,7 +89,6 @@ export function withRoute<Q extends Schema | undefined = undefined, B extends Sc
       if (!parsed.ok) return parsed.response;
       body = parsed.value;
     }
-    const db = await getDb();
-    return handler({ request, user, db, query, body, params } as RouteInput<Q, B, P>);
+    return handler({ request, user, db, query, body, params } as RouteInput<A, Q, B, P>);
   };
 }

@@ -1,4 +1,6 @@
 import type { NewStockItem } from "@/db/schema";
+import { isSku, SKU_RULE } from "@/lib/catalog/sku";
+import { hasControlCharacters } from "@/lib/validation/text";
 import { buildStockRow, type StockItemInput, type StockLine, type StockRowProblem } from "@/lib/catalog/stock-row";
 import { isLoadRange, isSpeedSymbol, LOAD_INDEX_MAX, LOAD_INDEX_MIN } from "@/lib/tire";
 import type { CatalogCsvColumnName, CatalogCsvRecord, CsvRefusal } from "./columns";
@@ -31,7 +33,6 @@ const COLUMN_OF_FIELD: Record<keyof StockItemInput, CatalogCsvColumnName> = {
 
 // Lines are checked against their brand when the file is imported; any line will do to check the tire itself.
 const PLACEHOLDER_LINE: StockLine = { id: 0, runFlat: false };
-const SKU = /^[!-~]{1,64}$/;
 const WHOLE = /^\d{1,10}$/;
 const AMOUNT_SHAPE = /^\$?\d+(\.\d{1,2})?$/;
 const YES = ["yes", "y", "true", "1", "xl"];
@@ -62,11 +63,12 @@ export function readCsvRow(record: CatalogCsvRecord, line: number): CsvRowResult
   };
 
   const sku = required("sku");
-  if (sku !== "" && !SKU.test(sku)) refuse("sku", `SKU "${sku}" must be 1–64 letters, digits or punctuation, without spaces`);
+  if (sku !== "" && !isSku(sku)) refuse("sku", `SKU "${sku}" breaks the rule: ${SKU_RULE}`);
   const brand = required("brand");
   const tireLine = required("line");
   for (const [column, name] of [["brand", brand], ["line", tireLine]] as const) {
     if (name.length > 100) refuse(column, `${column} is longer than 100 characters`);
+    if (hasControlCharacters(name)) refuse(column, `${column} holds a control character (such as NUL); type the name again`);
   }
   const size = required("size");
   const speedSymbol = required("speed_symbol");

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { lineText } from "@/lib/validation/text";
 
 export const ALTERNATIVES_SORTS = ["diameter", "price", "loadMargin"] as const;
 export type AlternativesSort = (typeof ALTERNATIVES_SORTS)[number];
@@ -15,11 +16,11 @@ const alternativesCursorSchema = z.object({
   sort: z.enum(ALTERNATIVES_SORTS),
   key: z.number(),
   priceCents: z.number().int(),
-  sku: z.string().min(1),
+  sku: lineText().min(1),
 });
 
 /** Where a catalog page ended: the last SKU in plain character order. */
-const catalogCursorSchema = z.object({ after: z.string().min(1) });
+const catalogCursorSchema = z.object({ after: lineText().min(1) });
 
 function encode(value: unknown): string {
   return Buffer.from(JSON.stringify(value), "utf8").toString("base64url");

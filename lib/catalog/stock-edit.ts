@@ -1,7 +1,9 @@
 import { z } from "zod";
+import { lineText } from "@/lib/validation/text";
+import { skuSchema } from "./sku";
 import { stockItemInputSchema } from "./stock-row";
 
-const name = z.string().trim().min(1).max(100);
+const name = lineText().trim().min(1).max(100);
 
 /** POST /api/v1/catalog: a new stock item in a line the catalog already has. */
 export const newStockItemSchema = stockItemInputSchema.extend({ brand: name, line: name }).strict();
@@ -15,7 +17,7 @@ export const stockItemChangesSchema = newStockItemSchema
   .refine((changes) => Object.keys(changes).length > 0, { message: "name at least one field to change" });
 
 /** The `{sku}` in a catalog item's address. */
-export const skuParamsSchema = z.object({ sku: z.string().regex(/^[!-~]{1,64}$/) });
+export const skuParamsSchema = z.object({ sku: skuSchema });
 
 export type NewStockItemBody = z.infer<typeof newStockItemSchema>;
 export type StockItemChanges = z.infer<typeof stockItemChangesSchema>;

@@ -13,18 +13,17 @@ import {
   sizeGeometry,
   speedSymbolRank,
 } from "@/lib/tire";
+import { lineText } from "@/lib/validation/text";
+import { skuSchema } from "./sku";
 
 /** A stock item as staff screens, the CSV import and the demo seed describe it. */
 export const stockItemInputSchema = z.object({
-  sku: z
-    .string()
-    .trim()
-    .regex(/^[!-~]{1,64}$/, "a SKU is 1–64 letters, digits or punctuation, without spaces"),
-  designation: z.string().trim().min(1).max(100),
+  sku: z.string().trim().pipe(skuSchema),
+  designation: lineText().trim().min(1).max(100),
   loadIndex: z.number().int(),
   loadIndexDual: z.number().int().nullish(),
-  speedSymbol: z.string().trim().min(1).max(8),
-  loadRange: z.string().trim().min(1).max(2).nullish(),
+  speedSymbol: lineText().trim().min(1).max(8),
+  loadRange: lineText().trim().min(1).max(2).nullish(),
   extraLoad: z.boolean().default(false),
   priceCents: z.number().int().min(0).max(2_147_483_647),
   quantity: z.number().int().min(0).max(2_147_483_647),

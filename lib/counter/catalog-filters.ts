@@ -1,6 +1,7 @@
 import { and, asc, desc, eq, gt, ilike, or, sql, type SQL } from "drizzle-orm";
 import { z } from "zod";
 import { containsPattern } from "@/lib/search/contains-pattern";
+import { lineText } from "@/lib/validation/text";
 import { brand, SEASONS, stockItem, TERRAINS, tireLine } from "@/db/schema";
 
 export const CATALOG_TABLE_SORTS = ["sku", "brand", "size", "loadIndex", "speed", "price", "quantity"] as const;
@@ -15,8 +16,8 @@ const optional = <Schema extends z.ZodType>(schema: Schema) =>
  * as the CSV export takes them. Retired items never show.
  */
 export const catalogFiltersSchema = z.object({
-  q: optional(z.string().trim().max(100)),
-  brand: optional(z.string().trim().max(100)),
+  q: optional(lineText().trim().max(100)),
+  brand: optional(lineText().trim().max(100)),
   season: optional(z.enum(SEASONS)),
   terrain: optional(z.enum(TERRAINS)),
   rim: optional(z.coerce.number().int().min(8).max(30)),

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { readEmailEnv } from "./email-env";
+import { redactSecretLinks, visibleLinks } from "./redact-links";
 
 const receivedSchema = z.object({
   id: z.string(),
@@ -21,11 +22,11 @@ export interface OutboxEmail {
 
 export type DevOutbox = { status: "not_local" } | { status: "unreachable"; url: string; message: string } | { status: "ok"; url: string; emails: OutboxEmail[] };
 
-const LINK_PATTERN = /https?:\/\/[^\s<>"')]+/g;
-
 /**
  * What the local fake e-mail service has received, read on the server. Only when e-mail goes to a
- * service on this machine: a real provider's mail is never listed here.
+ * service on this machine: a real provider's mail is never listed here. Links that would let a
+ * reader in (password resets and the like) are hidden: the Outbox shows staff what customers were
+ * sent, never a way into someone else's account.
  */
 export async function readDevOutbox(): Promise<DevOutbox> {
   const env = readEmailEnv();
@@ -38,7 +39,7 @@ export async function readDevOutbox(): Promise<DevOutbox> {
       const parsed = receivedSchema.safeParse(item);
       if (!parsed.success) return [];
       const { id, created_at, to, subject, text = "" } = parsed.data;
-      return [{ id, receivedAt: new Date(created_at), to: Array.isArray(to) ? to.join(", ") : to, subject, text, links: [...new Set(text.match(LINK_PATTERN) ?? [])] }];
+      return [{ id, receivedAt: new Date(created_at), to: Array.isArray(to) ? to.join(", ") : to, subject, text: redactSecretLinks(text), links: visibleLinks(text) }];
     });
     return { status: "ok", url, emails };
   } catch (error) {

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { multiLineText } from "@/lib/validation/text";
 
 export const MAX_EMAIL_MESSAGE_LENGTH = 1000;
 
@@ -6,7 +7,7 @@ export const MAX_EMAIL_MESSAGE_LENGTH = 1000;
 export const fitCardEmailBodySchema = z
   .object({
     to: z.email({ error: "Enter an e-mail address such as name@example.com." }).max(254, { error: "An e-mail address has at most 254 characters." }),
-    message: z.string().trim().max(MAX_EMAIL_MESSAGE_LENGTH, { error: `Keep the message to ${MAX_EMAIL_MESSAGE_LENGTH} characters or fewer.` }).optional(),
+    message: multiLineText().trim().max(MAX_EMAIL_MESSAGE_LENGTH, { error: `Keep the message to ${MAX_EMAIL_MESSAGE_LENGTH} characters or fewer.` }).optional(),
   })
   .strict();
 

@@ -1,10 +1,11 @@
 import { z } from "zod";
 import { SEASONS, TERRAINS } from "@/lib/tire";
+import { lineText } from "@/lib/validation/text";
 
 export const finderSorts = ["diameter", "price", "loadMargin"] as const;
 export const vehicleTypes = ["passenger-car", "mpv-truck-trailer"] as const;
 
-const optionalText = z.string().trim().max(64).optional().catch(undefined);
+const optionalText = lineText().trim().max(64).optional().catch(undefined);
 const optionalCount = (max: number) => z.coerce.number().int().min(0).max(max).optional().catch(undefined);
 const flag = z.enum(["1", "true"]).optional().catch(undefined);
 

@@ -1,6 +1,8 @@
 import { z } from "zod";
 import { LOAD_RANGES, SEASONS } from "@/lib/tire";
 import { MAX_COMPARED_SIZES } from "@/lib/compare/read-sizes";
+import { skuSchema } from "@/lib/catalog/sku";
+import { lineText, multiLineText } from "@/lib/validation/text";
 
 export const MAX_CARD_TIRES = 6;
 
@@ -16,18 +18,18 @@ const loadIndexField = z.number().int().min(0).max(279);
  */
 export const newFitCardSchema = z
   .object({
-    sizes: z.array(z.string().trim().min(1).max(40)).min(1).max(MAX_COMPARED_SIZES),
-    skus: z.array(z.string().regex(/^[!-~]{1,64}$/)).max(MAX_CARD_TIRES).default([]),
+    sizes: z.array(lineText().trim().min(1).max(40)).min(1).max(MAX_COMPARED_SIZES),
+    skus: z.array(skuSchema).max(MAX_CARD_TIRES).default([]),
     loadIndex: loadIndexField,
     loadIndexDual: loadIndexField.optional(),
-    speedSymbol: z.string().trim().min(1).max(3),
+    speedSymbol: lineText().trim().min(1).max(3),
     loadRange: z.enum(LOAD_RANGES).optional(),
     runFlat: z.boolean().optional(),
     minLoadIndex: loadIndexField.optional(),
     minLoadIndexDual: loadIndexField.optional(),
     originalSeason: z.enum(SEASONS).optional(),
     tolerancePct: z.number().min(1).max(5).optional(),
-    note: z.string().trim().max(MAX_NOTE_LENGTH).optional(),
+    note: multiLineText().trim().max(MAX_NOTE_LENGTH).optional(),
     expiresInDays: z.number().int().min(1).max(365).optional(),
   })
   .strict()

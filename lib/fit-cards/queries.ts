@@ -3,6 +3,7 @@ import { z } from "zod";
 import type { Database } from "@/db/client";
 import { fitCard, fitCardTire, user } from "@/db/schema";
 import { containsPattern } from "@/lib/search/contains-pattern";
+import { lineText } from "@/lib/validation/text";
 
 export const CARD_LIST_PAGE_SIZE = 50;
 
@@ -10,7 +11,7 @@ export type CardState = "active" | "withdrawn" | "expired";
 
 /** `/counter/cards?q=…&page=…`: a value that makes no sense falls back to the first page of every card. */
 export const cardListQuerySchema = z.object({
-  q: z.string().trim().max(100).optional().catch(undefined),
+  q: lineText().trim().max(100).optional().catch(undefined),
   page: z.coerce.number().int().min(1).max(100_000).catch(1).default(1),
 });
 

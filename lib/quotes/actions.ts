@@ -4,6 +4,7 @@ import { revalidatePath } from "next/cache";
 import { z } from "zod";
 import { QUOTE_STATUSES } from "@/db/schema";
 import { withAction } from "@/lib/auth/action";
+import { multiLineText } from "@/lib/validation/text";
 import { requestIdSchema } from "./queries";
 import { MAX_REPLY_LENGTH } from "./quote-input";
 import { changeQuoteStatus, replyToQuoteRequest } from "./staff-changes";
@@ -15,8 +16,7 @@ const statusChangeSchema = z.object({
 
 const replySchema = z.object({
   id: requestIdSchema,
-  body: z
-    .string({ error: "Write the reply before sending it." })
+  body: multiLineText("Write the reply before sending it.")
     .trim()
     .min(1, "Write the reply before sending it.")
     .max(MAX_REPLY_LENGTH, `Keep the reply under ${MAX_REPLY_LENGTH.toLocaleString("en-US")} characters.`),

@@ -2,9 +2,12 @@ import type { Database } from "@/db/client";
 import { quoteRequest } from "@/db/schema";
 import { sendRecordedEmail } from "@/lib/email/recorded-send";
 import { siteUrl } from "@/lib/env/site-url";
+import { hitRateLimit } from "@/lib/rate-limit/rate-limit";
 import { getShopContact } from "@/lib/shop/queries";
 import type { NewQuoteRequest } from "./quote-input";
 import { requestConfirmationEmail, requestToShopEmail, type RequestSummary } from "./quote-emails";
+
+const CONFIRMATIONS_PER_ADDRESS_PER_DAY = { limit: 3, windowSeconds: 86_400 };
 
 export interface CreatedQuoteRequest {
   id: number;
@@ -15,7 +18,8 @@ export interface CreatedQuoteRequest {
 
 /**
  * Stores a driver's request, then e-mails it to the shop (replies go to the driver) and a
- * confirmation to the driver. The request is kept whatever happens to the e-mails.
+ * confirmation to the driver, at most 3 a day to one address, so that the form cannot be used to
+ * flood someone else's inbox. The request is kept whatever happens to the e-mails.
  */
 export async function createQuoteRequest(db: Database, input: NewQuoteRequest): Promise<CreatedQuoteRequest> {
   const [row] = await db
@@ -50,6 +54,8 @@ export async function createQuoteRequest(db: Database, input: NewQuoteRequest): 
         idempotencyKey: `quote-request-${row.id}-to-shop`,
       })
     : { ok: false };
+  const confirmationAllowed = await hitRateLimit(db, `quote-confirmation:${input.email.trim().toLowerCase()}`, CONFIRMATIONS_PER_ADDRESS_PER_DAY);
+  if (!confirmationAllowed.allowed) return { id: row.id, status: "new", emailed: { shop: toShop.ok, customer: false } };
   const confirmation = await sendRecordedEmail(db, {
     senderId: null,
     kind: "quote_confirmation",

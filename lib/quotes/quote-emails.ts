@@ -57,14 +57,19 @@ export function requestToShopEmail(request: RequestSummary, counterUrl: string):
   ]);
 }
 
-/** To the driver: we have it, and what happens next. */
-export function requestConfirmationEmail(request: RequestSummary, shop: ShopContact | null): EmailBody {
+/**
+ * To the driver: we have it, and what happens next. Anyone can type someone else's address into the
+ * form, so this e-mail carries nothing the sender wrote (not even the name): only the number, the
+ * quantity, the day picked and the shop's own words.
+ */
+export function requestConfirmationEmail(request: Pick<RequestSummary, "id" | "quantity" | "preferredDay">, shop: ShopContact | null): EmailBody {
   const shopName = shop?.name ?? "The shop";
   return render(`We have your price request (#${request.id})`, [
-    `Hello ${request.name},`,
-    `Thank you for asking. ${shopName} has your request and will answer by e-mail, usually within one working day. This is what you sent:`,
-    table(request),
-    "A price depends on the tires in stock on the day; the shop confirms it when you book the fitting. If anything above is wrong, reply to this e-mail or call the shop.",
+    "Hello,",
+    `Thank you for asking. ${shopName} has your request #${request.id} for a price on ${request.quantity} ${request.quantity === 1 ? "tire" : "tires"}${
+      request.preferredDay ? `, fitted on ${request.preferredDay} if you book` : ""
+    }, and will answer at this address, usually within one working day.`,
+    "A price depends on the tires in stock on the day; the shop confirms it when you book the fitting. If you did not ask for a price, ignore this e-mail: nothing is booked and no one will write again unless you reply.",
     shopLines(shop),
   ]);
 }

@@ -1,11 +1,15 @@
 import { z } from "zod";
 import { QUOTE_SOURCES } from "@/db/schema/quotes";
+import { lineText, multiLineText } from "@/lib/validation/text";
 
 export const MIN_QUANTITY = 1;
 export const MAX_QUANTITY = 16;
 export const DEFAULT_QUANTITY = 4;
 export const PREFERRED_DAY_MAX_AHEAD = 90;
-/** A person needs longer than this to fill in a name, an address and a vehicle; a script does not. */
+/**
+ * A person needs longer than this to fill in a name, an address and a vehicle; a script does not.
+ * Measured from the server's signed `renderedAt`.
+ */
 export const MIN_FILL_MS = 3000;
 /** The field no person sees: anything typed into it came from a script. */
 export const HONEYPOT_FIELD = "website";
@@ -26,7 +30,10 @@ const optionalText = (schema: z.ZodString) => z.preprocess((value) => (typeof va
 
 /** What a driver sends with "Ask the shop", checked the same way in the browser and by the API. */
 export const quoteRequestSchema = z.object({
-  name: z.string({ error: "Type your name so the shop knows who is asking" }).trim().min(1, "Type your name so the shop knows who is asking").max(100, "Keep the name under 100 characters"),
+  name: lineText("Type your name so the shop knows who is asking")
+    .trim()
+    .min(1, "Type your name so the shop knows who is asking")
+    .max(100, "Keep the name under 100 characters"),
   email: z
     .string({ error: "Type your e-mail address: the shop answers there" })
     .trim()
@@ -41,13 +48,11 @@ export const quoteRequestSchema = z.object({
       .regex(/^[0-9 +()-]+$/, "Use only digits, spaces and + ( ) - in the phone number")
       .refine((phone) => (phone.match(/\d/g) ?? []).length >= 7, "A phone number needs at least 7 digits"),
   ),
-  vehicle: z
-    .string({ error: "Say which vehicle the tires are for, such as “2019 family SUV”" })
+  vehicle: lineText("Say which vehicle the tires are for, such as “2019 family SUV”")
     .trim()
     .min(2, "Say which vehicle the tires are for, such as “2019 family SUV”")
     .max(120, "Keep the vehicle under 120 characters"),
-  tires: z
-    .string({ error: "Say which tires or size you would like a price for" })
+  tires: multiLineText("Say which tires or size you would like a price for")
     .trim()
     .min(2, "Say which tires or size you would like a price for")
     .max(600, "Keep the tires under 600 characters"),
@@ -68,23 +73,14 @@ export const quoteRequestSchema = z.object({
       }, `Pick a day from today to ${PREFERRED_DAY_MAX_AHEAD} days ahead, or leave it empty`),
   ),
   source: z.enum(QUOTE_SOURCES, { error: "The page the request comes from is unknown" }),
-  reference: optionalText(z.string().trim().max(100, "The reference is longer than 100 characters")),
+  reference: optionalText(lineText().trim().max(100, "The reference is longer than 100 characters")),
   [HONEYPOT_FIELD]: z.string().max(500).optional(),
-  /** How long the form was open before it was sent, measured in the browser so clocks that disagree don't matter. */
-  fillMs: z.number().int().min(0).max(86_400_000 * 7).optional(),
+  /** The signed token of GET /api/v1/quote-requests/form-token, fetched when the form opened. */
+  renderedAt: z.string().max(200).optional(),
 });
 
 export type QuoteRequestInput = z.infer<typeof quoteRequestSchema>;
-export type NewQuoteRequest = Omit<QuoteRequestInput, typeof HONEYPOT_FIELD | "fillMs">;
-
-export type SpamVerdict = { ok: true } | { ok: false; reason: "honeypot" | "too_fast" };
-
-/** Refuses what only a script would send: the hidden field filled in, or a form sent within seconds. */
-export function spamVerdict(input: Pick<QuoteRequestInput, typeof HONEYPOT_FIELD | "fillMs">): SpamVerdict {
-  if (input[HONEYPOT_FIELD]?.trim()) return { ok: false, reason: "honeypot" };
-  if (input.fillMs === undefined || input.fillMs < MIN_FILL_MS) return { ok: false, reason: "too_fast" };
-  return { ok: true };
-}
+export type NewQuoteRequest = Omit<QuoteRequestInput, typeof HONEYPOT_FIELD | "renderedAt">;
 
 /** What a refused sender reads: the same words for every reason, so a script learns nothing. */
 export const SPAM_REFUSAL_MESSAGE = "The request could not be accepted. Please wait a few seconds, check the form and send it again.";

@@ -27,8 +27,3 @@ export async function hitRateLimit(db: Database, key: string, { limit, windowSec
   if (hits <= limit) return { allowed: true, remaining: limit - hits };
   return { allowed: false, retryAfterSeconds: Math.max(1, Math.ceil((windowStart.getTime() + windowMs - now.getTime()) / 1000)) };
 }
-
-/** The caller's address as the proxy in front of the app reports it; one shared key when there is none. */
-export function clientAddress(headers: Headers): string {
-  return headers.get("x-forwarded-for")?.split(",")[0]?.trim() || headers.get("x-real-ip") || "unknown";
-}

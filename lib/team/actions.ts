@@ -4,10 +4,11 @@ import { revalidatePath } from "next/cache";
 import { z } from "zod";
 import { ROLES } from "@/db/schema";
 import { withAction } from "@/lib/auth/action";
+import { lineText } from "@/lib/validation/text";
 import { changeUserRole } from "./role-change";
 
 const roleChangeSchema = z.object({
-  userId: z.string().min(1, "choose an account").max(100),
+  userId: lineText().min(1, "choose an account").max(100),
   role: z.enum(ROLES, { error: "choose customer, staff or admin" }),
 });
 

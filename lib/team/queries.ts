@@ -3,11 +3,12 @@ import { z } from "zod";
 import type { Database } from "@/db/client";
 import { user } from "@/db/schema";
 import { containsPattern } from "@/lib/search/contains-pattern";
+import { lineText } from "@/lib/validation/text";
 
 export const TEAM_PAGE_SIZE = 100;
 
 /** `/counter/team?q=…`: accounts whose name or e-mail contains the words. */
-export const teamQuerySchema = z.object({ q: z.string().trim().max(100).optional().catch(undefined) });
+export const teamQuerySchema = z.object({ q: lineText().trim().max(100).optional().catch(undefined) });
 
 /** Accounts for the Team page, staff and admins first; never a password or a session. */
 export async function listTeam(db: Database, search: string | undefined) {

@@ -1,14 +1,24 @@
-import { spawn } from "node:child_process";
+import { spawn, spawnSync } from "node:child_process";
 import { existsSync } from "node:fs";
 import { createServer } from "node:net";
 import path from "node:path";
 
 export interface RunningServer {
   url: string;
+  /** SIGTERM, and wait for the process to end. */
   stop: () => Promise<void>;
+  /** SIGKILL (`kill -9`): the process ends mid-write, with no chance to flush or close anything. */
+  kill: () => Promise<void>;
 }
 
 export const hasProductionBuild = () => existsSync(path.join(process.cwd(), ".next", "BUILD_ID"));
+
+/** Builds the app when there is no production build yet. */
+export function ensureProductionBuild(): void {
+  if (hasProductionBuild()) return;
+  const build = spawnSync("npm", ["run", "build"], { stdio: "inherit" });
+  if (build.status !== 0) process.exit(build.status ?? 1);
+}
 
 function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {
@@ -36,18 +46,23 @@ async function waitForHealth(url: string, timeoutMs: number): Promise<void> {
 
 /**
  * `next start` on the existing production build, on a free port, over the embedded database in
- * `dataDir`; its process is the server itself, so stopping it leaves nothing behind.
+ * `dataDir`; its process is the server itself, so stopping it leaves nothing behind. `env` adds
+ * settings (limits raised for a load test, say).
  */
-export async function startProductionServer(dataDir: string): Promise<RunningServer> {
+export async function startProductionServer(dataDir: string, env: Record<string, string> = {}): Promise<RunningServer> {
   const port = await freePort();
   const url = `http://localhost:${port}`;
   const server = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-p", String(port)], {
-    env: { ...process.env, PGLITE_DATA_DIR: dataDir, DATABASE_URL: "", DEMO_SEED: "on", BETTER_AUTH_URL: url, NEXT_TELEMETRY_DISABLED: "1" },
+    env: { ...process.env, PGLITE_DATA_DIR: dataDir, DATABASE_URL: "", DEMO_SEED: "on", BETTER_AUTH_URL: url, NEXT_TELEMETRY_DISABLED: "1", ...env },
     stdio: "ignore",
   });
   const exited = new Promise<void>((resolve) => server.once("exit", () => resolve()));
   const stop = async () => {
     server.kill("SIGTERM");
+    await exited;
+  };
+  const kill = async () => {
+    server.kill("SIGKILL");
     await exited;
   };
   try {
@@ -56,5 +71,5 @@ export async function startProductionServer(dataDir: string): Promise<RunningSer
     await stop();
     throw error;
   }
-  return { url, stop };
+  return { url, stop, kill };
 }

@@ -35,4 +35,21 @@ test.describe("accounts", () => {
     await page.goto("/counter");
     await expect(page.getByRole("heading", { level: 1, name: "The Counter is for shop staff" })).toBeVisible();
   });
+
+  test("a new account continues at sign-in, which says the same as it would for a taken address", async ({ page }, testInfo) => {
+    const address = `new.${testInfo.project.name}.${Date.now()}@example.test`;
+    await page.goto("/sign-up?next=/account");
+    await page.getByLabel("Name").fill("Ines Calloway");
+    await page.getByLabel("E-mail").fill(address);
+    await page.getByLabel("Password (at least 8 characters)").fill("my-own-password");
+    await page.getByRole("button", { name: "Create account" }).click();
+    await expect(page).toHaveURL(/\/sign-in\?signedUp=1&next=%2Faccount$/);
+    await expect(page.getByRole("status")).toContainText("If the address was new to us, your account is ready");
+    await expectNoAxeViolations(page);
+    await page.getByLabel("E-mail").fill(address);
+    await page.getByLabel("Password").fill("my-own-password");
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await expect(page).toHaveURL(/\/account$/);
+    await expect(page.getByText(address)).toBeVisible();
+  });
 });

@@ -10,6 +10,7 @@ import { CatalogTable } from "@/components/counter/catalog-table";
 import { CounterRefusal } from "@/components/counter/counter-refusal";
 import { PageIntro } from "@/components/ui/page-intro";
 import { requirePageUser } from "@/lib/auth/page-user";
+import { skuSchema } from "@/lib/catalog/sku";
 import { getCatalogTablePage, readCatalogFilters, catalogQueryString } from "@/lib/counter/catalog-table";
 import { listBrandNames } from "@/lib/finder/queries";
 import { formatInteger } from "@/lib/tire";
@@ -19,9 +20,9 @@ export const metadata: Metadata = { title: "Counter · Catalog", robots: { index
 type SearchParams = Promise<Record<string, string | string[] | undefined>>;
 
 const skuOutcome = z.object({
-  added: z.string().regex(/^[!-~]{1,64}$/).optional().catch(undefined),
-  saved: z.string().regex(/^[!-~]{1,64}$/).optional().catch(undefined),
-  retired: z.string().regex(/^[!-~]{1,64}$/).optional().catch(undefined),
+  added: skuSchema.optional().catch(undefined),
+  saved: skuSchema.optional().catch(undefined),
+  retired: skuSchema.optional().catch(undefined),
 });
 
 export default async function CounterCatalogPage({ searchParams }: { searchParams: SearchParams }) {

@@ -90,10 +90,10 @@ describe("POST /api/v1/catalog/import", () => {
   });
 
   it("answers 400 without a file, with text in its place, or with an unknown mode", async () => {
-    expect((await upload({ mode: "valid-rows" })).body.error).toEqual({ code: "missing_parameter", message: 'The field "file" is required: attach the CSV file.' });
+    expect((await upload({ mode: "valid-rows" })).body.error).toEqual({ code: "missing_parameter", message: 'The field "file" is required: attach the CSV file.', field: "file" });
     expect((await upload({ file: "sku,brand" })).body.error.code).toBe("invalid_parameter");
     const mode = await upload({ file: csvFile(template), mode: "some-rows" });
-    expect(mode).toEqual({ status: 400, body: { error: { code: "invalid_parameter", message: 'The field "mode" is invalid: use all-or-nothing or valid-rows.' } } });
+    expect(mode).toEqual({ status: 400, body: { error: { code: "invalid_parameter", message: 'The field "mode" is invalid: use all-or-nothing or valid-rows.', field: "mode" } } });
     const json = await callRoute(importCatalog, "POST", "/api/v1/catalog/import", { cookie, body: { file: "x" } });
     expect(json.status).toBe(400);
     expect((await json.json()).error.code).toBe("missing_parameter");

@@ -53,11 +53,20 @@ describe.each(testDatabaseKinds)("password reset on %s", (kind) => {
   });
   afterEach(() => vi.restoreAllMocks());
 
-  it("e-mails a link that sets a new password once; the old password and old sessions stop working", async () => {
+  const sessionCookie = async (email: string, password: string) => {
+    const signedIn = await call("POST", "/api/auth/sign-in/email", { email, password });
+    expect(signedIn.status).toBe(200);
+    return signedIn.headers.getSetCookie().map((cookie) => cookie.split(";")[0]).join("; ");
+  };
+  const sessionOf = async (cookie: string) => (await call("GET", "/api/auth/get-session", undefined, cookie)).json();
+
+  it("e-mails a link that sets a new password once; the old password and every session of the account stop working", async () => {
     const address = `mara.oakes.${kind}@example.test`;
     const signUp = await call("POST", "/api/auth/sign-up/email", { name: "Mara Oakes", email: address, password: OLD_PASSWORD });
     expect(signUp.status).toBe(200);
-    const oldSession = signUp.headers.getSetCookie().map((cookie) => cookie.split(";")[0]).join("; ");
+    const [onPhone, onLaptop] = [await sessionCookie(address, OLD_PASSWORD), await sessionCookie(address, OLD_PASSWORD)];
+    expect(await sessionOf(onPhone)).toMatchObject({ user: { email: address } });
+    expect(await sessionOf(onLaptop)).toMatchObject({ user: { email: address } });
 
     const request = await call("POST", "/api/auth/request-password-reset", { email: address, redirectTo: "/reset-password" });
     expect(request.status).toBe(200);
@@ -75,7 +84,8 @@ describe.each(testDatabaseKinds)("password reset on %s", (kind) => {
     expect((await call("POST", "/api/auth/reset-password", { newPassword: NEW_PASSWORD, token })).status).toBe(200);
     expect(await signInStatus(address, NEW_PASSWORD)).toBe(200);
     expect(await signInStatus(address, OLD_PASSWORD)).toBe(401);
-    expect(await (await call("GET", "/api/auth/get-session", undefined, oldSession)).json()).toBeNull();
+    expect(await sessionOf(onPhone)).toBeNull();
+    expect(await sessionOf(onLaptop)).toBeNull();
 
     const reopened = await call("GET", `${linkIn(email!).pathname}${linkIn(email!).search}`);
     expect(new URL(reopened.headers.get("location")!, ORIGIN).searchParams.get("error")).toBe("INVALID_TOKEN");

@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { GET, POST } from "@/app/api/v1/quote-requests/route";
 import { getDatabaseHandle, getDb } from "@/db/client";
 import { quoteRequest } from "@/db/schema";
+import { signFormToken } from "@/lib/quotes/form-token";
 import { type FakeResend, startFakeResend } from "@/scripts/fake-resend.mjs";
 import { APP_ORIGIN, callRoute, signIn } from "../helpers/auth-session";
 
@@ -17,7 +18,7 @@ const request = {
   source: "size-sheet",
   reference: "235/65R17",
   website: "",
-  fillMs: 9000,
+  renderedAt: signFormToken(Date.now() - 9000),
 };
 
 let fake: FakeResend;
@@ -73,18 +74,21 @@ describe("POST /api/v1/quote-requests", () => {
     ["quantity", { quantity: 40 }, "invalid_parameter", 'The field "quantity" is invalid: Choose how many tires, 1 to 16.'],
     ["preferredDay", { preferredDay: "2020-01-01" }, "invalid_parameter", 'The field "preferredDay" is invalid: Pick a day from today to 90 days ahead, or leave it empty.'],
     ["source", { source: "elsewhere" }, "invalid_parameter", 'The field "source" is invalid: The page the request comes from is unknown.'],
-  ])("refuses a wrong %s with 400 naming the field", async (_field, change, code, message) => {
+  ])("refuses a wrong %s with 400 naming the field", async (field, change, code, message) => {
     const { status, body } = await ask({ ...request, ...change });
     expect(status).toBe(400);
-    expect(body).toEqual({ error: { code, message } });
+    expect(body).toEqual({ error: { code, message, field } });
   });
 
-  it("refuses a filled-in hidden field and a form sent within seconds, with the same neutral words, storing nothing", async () => {
+  it("refuses a filled-in hidden field and a form token that is too fresh, too old, forged or missing, with the same neutral words, storing nothing", async () => {
     const before = (await (await getDb()).select({ id: quoteRequest.id }).from(quoteRequest)).length;
     const neutral = { error: { code: "invalid_parameter", message: "The request could not be accepted. Please wait a few seconds, check the form and send it again." } };
     expect(await ask({ ...request, website: "https://spam.example" })).toMatchObject({ status: 400, body: neutral });
-    expect(await ask({ ...request, fillMs: 800 })).toMatchObject({ status: 400, body: neutral });
-    expect(await ask({ ...request, fillMs: undefined })).toMatchObject({ status: 400, body: neutral });
+    expect(await ask({ ...request, renderedAt: signFormToken(Date.now() - 800) })).toMatchObject({ status: 400, body: neutral });
+    expect(await ask({ ...request, renderedAt: signFormToken(Date.now() - 2 * 86_400_000) })).toMatchObject({ status: 400, body: neutral });
+    expect(await ask({ ...request, renderedAt: signFormToken(Date.now() - 9000, "someone-elses-secret-of-32-characters-or-more") })).toMatchObject({ status: 400, body: neutral });
+    expect(await ask({ ...request, renderedAt: String(Date.now() - 9000) })).toMatchObject({ status: 400, body: neutral });
+    expect(await ask({ ...request, renderedAt: undefined })).toMatchObject({ status: 400, body: neutral });
     expect((await (await getDb()).select({ id: quoteRequest.id }).from(quoteRequest)).length).toBe(before);
   });
 
@@ -97,6 +101,13 @@ describe("POST /api/v1/quote-requests", () => {
     expect(refused.body.error.message).toMatch(/^Too many requests were sent from here in a short time\. Please try again in \d+ minutes?, or call the shop\.$/);
     expect(Number(refused.headers.get("retry-after"))).toBeGreaterThan(0);
     expect(Number(refused.headers.get("retry-after"))).toBeLessThanOrEqual(600);
+  });
+
+  it("counts every request from an address against its limit, invalid ones too", async () => {
+    const address = "203.0.113.78";
+    for (let i = 0; i < 4; i++) expect((await ask({ ...request, name: "" }, address)).status).toBe(400);
+    expect((await ask({ ...request, email: "counted@example.test" }, address)).status).toBe(201);
+    expect((await ask({ ...request, email: "counted.again@example.test" }, address)).status).toBe(429);
   });
 
   it("answers 429 after 3 requests for one e-mail address, whatever the address they come from", async () => {

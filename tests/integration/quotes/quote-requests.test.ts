@@ -86,6 +86,21 @@ describe.each(testDatabaseKinds)("quote requests on %s", (kind) => {
     ]);
   });
 
+  it("confirms to one address at most 3 times a day, keeping every request and telling the shop each time", async () => {
+    fake = await useFake();
+    const created = [];
+    for (let i = 0; i < 4; i++) created.push(await createQuoteRequest(database.db, asking({ email: "Target.Inbox@example.test" })));
+    expect(created.map((request) => request.emailed)).toEqual([
+      { shop: true, customer: true },
+      { shop: true, customer: true },
+      { shop: true, customer: true },
+      { shop: true, customer: false },
+    ]);
+    expect(fake.received().filter((email) => email.to === "Target.Inbox@example.test")).toHaveLength(3);
+    expect(fake.received().filter((email) => email.to === shopRow.email)).toHaveLength(4);
+    expect(await database.db.select({ id: quoteRequest.id }).from(quoteRequest)).toHaveLength(4);
+  });
+
   it("keeps the request when the e-mail service refuses, and records the failures", async () => {
     fake = await useFake({ failWith: { statusCode: 500, name: "application_error", message: "The service is down." } });
     const created = await createQuoteRequest(database.db, asking());

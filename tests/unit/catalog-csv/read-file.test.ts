@@ -68,7 +68,7 @@ describe("readCatalogCsv", () => {
 
   it("reads back what the export writes, formula-like cells included", () => {
     const items: CatalogCsvItem[] = [
-      { sku: "=SUM(A1)", brand: "Quensal", line: "Aldermoor, Tour", designation: "225/65R17", loadIndex: 102, loadIndexDual: null, speedSymbol: "H", loadRange: null, extraLoad: false, priceCents: 15_999, quantity: 0 },
+      { sku: "QNS-1", brand: "=SUM(A1)", line: "Aldermoor, Tour", designation: "225/65R17", loadIndex: 102, loadIndexDual: null, speedSymbol: "H", loadRange: null, extraLoad: false, priceCents: 15_999, quantity: 0 },
       { sku: "-LT1", brand: "Pellwick", line: 'Lorrimer "AT"', designation: "LT265/75R16", loadIndex: 123, loadIndexDual: 120, speedSymbol: "R", loadRange: "E", extraLoad: false, priceCents: 24_900, quantity: 4 },
       { sku: "VLM-1", brand: "Velmora", line: "Estrelle GT", designation: "225/45ZR17", loadIndex: 94, loadIndexDual: null, speedSymbol: "(Y)", loadRange: null, extraLoad: true, priceCents: 5, quantity: 12 },
     ];

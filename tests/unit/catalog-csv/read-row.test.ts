@@ -47,8 +47,8 @@ describe("readCsvRow", () => {
   });
 
   it("takes off the apostrophe the export puts before a cell that starts like a formula", () => {
-    const read = readCsvRow({ ...passenger, sku: "'=QNS-1", brand: "'@Quensal" }, 2);
-    expect(read.ok && [read.row.item.sku, read.row.brand]).toEqual(["=QNS-1", "@Quensal"]);
+    const read = readCsvRow({ ...passenger, sku: "'-QNS-1", brand: "'@Quensal" }, 2);
+    expect(read.ok && [read.row.item.sku, read.row.brand]).toEqual(["-QNS-1", "@Quensal"]);
   });
 
   it("names every empty required cell on the row's line", () => {
@@ -58,7 +58,11 @@ describe("readCsvRow", () => {
   });
 
   it("refuses each malformed cell with what was wrong and an example", () => {
-    expect(reasonFor({ sku: "QNS 1" })).toEqual(['sku: SKU "QNS 1" must be 1–64 letters, digits or punctuation, without spaces']);
+    const rule = 'a SKU is 1–64 letters, digits, dots, hyphens or underscores (not "." or ".." alone, and not "new")';
+    expect(reasonFor({ sku: "QNS 1" })).toEqual([`sku: SKU "QNS 1" breaks the rule: ${rule}`]);
+    expect(reasonFor({ sku: "QNS/1" })).toEqual([`sku: SKU "QNS/1" breaks the rule: ${rule}`]);
+    expect(reasonFor({ sku: "New" })).toEqual([`sku: SKU "New" breaks the rule: ${rule}`]);
+    expect(reasonFor({ brand: "Quen\u0000sal" })).toEqual(["brand: brand holds a control character (such as NUL); type the name again"]);
     expect(reasonFor({ brand: "B".repeat(101) })).toEqual(["brand: brand is longer than 100 characters"]);
     expect(reasonFor({ line: "L".repeat(101) })).toEqual(["line: line is longer than 100 characters"]);
     expect(reasonFor({ load_index: "10a" })).toEqual(['load_index: load index "10a" is not a whole number such as 102']);

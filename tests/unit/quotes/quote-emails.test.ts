@@ -33,13 +33,15 @@ describe("quote e-mails", () => {
     expect(email.text).toContain("https://shop.test/counter/requests/42");
   });
 
-  it("confirm to the driver what they sent, what happens next, and how to reach the shop", () => {
-    const email = requestConfirmationEmail(request, shop);
-    expect(email.text).toContain("Marrowby Tire Works has your request and will answer by e-mail");
-    expect(email.text).toContain("Tires: 235/65R17 104H");
+  it("confirm to the driver that the shop has the request and how to reach it, with nothing the sender typed", () => {
+    const typed = { ...request, name: "Visit https://elsewhere.example now", vehicle: "Call 555-0199 <b>today</b>", tires: "Free prize: reply with your password" };
+    const email = requestConfirmationEmail(typed, shop);
+    expect(email.text).toContain("Marrowby Tire Works has your request #42 for a price on 4 tires, fitted on 2026-12-10 if you book");
     expect(email.text).toContain("Phone (555) 010-4477 · counter@marrowby-tire.test");
-    expect(email.html).toContain("Hello Rosa &lt;Iverley&gt;,");
-    expect(email.html).not.toContain("<Iverley>");
+    expect(email.text).toContain("If you did not ask for a price, ignore this e-mail");
+    for (const part of [email.subject, email.text, email.html]) {
+      expect(part).not.toMatch(/elsewhere|555-0199|today|prize|password/);
+    }
   });
 
   it("carry a staff reply with its line breaks and the shop's contact, and nothing internal", () => {

@@ -8,16 +8,17 @@ afterEach(() => {
   vi.unstubAllGlobals();
 });
 
-function renderForm() {
-  render(<QuoteForm context={{ source: "size-sheet", reference: "235/65R17" }} tires="235/65R17" onCancel={() => undefined} />);
+/** Renders the form and lets it fetch its signed opening time. */
+async function renderForm() {
+  await act(async () => {
+    render(<QuoteForm context={{ source: "size-sheet", reference: "235/65R17" }} tires="235/65R17" onCancel={() => undefined} />);
+  });
 }
 
 function fillIn() {
   fireEvent.change(screen.getByLabelText("Your name"), { target: { value: "Rosa Iverley" } });
   fireEvent.change(screen.getByLabelText("E-mail (the answer goes here)"), { target: { value: "rosa@example.test" } });
   fireEvent.change(screen.getByLabelText("Vehicle"), { target: { value: "2019 family SUV" } });
-  const renderedAt = document.querySelector<HTMLInputElement>('input[name="renderedAt"]')!;
-  renderedAt.value = String(Date.now() - 15_000);
 }
 
 async function send() {
@@ -26,16 +27,21 @@ async function send() {
   });
 }
 
+const json = (status: number, body: unknown) => new Response(JSON.stringify(body), { status, headers: { "content-type": "application/json" } });
+
+/** The server: a signed opening time for the form, then this answer to the request. */
 function answer(status: number, body: unknown) {
-  const fetchMock = vi.fn(async () => new Response(JSON.stringify(body), { status, headers: { "content-type": "application/json" } }));
+  const fetchMock = vi.fn(async (url: string) => (url.endsWith("/form-token") ? json(200, { renderedAt: "1800000000000.signed" }) : json(status, body)));
   vi.stubGlobal("fetch", fetchMock);
   return fetchMock;
 }
 
+const sends = (fetchMock: ReturnType<typeof answer>) => fetchMock.mock.calls.filter(([url]) => url === "/api/v1/quote-requests");
+
 describe("the Ask the shop form", () => {
   it("marks each wrong field, reads its message with it, and puts the focus on the first", async () => {
     const fetchMock = answer(201, { id: 1, status: "new" });
-    renderForm();
+    await renderForm();
     fireEvent.change(screen.getByLabelText("E-mail (the answer goes here)"), { target: { value: "rosa.example.test" } });
     await send();
     const name = screen.getByLabelText("Your name");
@@ -44,26 +50,27 @@ describe("the Ask the shop form", () => {
     const email = screen.getByLabelText("E-mail (the answer goes here)");
     expect(document.getElementById(email.getAttribute("aria-describedby")!)?.textContent).toBe("Check the e-mail address: it should look like name@example.com");
     expect(screen.getByLabelText("Phone (optional)").getAttribute("aria-invalid")).toBeNull();
-    expect(fetchMock).not.toHaveBeenCalled();
+    expect(sends(fetchMock)).toHaveLength(0);
   });
 
-  it("keeps the spam trap out of reach: out of the tab order, not autofilled, and labelled to stay empty", () => {
-    renderForm();
+  it("keeps the spam trap out of reach: out of the tab order, not autofilled, and labelled to stay empty", async () => {
+    answer(201, { id: 1, status: "new" });
+    await renderForm();
     const trap = screen.getByLabelText("Leave this field empty: it is only here to catch automated spam");
     expect(trap.getAttribute("tabindex")).toBe("-1");
     expect(trap.getAttribute("autocomplete")).toBe("off");
     expect(trap.closest(".sr-only")).not.toBeNull();
   });
 
-  it("sends the request with the page's source and how long the form was open, then says what happens next", async () => {
+  it("sends the request with the page's source and the signed time the form opened, then says what happens next", async () => {
     const fetchMock = answer(201, { id: 17, status: "new" });
-    renderForm();
+    await renderForm();
     fillIn();
     await send();
-    const [, init] = fetchMock.mock.calls[0] as unknown as [string, RequestInit];
+    const [, init] = sends(fetchMock)[0] as unknown as [string, RequestInit];
     const body = JSON.parse(String(init.body));
     expect(body).toMatchObject({ source: "size-sheet", reference: "235/65R17", tires: "235/65R17", quantity: 4, website: "" });
-    expect(body.fillMs).toBeGreaterThanOrEqual(15_000);
+    expect(body.renderedAt).toBe("1800000000000.signed");
     expect(screen.getByRole("status").textContent).toContain("Your request is with the shop (number 17).");
     expect(screen.getByRole("status").textContent).toContain("A confirmation is on its way to rosa@example.test.");
   });
@@ -71,7 +78,7 @@ describe("the Ask the shop form", () => {
   it("shows the server's refusal in plain words when too many requests were sent", async () => {
     const message = "Too many requests were sent from here in a short time. Please try again in 10 minutes, or call the shop.";
     answer(429, { error: { code: "rate_limited", message } });
-    renderForm();
+    await renderForm();
     fillIn();
     await send();
     const alert = screen.getByRole("alert");

@@ -1,5 +1,6 @@
 import { afterEach, describe, expect, it, vi } from "vitest";
-import { MIN_FILL_MS, quoteFieldErrors, quoteRequestSchema, spamVerdict } from "@/lib/quotes/quote-input";
+import { MAX_FORM_AGE_MS, signFormToken, spamVerdict } from "@/lib/quotes/form-token";
+import { MIN_FILL_MS, quoteFieldErrors, quoteRequestSchema } from "@/lib/quotes/quote-input";
 
 const valid = {
   name: "Rosa Iverley",
@@ -66,18 +67,31 @@ describe("the request schema", () => {
 });
 
 describe("spam resistance", () => {
-  it("lets a person through who took a few seconds and left the hidden field empty", () => {
-    expect(spamVerdict({ website: "", fillMs: 12_000 })).toEqual({ ok: true });
-    expect(spamVerdict({ website: "   ", fillMs: MIN_FILL_MS })).toEqual({ ok: true });
+  const secret = "a-test-secret-of-at-least-thirty-two-characters";
+  const now = 1_800_000_000_000;
+  const verdict = (input: { website?: string; renderedAt?: string }) => spamVerdict(input, now, secret);
+
+  it("lets a person through whose form the server opened a few seconds ago, hidden field left empty", () => {
+    expect(verdict({ website: "", renderedAt: signFormToken(now - 12_000, secret) })).toEqual({ ok: true });
+    expect(verdict({ website: "   ", renderedAt: signFormToken(now - MIN_FILL_MS, secret) })).toEqual({ ok: true });
+    expect(verdict({ renderedAt: signFormToken(now - MAX_FORM_AGE_MS, secret) })).toEqual({ ok: true });
   });
 
   it("refuses a filled-in hidden field", () => {
-    expect(spamVerdict({ website: "http://cheap-pills.example", fillMs: 20_000 })).toEqual({ ok: false, reason: "honeypot" });
+    expect(verdict({ website: "http://cheap-pills.example", renderedAt: signFormToken(now - 20_000, secret) })).toEqual({ ok: false, reason: "honeypot" });
   });
 
-  it("refuses a form sent faster than a person can fill it, or without its fill time", () => {
-    expect(spamVerdict({ website: "", fillMs: MIN_FILL_MS - 1 })).toEqual({ ok: false, reason: "too_fast" });
-    expect(spamVerdict({ website: "", fillMs: 250 })).toEqual({ ok: false, reason: "too_fast" });
-    expect(spamVerdict({})).toEqual({ ok: false, reason: "too_fast" });
+  it("refuses a form sent within 3 s of opening, or opened over a day ago", () => {
+    expect(verdict({ renderedAt: signFormToken(now - MIN_FILL_MS + 1, secret) })).toEqual({ ok: false, reason: "too_young" });
+    expect(verdict({ renderedAt: signFormToken(now + 60_000, secret) })).toEqual({ ok: false, reason: "too_young" });
+    expect(verdict({ renderedAt: signFormToken(now - MAX_FORM_AGE_MS - 1, secret) })).toEqual({ ok: false, reason: "too_old" });
+  });
+
+  it("refuses a time the server did not sign: missing, typed by the client, or signed with another secret", () => {
+    const genuine = signFormToken(now - 20_000, secret);
+    expect(verdict({})).toEqual({ ok: false, reason: "not_signed" });
+    expect(verdict({ renderedAt: String(now - 20_000) })).toEqual({ ok: false, reason: "not_signed" });
+    expect(verdict({ renderedAt: genuine.replace(/^\d+/, String(now - 40_000)) })).toEqual({ ok: false, reason: "not_signed" });
+    expect(verdict({ renderedAt: signFormToken(now - 20_000, "another-secret-of-at-least-thirty-two-chars") })).toEqual({ ok: false, reason: "not_signed" });
   });
 });

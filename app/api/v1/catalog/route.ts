@@ -1,7 +1,5 @@
-import { connection, NextResponse, type NextRequest } from "next/server";
-import { getDb } from "@/db/client";
+import { NextResponse } from "next/server";
 import { apiError } from "@/lib/api/errors";
-import { parseQuery } from "@/lib/api/query";
 import { withRoute } from "@/lib/auth/guard";
 import { catalogQuerySchema, DEFAULT_PAGE_SIZE } from "@/lib/catalog/api-queries";
 import { listCatalog } from "@/lib/catalog/catalog-page";
@@ -9,17 +7,14 @@ import { decodeCatalogCursor } from "@/lib/catalog/cursor";
 import { newStockItemSchema } from "@/lib/catalog/stock-edit";
 import { createStockItem } from "@/lib/catalog/stock-writes";
 
-export async function GET(request: NextRequest) {
-  await connection();
-  const query = parseQuery(request.nextUrl, catalogQuerySchema);
-  if (!query.ok) return query.response;
-  const afterSku = query.value.cursor === undefined ? null : decodeCatalogCursor(query.value.cursor);
-  if (query.value.cursor !== undefined && afterSku === null) {
-    return apiError("invalid_parameter", 'The parameter "cursor" is invalid: use the nextCursor of a previous page.');
+/** Public: the current catalog in plain SKU order, a page at a time. */
+export const GET = withRoute({ role: "public", query: catalogQuerySchema }, async ({ db, query }) => {
+  const afterSku = query.cursor === undefined ? null : decodeCatalogCursor(query.cursor);
+  if (query.cursor !== undefined && afterSku === null) {
+    return apiError("invalid_parameter", 'The parameter "cursor" is invalid: use the nextCursor of a previous page.', undefined, "cursor");
   }
-  const page = await listCatalog(await getDb(), { afterSku, limit: query.value.limit ?? DEFAULT_PAGE_SIZE });
-  return NextResponse.json(page);
-}
+  return NextResponse.json(await listCatalog(db, { afterSku, limit: query.limit ?? DEFAULT_PAGE_SIZE }));
+});
 
 /** Staff add a stock item to a line the catalog already has → 201 Tire. */
 export const POST = withRoute({ role: "staff", body: newStockItemSchema }, async ({ db, user, body }) => {

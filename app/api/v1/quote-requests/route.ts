@@ -1,13 +1,11 @@
-import { connection, NextResponse, type NextRequest } from "next/server";
-import { getDb } from "@/db/client";
-import { parseJsonBody } from "@/lib/api/body";
+import { NextResponse } from "next/server";
 import { apiError } from "@/lib/api/errors";
 import { withRoute } from "@/lib/auth/guard";
 import { createQuoteRequest } from "@/lib/quotes/create-request";
+import { spamVerdict } from "@/lib/quotes/form-token";
 import { listQuoteRequests, requestListApiQuerySchema } from "@/lib/quotes/queries";
-import { HONEYPOT_FIELD, quoteRequestSchema, SPAM_REFUSAL_MESSAGE, spamVerdict } from "@/lib/quotes/quote-input";
+import { HONEYPOT_FIELD, quoteRequestSchema, SPAM_REFUSAL_MESSAGE } from "@/lib/quotes/quote-input";
 import { hitAddressLimit, hitEmailLimit } from "@/lib/quotes/request-limits";
-import { clientAddress } from "@/lib/rate-limit/rate-limit";
 
 function tooMany(retryAfterSeconds: number) {
   const minutes = Math.ceil(retryAfterSeconds / 60);
@@ -19,26 +17,30 @@ function tooMany(retryAfterSeconds: number) {
 }
 
 /**
- * "Ask the shop", public: 201 { id, status: "new" }. Limited per client address and per e-mail
- * address (429 with Retry-After); a filled-in hidden field or a form sent within seconds → 400.
+ * "Ask the shop", public: 201 { id, status: "new" }. Every request counts against its client address,
+ * valid or not, and valid ones against their e-mail address (429 with Retry-After); a filled-in
+ * hidden field, or a form token that is missing, forged, under 3 s or over a day old → neutral 400.
  */
-export async function POST(request: NextRequest): Promise<Response> {
-  await connection();
-  const db = await getDb();
-  const byAddress = await hitAddressLimit(db, clientAddress(request.headers));
-  if (!byAddress.allowed) return tooMany(byAddress.retryAfterSeconds);
+export const POST = withRoute(
+  {
+    role: "public",
+    body: quoteRequestSchema,
+    limitByAddress: async (db, address) => {
+      const verdict = await hitAddressLimit(db, address);
+      return verdict.allowed ? null : tooMany(verdict.retryAfterSeconds);
+    },
+  },
+  async ({ db, body }) => {
+    const { [HONEYPOT_FIELD]: honeypot, renderedAt, ...input } = body;
+    if (!spamVerdict({ [HONEYPOT_FIELD]: honeypot, renderedAt }).ok) return apiError("invalid_parameter", SPAM_REFUSAL_MESSAGE);
 
-  const parsed = await parseJsonBody(request, quoteRequestSchema);
-  if (!parsed.ok) return parsed.response;
-  const { [HONEYPOT_FIELD]: honeypot, fillMs, ...input } = parsed.value;
-  if (!spamVerdict({ [HONEYPOT_FIELD]: honeypot, fillMs }).ok) return apiError("invalid_parameter", SPAM_REFUSAL_MESSAGE);
+    const byEmail = await hitEmailLimit(db, input.email);
+    if (!byEmail.allowed) return tooMany(byEmail.retryAfterSeconds);
 
-  const byEmail = await hitEmailLimit(db, input.email);
-  if (!byEmail.allowed) return tooMany(byEmail.retryAfterSeconds);
-
-  const created = await createQuoteRequest(db, input);
-  return NextResponse.json({ id: created.id, status: created.status }, { status: 201 });
-}
+    const created = await createQuoteRequest(db, input);
+    return NextResponse.json({ id: created.id, status: created.status }, { status: 201 });
+  },
+);
 
 /**
  * Staff: `?status=new|answered|closed&page=N` → { requests, counts, total, page, pageCount },

@@ -1,5 +1,6 @@
 import { NextResponse } from "next/server";
 import { z } from "zod";
+import { readBodyBytes } from "@/lib/api/body";
 import { apiError } from "@/lib/api/errors";
 import { withRoute } from "@/lib/auth/guard";
 import { importCatalogCsv } from "@/lib/catalog-csv/import";
@@ -13,22 +14,24 @@ const tooLarge = () => apiError("too_large", `The file is larger than ${MAX_IMPO
 
 /** Staff import a catalog CSV (multipart/form-data, field "file", optional "mode") → 200 with what was added, updated and refused. */
 export const POST = withRoute({ role: "staff" }, async ({ request, db, user }) => {
-  if (Number(request.headers.get("content-length") ?? 0) > MAX_IMPORT_BYTES + MULTIPART_ALLOWANCE_BYTES) return tooLarge();
-  if (!request.headers.get("content-type")?.toLowerCase().startsWith("multipart/form-data")) {
-    return apiError("missing_parameter", 'The field "file" is required: send the CSV as multipart/form-data.');
+  const contentType = request.headers.get("content-type") ?? "";
+  if (!contentType.toLowerCase().startsWith("multipart/form-data")) {
+    return apiError("missing_parameter", 'The field "file" is required: send the CSV as multipart/form-data.', undefined, "file");
   }
+  const read = await readBodyBytes(request, MAX_IMPORT_BYTES + MULTIPART_ALLOWANCE_BYTES);
+  if (!read.ok) return tooLarge();
   let form: FormData;
   try {
-    form = await request.formData();
+    form = await new Response(read.bytes, { headers: { "content-type": contentType } }).formData();
   } catch {
     return apiError("invalid_parameter", "The body is not readable multipart/form-data: send the CSV in the field \"file\".");
   }
   const file = form.get("file");
-  if (file === null) return apiError("missing_parameter", 'The field "file" is required: attach the CSV file.');
-  if (typeof file === "string") return apiError("invalid_parameter", 'The field "file" is invalid: attach a file, not text.');
+  if (file === null) return apiError("missing_parameter", 'The field "file" is required: attach the CSV file.', undefined, "file");
+  if (typeof file === "string") return apiError("invalid_parameter", 'The field "file" is invalid: attach a file, not text.', undefined, "file");
   if (file.size > MAX_IMPORT_BYTES) return tooLarge();
   const mode = modeSchema.safeParse(form.get("mode") ?? undefined);
-  if (!mode.success) return apiError("invalid_parameter", `The field "mode" is invalid: use ${IMPORT_MODES.join(" or ")}.`);
+  if (!mode.success) return apiError("invalid_parameter", `The field "mode" is invalid: use ${IMPORT_MODES.join(" or ")}.`, undefined, "mode");
   const notCsv = notCsvFileMessage(file);
   if (notCsv) return apiError("unreadable", notCsv);
 

@@ -1,0 +1,85 @@
+/**
+ * Every route handler and server action of the app, with what each kind of caller gets: the one
+ * list the authorization matrix (tests/security/authorization-matrix.test.ts) and the walk of
+ * malformed requests over HTTP (tests/security/route-walk.spec.ts) both read.
+ */
+export type Who = "anonymous" | "customer" | "staff" | "admin";
+export const CALLERS: readonly Who[] = ["anonymous", "customer", "staff", "admin"];
+
+/** Handlers anyone may call, per route file and method; the auth library's own endpoints check their own requests. */
+export const PUBLIC_HANDLERS = [
+  "auth/[...all]/route.ts#GET",
+  "auth/[...all]/route.ts#POST",
+  "health/route.ts#GET",
+  "v1/alternatives/route.ts#GET",
+  "v1/catalog/route.ts#GET",
+  "v1/compare/route.ts#GET",
+  "v1/decode/route.ts#GET",
+  "v1/fit-cards/[slug]/route.ts#GET",
+  "v1/plus/route.ts#GET",
+  "v1/quote-requests/form-token/route.ts#GET",
+  "v1/quote-requests/route.ts#POST",
+];
+
+/** Every method a route file can answer; Next.js answers 405 for one the file does not export. */
+export const HTTP_METHODS = ["GET", "HEAD", "POST", "PUT", "PATCH", "DELETE", "OPTIONS"] as const;
+
+/**
+ * Every protected handler, called so that nothing changes once authorization passes (an invalid
+ * body, an unknown SKU): the status an allowed caller gets shows the request went past the guard.
+ */
+export const MATRIX: { file: string; method: string; path: string; body?: unknown; params?: Record<string, string>; expected: Record<Who, number> }[] = [
+  { file: "v1/fit-cards/route.ts", method: "POST", path: "/api/v1/fit-cards", body: {}, expected: { anonymous: 401, customer: 400, staff: 400, admin: 400 } },
+  {
+    file: "v1/fit-cards/[slug]/route.ts", method: "DELETE", path: `/api/v1/fit-cards/${"N".repeat(24)}`, params: { slug: "N".repeat(24) },
+    expected: { anonymous: 401, customer: 404, staff: 404, admin: 404 },
+  },
+  {
+    file: "v1/fit-cards/[slug]/email/route.ts", method: "POST", path: `/api/v1/fit-cards/${"N".repeat(24)}/email`, params: { slug: "N".repeat(24) },
+    body: { to: "nobody@example.test" }, expected: { anonymous: 401, customer: 403, staff: 404, admin: 404 },
+  },
+  { file: "v1/catalog/route.ts", method: "POST", path: "/api/v1/catalog", body: {}, expected: { anonymous: 401, customer: 403, staff: 400, admin: 400 } },
+  {
+    file: "v1/catalog/[sku]/route.ts", method: "PATCH", path: "/api/v1/catalog/NO-SUCH-SKU", params: { sku: "NO-SUCH-SKU" }, body: { priceCents: 100 },
+    expected: { anonymous: 401, customer: 403, staff: 404, admin: 404 },
+  },
+  {
+    file: "v1/catalog/[sku]/route.ts", method: "DELETE", path: "/api/v1/catalog/NO-SUCH-SKU", params: { sku: "NO-SUCH-SKU" },
+    expected: { anonymous: 401, customer: 403, staff: 404, admin: 404 },
+  },
+  { file: "v1/catalog/import/route.ts", method: "POST", path: "/api/v1/catalog/import", expected: { anonymous: 401, customer: 403, staff: 400, admin: 400 } },
+  { file: "v1/catalog/export/route.ts", method: "GET", path: "/api/v1/catalog/export", expected: { anonymous: 401, customer: 403, staff: 200, admin: 200 } },
+  { file: "v1/quote-requests/route.ts", method: "GET", path: "/api/v1/quote-requests", expected: { anonymous: 401, customer: 403, staff: 200, admin: 200 } },
+];
+
+/**
+ * Every server action, called with input that changes nothing once authorization passes; the
+ * status it answers uses the API's numbers.
+ */
+export const ACTION_MATRIX: { file: string; action: string; input: unknown; expected: Record<Who, number> }[] = [
+  {
+    file: "lib/team/actions.ts", action: "changeRole", input: { userId: "no-such-account", role: "staff" },
+    expected: { anonymous: 401, customer: 403, staff: 403, admin: 404 },
+  },
+  { file: "lib/quotes/actions.ts", action: "setQuoteStatus", input: { id: 999_999, status: "closed" }, expected: { anonymous: 401, customer: 403, staff: 404, admin: 404 } },
+  { file: "lib/quotes/actions.ts", action: "sendQuoteReply", input: { id: 999_999, body: "Hello" }, expected: { anonymous: 401, customer: 403, staff: 404, admin: 404 } },
+];
+
+
+/**
+ * Every Counter page, with an address to open it at and the least role that sees it: anyone signed
+ * out is sent to sign in, a signed-in account without the role gets the refusal in its place.
+ * `{sku}` stands for an item the catalog holds.
+ */
+export const COUNTER_PAGES: { file: string; path: string; role: "staff" | "admin" }[] = [
+  { file: "(catalog)/page.tsx", path: "/counter", role: "staff" },
+  { file: "audit/page.tsx", path: "/counter/audit", role: "admin" },
+  { file: "cards/page.tsx", path: "/counter/cards", role: "staff" },
+  { file: "import/page.tsx", path: "/counter/import", role: "staff" },
+  { file: "items/[sku]/page.tsx", path: "/counter/items/{sku}", role: "staff" },
+  { file: "items/new/page.tsx", path: "/counter/items/new", role: "staff" },
+  { file: "outbox/page.tsx", path: "/counter/outbox", role: "staff" },
+  { file: "requests/(inbox)/page.tsx", path: "/counter/requests", role: "staff" },
+  { file: "requests/[id]/page.tsx", path: "/counter/requests/1", role: "staff" },
+  { file: "team/page.tsx", path: "/counter/team", role: "admin" },
+];
