@@ -6,7 +6,7 @@ import { PlusGroups } from "@/components/plus/plus-groups";
 import { PlusPicks, PlusSaveCard } from "@/components/plus/plus-picks";
 import { PageIntro } from "@/components/ui/page-intro";
 import { SafetyCautions } from "@/components/ui/safety-cautions";
-import { readShopTolerance } from "@/lib/catalog/shop-tolerance";
+import { readShopTolerance } from "@/lib/shop/tolerance";
 import { answerPlus, plusQuerySchema } from "@/lib/plus/plus-request";
 
 export const metadata: Metadata = {

@@ -6,7 +6,7 @@ import { StartForm } from "@/components/finder/start-form";
 import { PageIntro } from "@/components/ui/page-intro";
 import { SafetyCautions } from "@/components/ui/safety-cautions";
 import { readFinderQuery } from "@/lib/finder/finder-query";
-import { readShopTolerance } from "@/lib/catalog/shop-tolerance";
+import { readShopTolerance } from "@/lib/shop/tolerance";
 import { listBrandNames } from "@/lib/finder/queries";
 
 export const metadata: Metadata = {

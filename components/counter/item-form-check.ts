@@ -1,5 +1,5 @@
-import type { NewStockItemBody } from "@/lib/catalog/stock-edit";
-import { buildStockRow } from "@/lib/catalog/stock-row";
+import type { NewStockItemBody } from "@/lib/stock/item-bodies";
+import { buildStockRow } from "@/lib/stock/build-stock-row";
 import { parseDollars, parseWholeNumber, type ItemField, type ItemFormErrors, type ItemFormValues } from "./item-form-values";
 
 export type ItemFormCheck = { ok: true; body: NewStockItemBody } | { ok: false; errors: ItemFormErrors };

@@ -1,9 +1,9 @@
 "use client";
 
-import { type FinderQuery, finderSorts } from "@/lib/finder/finder-query";
-import { SEASONS, TERRAINS } from "@/lib/tire";
+import type { FinderQuery } from "@/lib/finder/finder-query";
+import { FINDER_SORTS, SEASONS, TERRAINS } from "@/lib/tire";
 
-const sortLabels: Record<(typeof finderSorts)[number], string> = {
+const sortLabels: Record<(typeof FINDER_SORTS)[number], string> = {
   diameter: "Closest diameter",
   price: "Lowest price",
   loadMargin: "Most load to spare",
@@ -32,7 +32,7 @@ export function FinderFilters({ query, brands, defaultTolerancePct, onChange }: 
       <label className="flex flex-col gap-1">
         Sort by
         <select className={select} value={query.sort ?? "diameter"} onChange={(event) => onChange({ sort: event.target.value as FinderQuery["sort"] })}>
-          {finderSorts.map((sort) => (
+          {FINDER_SORTS.map((sort) => (
             <option key={sort} value={sort}>
               {sortLabels[sort]}
             </option>

@@ -13,7 +13,7 @@ import {
   unique,
 } from "drizzle-orm/pg-core";
 
-import { SEASONS, TERRAINS } from "../../lib/tire/vocabulary";
+import { SEASONS, SKU_CHARACTERS, SKU_MAX_LENGTH, TERRAINS } from "../../lib/tire/vocabulary";
 
 export { SEASONS, TERRAINS };
 export const SERVICE_TYPES = ["passenger", "LT", "C", "ST", "T"] as const;
@@ -184,7 +184,10 @@ export const stockItem = pgTable(
       .where(sql`not ${table.retired}`),
     index("stock_item_line").on(table.lineId),
     // Characters that survive a URL path as they are (lib/catalog/sku.ts), in the same plain order everywhere.
-    check("stock_item_sku_shape", sql`${table.sku} ~ '^[A-Za-z0-9._-]{1,64}$' and ${table.sku} not in ('.', '..') and lower(${table.sku}) <> 'new'`),
+    check(
+      "stock_item_sku_shape",
+      sql`${table.sku} ~ ${sql.raw(`'^[${SKU_CHARACTERS}]{1,${SKU_MAX_LENGTH}}$'`)} and ${table.sku} not in ('.', '..') and lower(${table.sku}) <> 'new'`,
+    ),
     check("stock_item_designation", sql`length(${table.designation}) between 1 and 40`),
     check("stock_item_size_kind", sql`${table.sizeKind} in ${oneOf(SIZE_KINDS)}`),
     check("stock_item_prefix", sql`${table.prefix} in ${oneOf(SIZE_PREFIXES)}`),

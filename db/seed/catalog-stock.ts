@@ -1,4 +1,4 @@
-import type { StockItemInput } from "@/lib/catalog/stock-row";
+import type { StockItemInput } from "@/lib/stock/build-stock-row";
 import { sizeFromSlug } from "@/lib/tire";
 import { CATEGORY_TRAITS, DEMO_BRANDS, type LineCategory } from "./catalog-lines";
 import { GROUPS_BY_CATEGORY, SIZE_OFFERS, speedSymbolsFor, type SizeOffer } from "./catalog-sizes";

@@ -1,8 +1,8 @@
 import { sql } from "drizzle-orm";
 import type { Database } from "../client";
 import { brand, stockFitment, stockItem, tireLine, type NewTireLine } from "../schema";
-import { buildStockRow } from "@/lib/catalog/stock-row";
-import { insertStockRows } from "@/lib/catalog/write-stock";
+import { buildStockRow } from "@/lib/stock/build-stock-row";
+import { insertStockRows } from "@/lib/stock/insert-stock-rows";
 import { CATEGORY_TRAITS, DEMO_BRANDS, type LineCategory } from "./catalog-lines";
 import { generateStock, type CatalogPlan } from "./catalog-stock";
 

@@ -1,7 +1,7 @@
 import { sql } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { brand, stockItem, tireLine } from "@/db/schema";
-import { ofBrand, ofLine, staffItemColumns } from "@/lib/catalog/catalog-select";
+import { ofBrand, ofLine, staffItemColumns } from "@/lib/catalog/columns";
 import { catalogFilterWhere, type CatalogFilters } from "@/lib/counter/catalog-filters";
 import { writeCatalogCsv } from "./write-file";
 

@@ -1,8 +1,8 @@
 import { inArray, sql } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { brand, stockItem, tireLine, type NewStockItem } from "@/db/schema";
-import { ofBrand } from "@/lib/catalog/catalog-select";
-import type { StockLine } from "@/lib/catalog/stock-row";
+import { ofBrand } from "@/lib/catalog/columns";
+import type { StockLine } from "@/lib/stock/build-stock-row";
 import type { CsvRefusal } from "./columns";
 import { onLine, type CatalogCsvRow } from "./read-row";
 

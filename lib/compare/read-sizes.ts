@@ -1,4 +1,4 @@
-import { hasNominalDiameter, noDiameterMessage, sizeFromSlug, type MeasurableSize } from "@/lib/tire";
+import { hasNominalDiameter, noDiameterMessage, notASizeMessage, sizeFromSlug, type MeasurableSize } from "@/lib/tire";
 
 export const MAX_COMPARED_SIZES = 4;
 
@@ -18,7 +18,7 @@ export function readSizeList(text: string, min: number): SizeListResult {
   const sizes: MeasurableSize[] = [];
   for (const part of parts) {
     const size = sizeFromSlug(part);
-    if (!size) return { ok: false, code: "unreadable", message: `"${part.slice(0, 40)}" is not a tire size this app can read (try the form 285/50R20).` };
+    if (!size) return { ok: false, code: "unreadable", message: notASizeMessage(part) };
     if (!hasNominalDiameter(size)) return { ok: false, code: "unreadable", message: noDiameterMessage(size) };
     sizes.push(size);
   }

@@ -1,7 +1,7 @@
 import { count } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { brand, stockItem, tireLine } from "@/db/schema";
-import { ofBrand, ofLine, staffItemColumns } from "@/lib/catalog/catalog-select";
+import { ofBrand, ofLine, staffItemColumns } from "@/lib/catalog/columns";
 import { catalogFilterWhere, catalogFiltersSchema, catalogOrderBy, type CatalogFilters } from "./catalog-filters";
 
 export const CATALOG_TABLE_PAGE_SIZE = 50;

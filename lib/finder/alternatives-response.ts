@@ -1,5 +1,5 @@
 // The finder page reads the public API's body; its types are the engine's own.
-export type { Alternative as Candidate, Alternatives as AlternativesResponse, NearMiss } from "@/lib/catalog/alternatives";
+export type { Alternative as Candidate, Alternatives as AlternativesResponse, NearMiss } from "@/lib/alternatives/find-alternatives";
 
 export interface ApiErrorBody {
   error: { code: string; message: string };

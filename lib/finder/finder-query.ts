@@ -1,8 +1,7 @@
 import { z } from "zod";
-import { SEASONS, TERRAINS } from "@/lib/tire";
+import { FINDER_SORTS, SEASONS, TERRAINS } from "@/lib/tire";
 import { lineText } from "@/lib/validation/text";
 
-export const finderSorts = ["diameter", "price", "loadMargin"] as const;
 export const vehicleTypes = ["passenger-car", "mpv-truck-trailer"] as const;
 
 const optionalText = lineText().trim().max(64).optional().catch(undefined);
@@ -29,7 +28,7 @@ export const finderQuerySchema = z.object({
   minPriceCents: optionalCount(10_000_000),
   maxPriceCents: optionalCount(10_000_000),
   inStock: flag,
-  sort: z.enum(finderSorts).optional().catch(undefined),
+  sort: z.enum(FINDER_SORTS).optional().catch(undefined),
   gawrFront: z.coerce.number().positive().max(100_000).optional().catch(undefined),
   gawrRear: z.coerce.number().positive().max(100_000).optional().catch(undefined),
   gawrUnit: z.enum(["kg", "lb"]).optional().catch(undefined),

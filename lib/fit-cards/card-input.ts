@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { LOAD_RANGES, SEASONS } from "@/lib/tire";
 import { MAX_COMPARED_SIZES } from "@/lib/compare/read-sizes";
-import { skuSchema } from "@/lib/catalog/sku";
+import { skuSchema } from "@/lib/validation/sku";
 import { lineText, multiLineText } from "@/lib/validation/text";
 
 export const MAX_CARD_TIRES = 6;

@@ -2,9 +2,9 @@ import { and, eq, inArray } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { fitCard, fitCardTire, stockItem } from "@/db/schema";
 import type { ApiErrorCode } from "@/lib/api/errors";
-import { readOriginal } from "@/lib/catalog/original";
-import { readShopTolerance } from "@/lib/catalog/shop-tolerance";
-import { formatSize, hasNominalDiameter, noDiameterMessage, sizeFromSlug } from "@/lib/tire";
+import { readOriginal } from "@/lib/alternatives/original";
+import { readShopTolerance } from "@/lib/shop/tolerance";
+import { formatSize, hasNominalDiameter, noDiameterMessage, notASizeMessage, sizeFromSlug } from "@/lib/tire";
 import type { NewFitCard } from "./card-input";
 import { newFitCardSlug } from "./slug";
 
@@ -17,7 +17,7 @@ export async function createFitCard(db: Database, authorId: string, input: NewFi
   const designations: string[] = [];
   for (const text of input.sizes) {
     const size = sizeFromSlug(text);
-    if (!size) return { ok: false, code: "unreadable", message: `"${text.slice(0, 40)}" is not a tire size (try 285/50R20).` };
+    if (!size) return { ok: false, code: "unreadable", message: notASizeMessage(text) };
     if (!hasNominalDiameter(size)) return { ok: false, code: "unreadable", message: noDiameterMessage(size) };
     designations.push(formatSize(size));
   }

@@ -1,9 +1,9 @@
 import { asc, eq } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { brand, fitCard, fitCardTire, stockItem, tireLine } from "@/db/schema";
-import { ofBrand, ofLine, ruleFactColumns } from "@/lib/catalog/catalog-select";
-import { readOriginal } from "@/lib/catalog/original";
-import { tireColumns, toTire, type Tire } from "@/lib/catalog/tire";
+import { ofBrand, ofLine, ruleFactColumns } from "@/lib/catalog/columns";
+import { readOriginal } from "@/lib/alternatives/original";
+import { tireColumns, toTire, type Tire } from "@/lib/catalog/catalog-tire";
 import type { LoadRange, Season } from "@/lib/tire";
 import { cardTireVerdict, type TireVerdict } from "./tire-verdict";
 

@@ -1,5 +1,5 @@
-import { judgedCandidate, type CandidateFacts } from "@/lib/catalog/judged-candidate";
-import type { Original } from "@/lib/catalog/original";
+import { judgedCandidate, type CandidateFacts } from "@/lib/alternatives/judged-candidate";
+import type { Original } from "@/lib/alternatives/original";
 import { diameterChangePct, judgeCandidate, noteWords, verdictWords } from "@/lib/tire";
 
 export interface TireVerdict {

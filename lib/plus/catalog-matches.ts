@@ -1,9 +1,9 @@
 import { and, eq, inArray, not } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { stockItem, tireLine } from "@/db/schema";
-import { ofLine, ruleFactColumns } from "@/lib/catalog/catalog-select";
-import { judgedCandidate } from "@/lib/catalog/judged-candidate";
-import { tireStockColumns } from "@/lib/catalog/tire";
+import { ofLine, ruleFactColumns } from "@/lib/catalog/columns";
+import { judgedCandidate } from "@/lib/alternatives/judged-candidate";
+import { tireStockColumns } from "@/lib/catalog/catalog-tire";
 import { judgeCandidate, type JudgedOriginal } from "@/lib/tire";
 
 /**

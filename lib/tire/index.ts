@@ -21,3 +21,4 @@ export * from "./vocabulary";
 export * from "./rules/judge";
 export * from "./rules/words";
 export { rimTwin, rimTwinCaution } from "./rim-twins";
+export * from "./messages";

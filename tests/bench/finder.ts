@@ -19,9 +19,9 @@ import { seedCatalog } from "../../db/seed/catalog";
 import { SIZE_OFFERS, type SizeOffer } from "../../db/seed/catalog-sizes";
 import { seededRandom, type Random } from "../../db/seed/random";
 import { demoShop } from "../../db/seed/shop";
-import { findAlternatives } from "../../lib/catalog/alternatives";
-import { readOriginal, type Original, type OriginalInput } from "../../lib/catalog/original";
-import { readShopTolerance } from "../../lib/catalog/shop-tolerance";
+import { findAlternatives } from "../../lib/alternatives/find-alternatives";
+import { readOriginal, type Original, type OriginalInput } from "../../lib/alternatives/original";
+import { readShopTolerance } from "../../lib/shop/tolerance";
 import { hasProductionBuild, startProductionServer } from "./production-server";
 
 const SEARCHES = 500;

@@ -10,7 +10,7 @@ import { CatalogTable } from "@/components/counter/catalog-table";
 import { CounterRefusal } from "@/components/counter/counter-refusal";
 import { PageIntro } from "@/components/ui/page-intro";
 import { requirePageUser } from "@/lib/auth/page-user";
-import { skuSchema } from "@/lib/catalog/sku";
+import { skuSchema } from "@/lib/validation/sku";
 import { getCatalogTablePage, readCatalogFilters, catalogQueryString } from "@/lib/counter/catalog-table";
 import { listBrandNames } from "@/lib/finder/queries";
 import { formatInteger } from "@/lib/tire";

@@ -2,11 +2,11 @@ import fc from "fast-check";
 import type { Database } from "@/db/client";
 import { and, eq, inArray, isNotNull } from "drizzle-orm";
 import { brand, SEASONS, stockItem, TERRAINS, tireLine } from "@/db/schema";
-import { buildStockRow } from "@/lib/catalog/stock-row";
-import { insertStockRows } from "@/lib/catalog/write-stock";
-import type { AlternativesSort } from "@/lib/catalog/cursor";
-import type { OriginalInput } from "@/lib/catalog/original";
-import type { CatalogFilters } from "@/lib/catalog/rule-sql";
+import { buildStockRow } from "@/lib/stock/build-stock-row";
+import { insertStockRows } from "@/lib/stock/insert-stock-rows";
+import type { FinderSort } from "@/lib/tire";
+import type { OriginalInput } from "@/lib/alternatives/original";
+import type { CatalogFilters } from "@/lib/alternatives/rule-sql";
 import {
   compareLoadRanges,
   isLoadRange,
@@ -54,7 +54,7 @@ export interface Search {
   original: OriginalInput;
   tolerancePct: number;
   filters: CatalogFilters;
-  sort: AlternativesSort;
+  sort: FinderSort;
   limit: number;
 }
 
@@ -148,7 +148,7 @@ export function arbitrarySearch(catalog: readonly CatalogRow[]): fc.Arbitrary<Se
       runFlat: fc.constantFrom(false, false, false, true),
       tolerancePct: fc.oneof(fc.constantFrom(1, 3, 5), fc.double({ min: 1, max: 5, noNaN: true })),
       filters,
-      sort: fc.constantFrom<AlternativesSort>("diameter", "diameter", "price", "loadMargin"),
+      sort: fc.constantFrom<FinderSort>("diameter", "diameter", "price", "loadMargin"),
       limit: fc.constantFrom(11, 50, 500),
     })
     .map(({ size: [designation, loadIndex], loadIndexShift, speedSymbol, dualShift, placard, season, loadRange, runFlat, ...rest }) => ({

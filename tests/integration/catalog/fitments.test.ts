@@ -3,7 +3,7 @@ import { eq, sql } from "drizzle-orm";
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
 import { stockFitment, stockItem, user } from "@/db/schema";
 import { importCatalogCsv } from "@/lib/catalog-csv/import";
-import { retireStockItem, updateStockItem } from "@/lib/catalog/stock-writes";
+import { retireStockItem, updateStockItem } from "@/lib/stock/item-writes";
 import { speedSymbolRank } from "@/lib/tire";
 import { openTestDatabase, type TestDatabase, testDatabaseKinds } from "../helpers/test-database";
 import { seedFixture, type FixtureItem } from "./fixtures";

@@ -1,9 +1,9 @@
 import type { Database } from "@/db/client";
 import { brand, tireLine, type Season, type Terrain } from "@/db/schema";
-import { findAlternatives, type AlternativesOptions } from "@/lib/catalog/alternatives";
-import { readOriginal, type OriginalInput } from "@/lib/catalog/original";
-import { buildStockRow, type StockItemInput } from "@/lib/catalog/stock-row";
-import { insertStockRows } from "@/lib/catalog/write-stock";
+import { findAlternatives, type AlternativesOptions } from "@/lib/alternatives/find-alternatives";
+import { readOriginal, type OriginalInput } from "@/lib/alternatives/original";
+import { buildStockRow, type StockItemInput } from "@/lib/stock/build-stock-row";
+import { insertStockRows } from "@/lib/stock/insert-stock-rows";
 
 export interface FixtureItem extends Partial<StockItemInput> {
   sku: string;

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
-import { decodeAlternativesCursor } from "@/lib/catalog/cursor";
+import { decodeAlternativesCursor } from "@/lib/alternatives/cursor";
 import { diameterChangePct } from "@/lib/tire";
 import { openTestDatabase, type TestDatabase, testDatabaseKinds } from "../helpers/test-database";
 import { search, seedFixture, skus } from "./fixtures";

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
 import { brand, stockItem, tireLine, type NewStockItem } from "@/db/schema";
-import { buildStockRow } from "@/lib/catalog/stock-row";
-import { insertStockRows } from "@/lib/catalog/write-stock";
+import { buildStockRow } from "@/lib/stock/build-stock-row";
+import { insertStockRows } from "@/lib/stock/insert-stock-rows";
 import { openTestDatabase, type TestDatabase, testDatabaseKinds } from "../helpers/test-database";
 
 describe.each(testDatabaseKinds)("catalog tables on %s", (kind) => {

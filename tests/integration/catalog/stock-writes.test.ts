@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { asc, eq } from "drizzle-orm";
 import { auditEvent, brand, stockItem, tireLine, user } from "@/db/schema";
-import { createStockItem, retireStockItem, updateStockItem } from "@/lib/catalog/stock-writes";
+import { createStockItem, retireStockItem, updateStockItem } from "@/lib/stock/item-writes";
 import { openTestDatabase, type TestDatabase, testDatabaseKinds } from "../helpers/test-database";
 
 const staff = { id: "staff-1", email: "counter@example.test" };

@@ -4,8 +4,8 @@ import { migrate } from "drizzle-orm/pglite/migrator";
 import type { PgliteDatabase } from "drizzle-orm/pglite";
 import { afterAll, describe, expect, it } from "vitest";
 import { migrateDatabase, openDatabase, type DatabaseHandle } from "@/db/client";
-import { findAlternatives } from "@/lib/catalog/alternatives";
-import { readOriginal } from "@/lib/catalog/original";
+import { findAlternatives } from "@/lib/alternatives/find-alternatives";
+import { readOriginal } from "@/lib/alternatives/original";
 import { measurableSizeFromSlug, sizeGeometry, speedSymbolRank } from "@/lib/tire";
 import { migrationsBefore } from "../helpers/migrations-before";
 

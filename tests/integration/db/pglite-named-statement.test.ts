@@ -3,7 +3,7 @@ import { createRequire } from "node:module";
 import path from "node:path";
 import { PGlite } from "@electric-sql/pglite";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { firstValueOfNamedStatement } from "@/lib/catalog/pglite-named-statement";
+import { firstValueOfNamedStatement } from "@/lib/alternatives/pglite-named-statement";
 
 /*
  * The finder runs its statement under a name on PGlite (2.6× faster at the median than query(), which

@@ -4,7 +4,7 @@ import { migrate as migrateNodePg } from "drizzle-orm/node-postgres/migrator";
 import { migrate as migratePglite } from "drizzle-orm/pglite/migrator";
 import { afterAll, describe, expect, it } from "vitest";
 import { migrateDatabase, openDatabase, type DatabaseHandle } from "@/db/client";
-import { isSku } from "@/lib/catalog/sku";
+import { isSku } from "@/lib/tire";
 import { measurableSizeFromSlug, sizeGeometry, speedSymbolRank } from "@/lib/tire";
 import { migrationsBefore } from "../helpers/migrations-before";
 import { createServerDatabase, testDatabaseKinds } from "../helpers/test-database";

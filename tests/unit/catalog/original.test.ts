@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { readOriginal } from "@/lib/catalog/original";
+import { readOriginal } from "@/lib/alternatives/original";
 import { ZR_UNRATED_RANK, speedSymbolRank } from "@/lib/tire";
 
 describe("readOriginal", () => {

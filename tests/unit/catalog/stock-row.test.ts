@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { buildStockRow, type StockItemInput } from "@/lib/catalog/stock-row";
+import { buildStockRow, type StockItemInput } from "@/lib/stock/build-stock-row";
 
 const line = { id: 7, runFlat: false };
 const item = (overrides: Partial<StockItemInput>): StockItemInput => ({

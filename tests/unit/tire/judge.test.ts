@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { readOriginal, type OriginalInput } from "@/lib/catalog/original";
+import { readOriginal, type OriginalInput } from "@/lib/alternatives/original";
 import {
   failedRuleWords,
   isNearMiss,

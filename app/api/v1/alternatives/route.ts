@@ -1,8 +1,8 @@
 import { NextResponse } from "next/server";
 import { apiError } from "@/lib/api/errors";
 import { withRoute } from "@/lib/auth/guard";
-import { answerAlternatives } from "@/lib/catalog/alternatives-request";
-import { alternativesQuerySchema } from "@/lib/catalog/api-queries";
+import { answerAlternatives } from "@/lib/alternatives/answer-query";
+import { alternativesQuerySchema } from "@/lib/alternatives/query-schema";
 
 export const GET = withRoute({ role: "public", query: alternativesQuerySchema }, async ({ db, query }) => {
   const answer = await answerAlternatives(db, query);

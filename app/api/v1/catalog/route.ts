@@ -1,11 +1,11 @@
 import { NextResponse } from "next/server";
 import { apiError } from "@/lib/api/errors";
 import { withRoute } from "@/lib/auth/guard";
-import { catalogQuerySchema, DEFAULT_PAGE_SIZE } from "@/lib/catalog/api-queries";
-import { listCatalog } from "@/lib/catalog/catalog-page";
+import { catalogQuerySchema, DEFAULT_PAGE_SIZE } from "@/lib/catalog/query-schema";
+import { listCatalog } from "@/lib/catalog/list-catalog";
 import { decodeCatalogCursor } from "@/lib/catalog/cursor";
-import { newStockItemSchema } from "@/lib/catalog/stock-edit";
-import { createStockItem } from "@/lib/catalog/stock-writes";
+import { newStockItemSchema } from "@/lib/stock/item-bodies";
+import { createStockItem } from "@/lib/stock/item-writes";
 
 /** Public: the current catalog in plain SKU order, a page at a time. */
 export const GET = withRoute({ role: "public", query: catalogQuerySchema }, async ({ db, query }) => {

@@ -9,7 +9,7 @@ import { dollarsText } from "@/components/counter/item-form-values";
 import { ItemRetire } from "@/components/counter/item-retire";
 import { PageIntro } from "@/components/ui/page-intro";
 import { requirePageUser } from "@/lib/auth/page-user";
-import { skuParamsSchema } from "@/lib/catalog/stock-edit";
+import { skuParamsSchema } from "@/lib/stock/item-bodies";
 import { getEditableItem, listBrandsWithLines } from "@/lib/counter/queries";
 
 export const metadata: Metadata = { title: "Counter · Edit item", robots: { index: false } };

@@ -1,8 +1,8 @@
 import { NextResponse } from "next/server";
 import { apiError } from "@/lib/api/errors";
 import { withRoute } from "@/lib/auth/guard";
-import { skuParamsSchema, stockItemChangesSchema } from "@/lib/catalog/stock-edit";
-import { retireStockItem, updateStockItem } from "@/lib/catalog/stock-writes";
+import { skuParamsSchema, stockItemChangesSchema } from "@/lib/stock/item-bodies";
+import { retireStockItem, updateStockItem } from "@/lib/stock/item-writes";
 
 /** Staff change a current item's price, quantity or other fields → 200 Tire. */
 export const PATCH = withRoute({ role: "staff", params: skuParamsSchema, body: stockItemChangesSchema }, async ({ db, user, params, body }) => {

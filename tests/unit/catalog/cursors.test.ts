@@ -1,6 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { decodeAlternativesCursor, decodeCatalogCursor, encodeAlternativesCursor, encodeCatalogCursor } from "@/lib/catalog/cursor";
+import { decodeAlternativesCursor, encodeAlternativesCursor } from "@/lib/alternatives/cursor";
+import { decodeCatalogCursor, encodeCatalogCursor } from "@/lib/catalog/cursor";
 
 describe("cursors", () => {
   it("give back the exact sort key, price and SKU", () => {

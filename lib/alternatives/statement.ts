@@ -1,7 +1,7 @@
 import { and, sql, type SQL } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { stockFitment, stockItem } from "@/db/schema";
-import type { AlternativesSort } from "./cursor";
+import type { FinderSort } from "@/lib/tire";
 import { pickItems } from "./fitment-picks";
 import { sortKeySql, type RuleSql } from "./rule-sql";
 
@@ -33,7 +33,7 @@ function matchingItems(rules: RuleSql): SQL {
  * give the near misses, nearest diameter first. Of the items, only those a page shows are read
  * (and, for the line, brand and price filters, the items of the fitments that pass).
  */
-export function finderStatement(db: Database, rules: RuleSql, sort: AlternativesSort, afterCursor: boolean) {
+export function finderStatement(db: Database, rules: RuleSql, sort: FinderSort, afterCursor: boolean) {
   const judged = sql`
     select ${stockFitment.id} as "id", ${rules.diffPct} as "diff", ${sortKeySql(sort, rules.diffPct)} as "sort_key",
       ${stockFitment.overallDiameterMm} as "od", sum(${stockFitment.itemCount}) over (partition by ${stockFitment.overallDiameterMm}) as "od_items",

@@ -1,17 +1,18 @@
 import type { Database } from "@/db/client";
-import { encodeAlternativesCursor, type AlternativesCursor, type AlternativesSort } from "./cursor";
-import { finderAnswerSchema } from "./finder-answer";
-import { finderStatement, NEAR_MISS_LIMIT } from "./finder-statement";
+import type { FinderSort } from "@/lib/tire";
+import { encodeAlternativesCursor, type AlternativesCursor } from "./cursor";
+import { finderAnswerSchema } from "./answer-rows";
+import { finderStatement, NEAR_MISS_LIMIT } from "./statement";
 import { failedRuleWords, isNearMiss, judgeCandidate, noteWords, qualifyingReasonWords, type Verdict } from "@/lib/tire";
 import { judgedCandidate } from "./judged-candidate";
 import type { Original } from "./original";
 import { finderShape, finderValues, ruleSql, type CatalogFilters } from "./rule-sql";
 import { cachedStatement } from "./statement-cache";
-import { toTire, type Tire } from "./tire";
+import { toTire, type Tire } from "@/lib/catalog/catalog-tire";
 
 export interface AlternativesOptions extends CatalogFilters {
   tolerancePct: number;
-  sort: AlternativesSort;
+  sort: FinderSort;
   limit: number;
   cursor: AlternativesCursor | null;
 }

@@ -4,10 +4,10 @@ import { brand, stockItem, tireLine } from "@/db/schema";
 import type { ApiErrorCode } from "@/lib/api/errors";
 import { formatPrice } from "@/lib/shop/money";
 import { changedFields, recordAudit, type Actor } from "@/lib/audit/record";
-import { ofBrand, ofLine } from "./catalog-select";
-import type { NewStockItemBody, StockItemChanges } from "./stock-edit";
-import { buildStockRow, type StockItemInput, type StockLine, type StockRowProblem } from "./stock-row";
-import { tireColumns, toTire, type Tire } from "./tire";
+import { ofBrand, ofLine } from "@/lib/catalog/columns";
+import type { NewStockItemBody, StockItemChanges } from "./item-bodies";
+import { buildStockRow, type StockItemInput, type StockLine, type StockRowProblem } from "./build-stock-row";
+import { tireColumns, toTire, type Tire } from "@/lib/catalog/catalog-tire";
 
 export type StockWriteResult = { ok: true; tire: Tire } | { ok: false; code: ApiErrorCode; message: string };
 

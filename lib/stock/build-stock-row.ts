@@ -14,7 +14,7 @@ import {
   speedSymbolRank,
 } from "@/lib/tire";
 import { lineText } from "@/lib/validation/text";
-import { skuSchema } from "./sku";
+import { skuSchema } from "@/lib/validation/sku";
 
 /** A stock item as staff screens, the CSV import and the demo seed describe it. */
 export const stockItemInputSchema = z.object({

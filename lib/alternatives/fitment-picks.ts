@@ -1,8 +1,8 @@
 import { sql, type Placeholder, type SQL } from "drizzle-orm";
 import { brand, stockItem, tireLine } from "@/db/schema";
-import { ofBrand, ofLine, ruleFactColumns } from "./catalog-select";
-import { skuPlainOrder } from "./rule-sql";
-import { tireLineColumns, tireStockColumns } from "./tire";
+import { ofBrand, ofLine, ruleFactColumns } from "@/lib/catalog/columns";
+import { skuPlainOrder } from "@/lib/catalog/columns";
+import { tireLineColumns, tireStockColumns } from "@/lib/catalog/catalog-tire";
 
 /** Where the previous page ended: its last row's sort key, price and SKU. */
 export interface PickCursor {

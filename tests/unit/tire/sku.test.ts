@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { isSku } from "@/lib/catalog/sku";
+import { isSku } from "@/lib/tire";
 
 describe("the SKU rule", () => {
   it("takes 1–64 of A–Z a–z 0–9 - _ ., the characters a URL path keeps as they are (RFC 3986 §2.3)", () => {

@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { lineText } from "@/lib/validation/text";
-import { skuSchema } from "./sku";
-import { stockItemInputSchema } from "./stock-row";
+import { skuSchema } from "@/lib/validation/sku";
+import { stockItemInputSchema } from "./build-stock-row";
 
 const name = lineText().trim().min(1).max(100);
 

@@ -1,10 +1,11 @@
 import type { Database } from "@/db/client";
 import type { ApiErrorCode } from "@/lib/api/errors";
-import { findAlternatives, type Alternatives } from "./alternatives";
-import { DEFAULT_PAGE_SIZE, type AlternativesQuery } from "./api-queries";
+import { findAlternatives, type Alternatives } from "./find-alternatives";
+import { DEFAULT_PAGE_SIZE } from "@/lib/catalog/query-schema";
+import type { AlternativesQuery } from "./query-schema";
 import { decodeAlternativesCursor } from "./cursor";
 import { readOriginal } from "./original";
-import { readShopTolerance } from "./shop-tolerance";
+import { readShopTolerance } from "@/lib/shop/tolerance";
 
 export type AlternativesAnswer = { ok: true; body: Alternatives } | { ok: false; code: ApiErrorCode; message: string };
 

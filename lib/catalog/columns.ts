@@ -1,4 +1,4 @@
-import { eq } from "drizzle-orm";
+import { eq, sql } from "drizzle-orm";
 import { brand, stockItem, tireLine } from "@/db/schema";
 
 /** Join conditions from stock_item to its line and from the line to its brand. */
@@ -26,3 +26,6 @@ export const staffItemColumns = {
   priceCents: stockItem.priceCents,
   quantity: stockItem.quantityOnHand,
 };
+
+/** SKUs in plain character order (COLLATE "C"), so that PGlite and PostgreSQL sort alike. */
+export const skuPlainOrder = sql`${stockItem.sku} collate "C"`;

@@ -1,8 +1,8 @@
 import { and, eq, gt, gte, lte, sql, type SQL } from "drizzle-orm";
 import { brand, stockFitment, stockItem, tireLine } from "@/db/schema";
 import { loadRequirements, type Season, type Terrain } from "@/lib/tire";
-import { ofBrand } from "./catalog-select";
-import type { AlternativesSort } from "./cursor";
+import { ofBrand } from "@/lib/catalog/columns";
+import type { FinderSort } from "@/lib/tire";
 import type { Original } from "./original";
 
 /** Narrowing a search beyond the rules; each filter is an equality or a bound. */
@@ -160,7 +160,7 @@ export function ruleSql(shape: FinderShape): RuleSql {
 }
 
 /** The sort key of a fitment's items, ascending; ties go by price, then SKU in plain character order. */
-export function sortKeySql(sort: AlternativesSort, diffPct: SQL<number>): SQL<number> {
+export function sortKeySql(sort: FinderSort, diffPct: SQL<number>): SQL<number> {
   switch (sort) {
     case "diameter":
       return sql<number>`abs(${diffPct})`;
@@ -171,5 +171,3 @@ export function sortKeySql(sort: AlternativesSort, diffPct: SQL<number>): SQL<nu
       return sql<number>`(-${stockFitment.loadIndex})::float8`;
   }
 }
-
-export const skuPlainOrder = sql`${stockItem.sku} collate "C"`;

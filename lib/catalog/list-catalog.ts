@@ -1,10 +1,10 @@
 import { and, gt, not, sql } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { brand, stockItem, tireLine } from "@/db/schema";
-import { ofBrand, ofLine } from "./catalog-select";
+import { ofBrand, ofLine } from "./columns";
 import { encodeCatalogCursor } from "./cursor";
-import { skuPlainOrder } from "./rule-sql";
-import { tireColumns, toTire, type Tire } from "./tire";
+import { skuPlainOrder } from "./columns";
+import { tireColumns, toTire, type Tire } from "./catalog-tire";
 
 export interface CatalogPage {
   items: Tire[];
