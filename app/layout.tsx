@@ -1,7 +1,10 @@
 import type { Metadata, Viewport } from "next";
 import localFont from "next/font/local";
 import type { ReactNode } from "react";
+import { connection } from "next/server";
+import { ShopContactLine } from "@/components/shell/shop-contact";
 import { SiteFooter } from "@/components/shell/site-footer";
+import { readShopContact } from "@/lib/shop/queries";
 import { SiteHeader } from "@/components/shell/site-header";
 import { siteUrl } from "@/lib/env/site-url";
 import "./globals.css";
@@ -35,6 +38,12 @@ export const viewport: Viewport = {
   ],
 };
 
+// The contact line reads the database, so it waits for a request: the rest of the page does not wait for it.
+async function FooterContact() {
+  await connection();
+  return <ShopContactLine contact={await readShopContact()} />;
+}
+
 export default function RootLayout({ children }: { children: ReactNode }) {
   return (
     <html lang="en" className={`${plexSans.variable} ${jetbrainsMono.variable}`}>
@@ -49,7 +58,7 @@ export default function RootLayout({ children }: { children: ReactNode }) {
         <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-6 sm:py-10 print:p-0">
           {children}
         </main>
-        <SiteFooter />
+        <SiteFooter contact={<FooterContact />} />
       </body>
     </html>
   );

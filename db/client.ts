@@ -6,11 +6,8 @@ import { drizzle as drizzleNodePg } from "drizzle-orm/node-postgres";
 import { migrate as migrateNodePg } from "drizzle-orm/node-postgres/migrator";
 import { drizzle as drizzlePglite } from "drizzle-orm/pglite";
 import { migrate as migratePglite } from "drizzle-orm/pglite/migrator";
-import { readServerEnv } from "@/lib/env/server-env";
 import * as schema from "./schema";
 import { openServerPool } from "./server-pool";
-import { seedDemoDataIfEmpty } from "./seed";
-import { seedDemoAccounts } from "./seed/accounts";
 
 export type Database = PgDatabase<PgQueryResultHKT, typeof schema>;
 export type DatabaseKind = "pglite" | "postgres";
@@ -55,37 +52,20 @@ export async function migrateDatabase(handle: DatabaseHandle): Promise<void> {
 
 type GlobalWithDatabase = typeof globalThis & { __sidewiseDatabase?: Promise<DatabaseHandle> };
 
-async function openFromEnvironment(): Promise<DatabaseHandle> {
-  const env = readServerEnv();
-  const handle = await openDatabase({ url: env.DATABASE_URL, dataDir: env.PGLITE_DATA_DIR });
-  try {
-    await migrateDatabase(handle);
-    if (env.DEMO_SEED === "on") {
-      await seedDemoDataIfEmpty(handle.db);
-      await seedDemoAccounts(handle.db);
-    }
-    return handle;
-  } catch (error) {
-    await handle.close().catch(() => undefined);
-    throw error;
-  }
-}
-
 /**
- * The app's one database, opened, migrated and (unless DEMO_SEED=off) seeded on first use.
- * Cached on globalThis so dev-server reloads reuse it; a failed open is forgotten so the next call retries.
+ * The process's one database: opened by `open` on first use and cached on globalThis, so dev-server
+ * reloads reuse it; a failed open is forgotten so the next call retries. The app's settings, migration
+ * and demo data are the caller's (lib/database); db/ reads no environment.
  */
-export function getDatabaseHandle(): Promise<DatabaseHandle> {
-  const store = globalThis as GlobalWithDatabase;
-  if (!store.__sidewiseDatabase) {
-    store.__sidewiseDatabase = openFromEnvironment().catch((error: unknown) => {
-      store.__sidewiseDatabase = undefined;
-      throw error;
-    });
-  }
-  return store.__sidewiseDatabase;
-}
-
-export async function getDb(): Promise<Database> {
-  return (await getDatabaseHandle()).db;
+export function lazyDatabase(open: () => Promise<DatabaseHandle>): () => Promise<DatabaseHandle> {
+  return () => {
+    const store = globalThis as GlobalWithDatabase;
+    if (!store.__sidewiseDatabase) {
+      store.__sidewiseDatabase = open().catch((error: unknown) => {
+        store.__sidewiseDatabase = undefined;
+        throw error;
+      });
+    }
+    return store.__sidewiseDatabase;
+  };
 }

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { CardList } from "@/components/fit-card/card-list";
 import { PageIntro } from "@/components/ui/page-intro";
-import { getDb } from "@/db/client";
+import { getDb } from "@/lib/database/app-database";
 import { requirePageUser } from "@/lib/auth/page-user";
 import { listOwnCards } from "@/lib/fit-cards/queries";
 

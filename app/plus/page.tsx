@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { connection } from "next/server";
-import { getDb } from "@/db/client";
+import { getDb } from "@/lib/database/app-database";
 import { PlusForm } from "@/components/plus/plus-form";
 import { PlusGroups } from "@/components/plus/plus-groups";
 import { PlusPicks, PlusSaveCard } from "@/components/plus/plus-picks";

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { connection } from "next/server";
-import { getDb } from "@/db/client";
+import { getDb } from "@/lib/database/app-database";
 import { ReplacementFinder } from "@/components/finder/replacement-finder";
 import { StartForm } from "@/components/finder/start-form";
 import { PageIntro } from "@/components/ui/page-intro";

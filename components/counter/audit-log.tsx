@@ -1,5 +1,5 @@
 import Link from "next/link";
-import { AUDIT_ACTIONS, type AuditAction } from "@/db/schema";
+import { AUDIT_ACTIONS, type AuditAction } from "@/lib/tire";
 import { AUDIT_PAGE_SIZE, type AuditListing, type AuditQuery } from "@/lib/audit/queries";
 
 const actionLabels: Record<AuditAction, string> = {

@@ -1,6 +1,6 @@
 import Link from "next/link";
 import type { ReactNode } from "react";
-import { SEASONS, TERRAINS } from "@/db/schema";
+import { SEASONS, TERRAINS } from "@/lib/tire";
 import type { CatalogFilters } from "@/lib/counter/catalog-filters";
 
 const fieldClass = "min-h-11 w-full rounded border border-rule bg-sheet px-3 text-base";

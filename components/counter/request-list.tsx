@@ -1,5 +1,5 @@
 import Link from "next/link";
-import { QUOTE_STATUSES, type QuoteStatus } from "@/db/schema";
+import { QUOTE_STATUSES, type QuoteStatus } from "@/lib/tire";
 import { sourceLabels, statusLabels } from "@/lib/quotes/labels";
 import type { QuoteRequestListing, RequestListQuery } from "@/lib/quotes/queries";
 

@@ -1,7 +1,7 @@
 "use client";
 
 import { useActionState } from "react";
-import { ROLES, type Role } from "@/db/schema";
+import { ROLES, type Role } from "@/lib/tire";
 import type { ActionResult } from "@/lib/auth/action";
 import { changeRole } from "@/lib/team/actions";
 

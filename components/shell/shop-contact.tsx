@@ -1,10 +1,7 @@
-import { connection } from "next/server";
-import { getDb } from "@/db/client";
-import { getShopContact } from "@/lib/shop/queries";
+import type { ShopContact } from "@/lib/shop/queries";
 
-export async function ShopContactLine() {
-  await connection();
-  const contact = await getShopContact(await getDb()).catch(() => null);
+/** The shop's address, phone and hours, one line in the footer. */
+export function ShopContactLine({ contact }: { contact: ShopContact | null }) {
   if (!contact) return null;
   return (
     <address className="not-italic">

@@ -1,8 +1,8 @@
-import { Suspense } from "react";
+import { Suspense, type ReactNode } from "react";
 import { safetySummary } from "@/content/safety";
-import { ShopContactLine } from "./shop-contact";
 
-export function SiteFooter() {
+/** The safety summary and, below it, the shop's contact line (`contact`, read by the layout). */
+export function SiteFooter({ contact }: { contact: ReactNode }) {
   return (
     <footer className="mt-16 border-t border-rule bg-sheet/95 text-sm text-ink-soft print:hidden">
       <div className="mx-auto flex max-w-6xl flex-col gap-3 px-4 py-6">
@@ -11,7 +11,7 @@ export function SiteFooter() {
           {safetySummary}
         </p>
         <Suspense fallback={<p aria-hidden="true">&nbsp;</p>}>
-          <ShopContactLine />
+          {contact}
         </Suspense>
       </div>
     </footer>

@@ -1,9 +1,9 @@
 import { index, jsonb, pgTable, serial, text, timestamp } from "drizzle-orm/pg-core";
+import { AUDIT_ACTIONS, type AuditAction } from "../../lib/tire/vocabulary";
 import { user } from "./auth";
 
 /** What an audited change was. */
-export const AUDIT_ACTIONS = ["item_added", "item_changed", "item_retired", "catalog_import", "role_changed"] as const;
-export type AuditAction = (typeof AUDIT_ACTIONS)[number];
+export { AUDIT_ACTIONS, type AuditAction };
 
 /** A field's value before and after a change, e.g. { priceCents: { from: 15900, to: 14900 } }. */
 export type AuditChanges = Record<string, { from: unknown; to: unknown }>;

@@ -1,8 +1,8 @@
 import { boolean, index, pgTable, text, timestamp } from "drizzle-orm/pg-core";
+import { ROLES, type Role } from "../../lib/tire/vocabulary";
 
 /** Roles, each including everything the one before it may do. */
-export const ROLES = ["customer", "staff", "admin"] as const;
-export type Role = (typeof ROLES)[number];
+export { ROLES, type Role };
 
 // The four tables the sign-in library keeps, with the admin plugin's role and ban fields.
 // Column names are the library's field names, written in snake_case by the database client.

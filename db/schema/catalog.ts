@@ -13,12 +13,10 @@ import {
   unique,
 } from "drizzle-orm/pg-core";
 
-import { SEASONS, SKU_CHARACTERS, SKU_MAX_LENGTH, TERRAINS } from "../../lib/tire/vocabulary";
+import { CONSTRUCTIONS, SEASONS, SERVICE_TYPES, SKU_CHARACTERS, SKU_MAX_LENGTH, TERRAINS } from "../../lib/tire/vocabulary";
 
-export { SEASONS, TERRAINS };
-export const SERVICE_TYPES = ["passenger", "LT", "C", "ST", "T"] as const;
+export { CONSTRUCTIONS, SEASONS, SERVICE_TYPES, TERRAINS };
 export const SIZE_PREFIXES = ["P", "LT", "ST", "T"] as const;
-export const CONSTRUCTIONS = ["R", "D", "B"] as const;
 export const SIZE_KINDS = ["metric", "flotation"] as const;
 export const TRACTION_GRADES = ["AA", "A", "B", "C"] as const;
 export const TEMPERATURE_GRADES = ["A", "B", "C"] as const;

@@ -1,12 +1,9 @@
 import { date, index, integer, pgTable, serial, smallint, text, timestamp } from "drizzle-orm/pg-core";
+import { QUOTE_SOURCES, QUOTE_STATUSES, type QuoteSource, type QuoteStatus } from "../../lib/tire/vocabulary";
 import { user } from "./auth";
 import { emailSend } from "./email";
 
-export const QUOTE_STATUSES = ["new", "answered", "closed"] as const;
-export type QuoteStatus = (typeof QUOTE_STATUSES)[number];
-
-export const QUOTE_SOURCES = ["fit-card", "size-sheet", "finder"] as const;
-export type QuoteSource = (typeof QUOTE_SOURCES)[number];
+export { QUOTE_SOURCES, QUOTE_STATUSES, type QuoteSource, type QuoteStatus };
 
 /** "Ask the shop": a driver's request for a price, kept with its status and the shop's replies. */
 export const quoteRequest = pgTable(

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { CONSTRUCTIONS, SEASONS, SERVICE_TYPES, TERRAINS } from "@/db/schema";
+import { CONSTRUCTIONS, SEASONS, SERVICE_TYPES, TERRAINS } from "@/lib/tire";
 
 /** A stock item as the finder's statement returns it: a Tire's columns, what the rules read, its place in the order. */
 const candidateRowSchema = z.object({

@@ -1,6 +1,7 @@
 import { headers } from "next/headers";
 import { z } from "zod";
-import { getDb, type Database } from "@/db/client";
+import { type Database } from "@/db/client";
+import { getDb } from "@/lib/database/app-database";
 import { checkRequestOrigin } from "@/lib/security/request-origin";
 import { appOrigin } from "./auth-env";
 import { hasRole, type Role } from "./roles";

@@ -1,4 +1,4 @@
-import { getDb } from "@/db/client";
+import { getDb } from "@/lib/database/app-database";
 import { createAuth, type Auth } from "./create-auth";
 
 export type { Auth } from "./create-auth";

@@ -1,6 +1,7 @@
 import { connection, type NextRequest } from "next/server";
 import type { z } from "zod";
-import { getDb, type Database } from "@/db/client";
+import { type Database } from "@/db/client";
+import { getDb } from "@/lib/database/app-database";
 import { parseJsonBody } from "@/lib/api/body";
 import { apiError } from "@/lib/api/errors";
 import { parseQuery } from "@/lib/api/query";

@@ -2,7 +2,7 @@ import { createAccessControl } from "better-auth/plugins/access";
 import { adminAc, defaultStatements } from "better-auth/plugins/admin/access";
 import type { Role } from "@/db/schema";
 
-export { ROLES, type Role } from "@/db/schema";
+export { ROLES, type Role } from "@/lib/tire";
 
 /** Access control for the admin plugin: only admins manage accounts; staff and customers manage none. */
 export const ac = createAccessControl(defaultStatements);

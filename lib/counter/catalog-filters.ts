@@ -2,7 +2,8 @@ import { and, asc, desc, eq, gt, ilike, or, sql, type SQL } from "drizzle-orm";
 import { z } from "zod";
 import { containsPattern } from "@/lib/search/contains-pattern";
 import { lineText } from "@/lib/validation/text";
-import { brand, SEASONS, stockItem, TERRAINS, tireLine } from "@/db/schema";
+import { brand, stockItem, tireLine } from "@/db/schema";
+import { SEASONS, TERRAINS } from "@/lib/tire";
 
 export const CATALOG_TABLE_SORTS = ["sku", "brand", "size", "loadIndex", "speed", "price", "quantity"] as const;
 export type CatalogTableSort = (typeof CATALOG_TABLE_SORTS)[number];

@@ -1,13 +1,6 @@
-import { z } from "zod";
+import { readEnv } from "@/lib/env/env";
 
-const DEFAULT_FROM = "Marrowby Tire Works <counter@marrowby-tire.test>";
 const DEVELOPMENT_KEY = "re_development_fake";
-
-const emailEnvSchema = z.object({
-  RESEND_BASE_URL: z.url({ protocol: /^https?$/, error: "RESEND_BASE_URL must be an http(s) address" }).optional(),
-  RESEND_API_KEY: z.string().trim().min(1).optional(),
-  EMAIL_FROM: z.string().trim().min(3).default(DEFAULT_FROM),
-});
 
 export type EmailEnv = { ok: true; baseUrl?: string; apiKey: string; from: string } | { ok: false; message: string };
 
@@ -17,19 +10,11 @@ function isLoopback(address: string): boolean {
 
 /**
  * Where e-mail goes and as whom. A service on this machine (the local fake) needs no real key;
- * anywhere else, RESEND_API_KEY is required. Answers a message instead of throwing, so that a
- * missing setting never breaks the page that wanted to send.
+ * anywhere else, RESEND_API_KEY is required: without it this answers a message instead of throwing,
+ * so that a missing key never breaks the page that wanted to send.
  */
 export function readEmailEnv(source: NodeJS.ProcessEnv = process.env): EmailEnv {
-  const parsed = emailEnvSchema.safeParse({
-    RESEND_BASE_URL: source.RESEND_BASE_URL || undefined,
-    RESEND_API_KEY: source.RESEND_API_KEY || undefined,
-    EMAIL_FROM: source.EMAIL_FROM || undefined,
-  });
-  if (!parsed.success) {
-    return { ok: false, message: `Invalid environment: ${parsed.error.issues.map((i) => `${i.path.join(".")}: ${i.message}`).join("; ")}` };
-  }
-  const { RESEND_BASE_URL: baseUrl, RESEND_API_KEY: key, EMAIL_FROM: from } = parsed.data;
+  const { RESEND_BASE_URL: baseUrl, RESEND_API_KEY: key, EMAIL_FROM: from } = readEnv(source);
   const apiKey = key ?? (baseUrl && isLoopback(baseUrl) ? DEVELOPMENT_KEY : undefined);
   if (!apiKey) {
     return {

@@ -1,6 +1,6 @@
 import { randomUUID } from "node:crypto";
-import { z } from "zod";
 import type { Database } from "@/db/client";
+import { readEnv } from "@/lib/env/env";
 import { readFitCard } from "@/lib/fit-cards/read-card";
 import { hitRateLimit, type RateLimitVerdict } from "@/lib/rate-limit/rate-limit";
 import { getShopContact } from "@/lib/shop/queries";
@@ -9,11 +9,9 @@ import type { FitCardEmailBody } from "./fit-card-email-input";
 import { fitCardEmailText } from "./fit-card-email-text";
 import { type RecordedSendResult, sendRecordedEmail } from "./recorded-send";
 
-const countSchema = z.coerce.number().int().min(1).max(10_000);
-
 /** Fit card e-mails one staff member may send per hour (default 20; FIT_CARD_EMAIL_LIMIT_PER_HOUR changes it). */
-export function fitCardEmailLimit(env: NodeJS.ProcessEnv = process.env) {
-  return { limit: countSchema.catch(20).parse(env.FIT_CARD_EMAIL_LIMIT_PER_HOUR || 20), windowSeconds: 60 * 60 };
+export function fitCardEmailLimit() {
+  return { limit: readEnv().FIT_CARD_EMAIL_LIMIT_PER_HOUR, windowSeconds: 60 * 60 };
 }
 
 function hitFitCardEmailLimit(db: Database, userId: string): Promise<RateLimitVerdict> {

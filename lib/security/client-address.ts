@@ -1,5 +1,5 @@
 import { isIP } from "node:net";
-import { z } from "zod";
+import { readEnv } from "@/lib/env/env";
 
 /** The bucket of every request whose address cannot be trusted: they share one limit. */
 export const UNKNOWN_CLIENT = "0.0.0.0";
@@ -7,16 +7,12 @@ export const UNKNOWN_CLIENT = "0.0.0.0";
 /** The header the sign-in service reads the client address from; the auth route always overwrites it. */
 export const CLIENT_ADDRESS_HEADER = "x-sidewise-client-address";
 
-const hopsSchema = z.coerce.number().int().min(0).max(10);
-
 /**
  * TRUSTED_PROXY_HOPS: how many reverse proxies stand in front of the app, each appending the address
  * it saw to X-Forwarded-For (default 1). A bad value fails loudly rather than trusting the wrong entry.
  */
 export function trustedProxyHops(source: Record<string, string | undefined> = process.env): number {
-  const parsed = hopsSchema.safeParse(source.TRUSTED_PROXY_HOPS?.trim() || 1);
-  if (!parsed.success) throw new Error("Invalid environment: TRUSTED_PROXY_HOPS must be a whole number from 0 to 10");
-  return parsed.data;
+  return readEnv(source).TRUSTED_PROXY_HOPS;
 }
 
 function withoutPort(entry: string): string {

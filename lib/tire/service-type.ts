@@ -1,7 +1,7 @@
 import type { TireSize } from "./types";
+import type { SERVICE_TYPES } from "./vocabulary";
 
-/** The families a replacement must stay within: passenger, light truck, ETRTO commercial, trailer, temporary spare. */
-export type ServiceType = "passenger" | "LT" | "C" | "ST" | "T";
+export type ServiceType = (typeof SERVICE_TYPES)[number];
 
 export function serviceType(size: Pick<TireSize, "kind" | "prefix" | "commercial">): ServiceType {
   if (size.prefix === "T") return "T";

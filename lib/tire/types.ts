@@ -1,12 +1,12 @@
 import type { Geometry } from "./geometry";
 import type { LoadRange } from "./load-range";
 import type { SpeedSymbol } from "./speed-symbols";
+import type { CONSTRUCTIONS } from "./vocabulary";
 
 /** "inch": a width in inches and no aspect ratio (11R22.5, 7.50R16LT, 7.50-16), whose overall diameter the marking does not give. */
 export type SizeKind = "metric" | "flotation" | "inch";
 export type SizePrefix = "P" | "LT" | "ST" | "T";
-/** R radial, D diagonal (bias), B bias-belted. */
-export type Construction = "R" | "D" | "B";
+export type Construction = (typeof CONSTRUCTIONS)[number];
 
 export interface TireSize {
   kind: SizeKind;

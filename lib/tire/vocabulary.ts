@@ -1,4 +1,13 @@
-/** Words the catalog, the finder and the forms share; browser-safe, so every layer may import them. */
+/**
+ * Words the catalog, the finder, the Counter and the forms share, each written once; browser-safe and
+ * free of any import, so that db/, lib/ and client components may all use them.
+ */
+
+/** R radial, D diagonal (bias), B bias-belted. */
+export const CONSTRUCTIONS = ["R", "D", "B"] as const;
+
+/** The families a replacement must stay within: passenger, light truck, ETRTO commercial, trailer, temporary spare. */
+export const SERVICE_TYPES = ["passenger", "LT", "C", "ST", "T"] as const;
 
 export const SEASONS = ["all-season", "all-weather", "summer", "winter"] as const;
 export type Season = (typeof SEASONS)[number];
@@ -22,3 +31,17 @@ export const SKU_PATTERN = new RegExp(`^(?!\\.\\.?$)(?![Nn][Ee][Ww]$)[${SKU_CHAR
 export const SKU_RULE = 'a SKU is 1–64 letters, digits, dots, hyphens or underscores (not "." or ".." alone, and not "new")';
 
 export const isSku = (text: string): boolean => SKU_PATTERN.test(text);
+
+/** Roles, each including everything the one before it may do. */
+export const ROLES = ["customer", "staff", "admin"] as const;
+export type Role = (typeof ROLES)[number];
+
+export const QUOTE_STATUSES = ["new", "answered", "closed"] as const;
+export type QuoteStatus = (typeof QUOTE_STATUSES)[number];
+
+/** Where an Ask the shop request was sent from. */
+export const QUOTE_SOURCES = ["fit-card", "size-sheet", "finder"] as const;
+export type QuoteSource = (typeof QUOTE_SOURCES)[number];
+
+export const AUDIT_ACTIONS = ["item_added", "item_changed", "item_retired", "catalog_import", "role_changed"] as const;
+export type AuditAction = (typeof AUDIT_ACTIONS)[number];

@@ -8,8 +8,8 @@
  */
 import { migrateDatabase, openDatabase, type Database } from "../../db/client";
 import { user } from "../../db/schema";
-import { seedCatalog } from "../../db/seed/catalog";
-import { DEMO_CATALOG } from "../../db/seed/catalog-stock";
+import { seedCatalog } from "../../lib/demo/catalog";
+import { DEMO_CATALOG } from "../../lib/demo/catalog-stock";
 import { generatedCsvItems } from "../fixtures/generated-csv-items";
 import { importCatalogCsv } from "../../lib/catalog-csv/import";
 import { writeCatalogCsv } from "../../lib/catalog-csv/write-file";

@@ -1,8 +1,8 @@
 import { NextRequest } from "next/server";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { GET as authGet, POST as authPost } from "@/app/api/auth/[...all]/route";
-import { getDatabaseHandle, getDb } from "@/db/client";
-import { seedDemoAccounts } from "@/db/seed/accounts";
+import { getDatabaseHandle, getDb } from "@/lib/database/app-database";
+import { seedDemoAccounts } from "@/lib/demo/accounts";
 import { answerNoSoonerThan, EQUAL_TIME_MS } from "@/lib/auth/auth-route";
 import { type FakeResend, type ReceivedEmail, startFakeResend } from "@/scripts/fake-resend.mjs";
 import { APP_ORIGIN, signIn } from "../integration/helpers/auth-session";

@@ -2,8 +2,8 @@ import { readdirSync, readFileSync } from "node:fs";
 import path from "node:path";
 import type { NextRequest } from "next/server";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { getDatabaseHandle, getDb } from "@/db/client";
-import { seedDemoAccounts } from "@/db/seed/accounts";
+import { getDatabaseHandle, getDb } from "@/lib/database/app-database";
+import { seedDemoAccounts } from "@/lib/demo/accounts";
 import { callRoute, signIn } from "../integration/helpers/auth-session";
 import { ACTION_MATRIX, CALLERS, HTTP_METHODS, MATRIX, PUBLIC_HANDLERS, type Who } from "./route-table";
 

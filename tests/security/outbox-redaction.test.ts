@@ -1,8 +1,8 @@
 import { NextRequest } from "next/server";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { POST as authPost } from "@/app/api/auth/[...all]/route";
-import { getDatabaseHandle, getDb } from "@/db/client";
-import { seedDemoAccounts } from "@/db/seed/accounts";
+import { getDatabaseHandle, getDb } from "@/lib/database/app-database";
+import { seedDemoAccounts } from "@/lib/demo/accounts";
 import { readDevOutbox } from "@/lib/email/dev-outbox";
 import { HIDDEN_LINK, isSecretLink, redactSecretLinks } from "@/lib/email/redact-links";
 import { sendEmail } from "@/lib/email/send-email";

@@ -1,8 +1,8 @@
 import { NextRequest } from "next/server";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { POST as authPost } from "@/app/api/auth/[...all]/route";
-import { getDatabaseHandle, getDb } from "@/db/client";
-import { seedDemoAccounts } from "@/db/seed/accounts";
+import { getDatabaseHandle, getDb } from "@/lib/database/app-database";
+import { seedDemoAccounts } from "@/lib/demo/accounts";
 import { recordSignInFailure, retryAfterSeconds, signInWaitSeconds, waitSecondsAfter } from "@/lib/auth/sign-in-throttle";
 import { APP_ORIGIN } from "../integration/helpers/auth-session";
 

@@ -1,5 +1,5 @@
 import { connection, NextResponse } from "next/server";
-import { getDatabaseHandle } from "@/db/client";
+import { getDatabaseHandle } from "@/lib/database/app-database";
 import { checkDatabase } from "@/lib/health/check-database";
 
 export async function GET() {

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { connection } from "next/server";
 import { z } from "zod";
-import { getDb } from "@/db/client";
+import { getDb } from "@/lib/database/app-database";
 import { CatalogFilterForm } from "@/components/counter/catalog-filter-form";
 import { CatalogPagination } from "@/components/counter/catalog-pagination";
 import { CatalogStatus } from "@/components/counter/catalog-status";

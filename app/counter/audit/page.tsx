@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { AuditLog } from "@/components/counter/audit-log";
 import { CounterRefusal } from "@/components/counter/counter-refusal";
 import { PageIntro } from "@/components/ui/page-intro";
-import { getDb } from "@/db/client";
+import { getDb } from "@/lib/database/app-database";
 import { requirePageUser } from "@/lib/auth/page-user";
 import { auditQuerySchema, listAuditEvents } from "@/lib/audit/queries";
 

@@ -3,7 +3,7 @@ import Link from "next/link";
 import { CounterRefusal } from "@/components/counter/counter-refusal";
 import { CardList } from "@/components/fit-card/card-list";
 import { PageIntro } from "@/components/ui/page-intro";
-import { getDb } from "@/db/client";
+import { getDb } from "@/lib/database/app-database";
 import { requirePageUser } from "@/lib/auth/page-user";
 import { CARD_LIST_PAGE_SIZE, cardListQuerySchema, listAllCards } from "@/lib/fit-cards/queries";
 

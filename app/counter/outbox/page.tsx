@@ -3,7 +3,7 @@ import { CounterRefusal } from "@/components/counter/counter-refusal";
 import { OutboxFakeInbox } from "@/components/counter/outbox-fake-inbox";
 import { OutboxSendTable } from "@/components/counter/outbox-send-table";
 import { PageIntro } from "@/components/ui/page-intro";
-import { getDb } from "@/db/client";
+import { getDb } from "@/lib/database/app-database";
 import { requirePageUser } from "@/lib/auth/page-user";
 import { readDevOutbox } from "@/lib/email/dev-outbox";
 import { listRecentSends } from "@/lib/email/queries";

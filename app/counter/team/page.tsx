@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { CounterRefusal } from "@/components/counter/counter-refusal";
 import { TeamTable } from "@/components/counter/team-table";
 import { PageIntro } from "@/components/ui/page-intro";
-import { getDb } from "@/db/client";
+import { getDb } from "@/lib/database/app-database";
 import { requirePageUser } from "@/lib/auth/page-user";
 import { listTeam, teamQuerySchema } from "@/lib/team/queries";
 

@@ -2,7 +2,7 @@ import { ImageResponse } from "next/og";
 import { drawnTireOf } from "@/components/reader/drawn-tire";
 import { FactRows } from "@/components/share-image/fact-rows";
 import { TireSketch } from "@/components/share-image/tire-sketch";
-import { getDb } from "@/db/client";
+import { getDb } from "@/lib/database/app-database";
 import { FIT_CARD_SLUG_PATTERN } from "@/lib/fit-cards/card-input";
 import { readFitCard } from "@/lib/fit-cards/read-card";
 import { shareImageFonts, shareImageSize } from "@/lib/share-image/fonts";

@@ -4,7 +4,7 @@ import { notFound } from "next/navigation";
 import { EmailCardPanel } from "@/components/fit-card/email-card-panel";
 import { FitCardView } from "@/components/fit-card/fit-card-view";
 import { FitCardWithdrawn } from "@/components/fit-card/fit-card-withdrawn";
-import { getDb } from "@/db/client";
+import { getDb } from "@/lib/database/app-database";
 import { hasRole } from "@/lib/auth/roles";
 import { getSessionUser } from "@/lib/auth/session";
 import { listFitCardSends } from "@/lib/email/queries";

@@ -5,7 +5,7 @@ import { NextRequest } from "next/server";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { GET as exportCatalog } from "@/app/api/v1/catalog/export/route";
 import { POST as importCatalog } from "@/app/api/v1/catalog/import/route";
-import { getDatabaseHandle, getDb } from "@/db/client";
+import { getDatabaseHandle, getDb } from "@/lib/database/app-database";
 import { auditEvent } from "@/db/schema";
 import { APP_ORIGIN, callRoute, signIn } from "../helpers/auth-session";
 

@@ -2,7 +2,7 @@ import { and, eq } from "drizzle-orm";
 import { NextRequest } from "next/server";
 import { afterAll, beforeAll, beforeEach, describe, expect, it, vi } from "vitest";
 import { POST as emailCard } from "@/app/api/v1/fit-cards/[slug]/email/route";
-import { getDatabaseHandle, getDb } from "@/db/client";
+import { getDatabaseHandle, getDb } from "@/lib/database/app-database";
 import { emailSend, stockItem, user } from "@/db/schema";
 import { getSessionUser } from "@/lib/auth/session";
 import { newFitCardSchema } from "@/lib/fit-cards/card-input";

@@ -6,7 +6,7 @@ import { GET as getCompare } from "@/app/api/v1/compare/route";
 import { GET as getDecode } from "@/app/api/v1/decode/route";
 import { POST as createCard } from "@/app/api/v1/fit-cards/route";
 import { GET as getPlus } from "@/app/api/v1/plus/route";
-import { getDatabaseHandle, getDb } from "@/db/client";
+import { getDatabaseHandle, getDb } from "@/lib/database/app-database";
 import { callRoute, signIn } from "../helpers/auth-session";
 
 vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typeof import("next/server")>()), connection: async () => undefined }));

@@ -1,7 +1,7 @@
 import { NextRequest } from "next/server";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { GET } from "@/app/api/v1/plus/route";
-import { getDatabaseHandle, getDb } from "@/db/client";
+import { getDatabaseHandle, getDb } from "@/lib/database/app-database";
 import { stockItem } from "@/db/schema";
 import { speedSymbolRank } from "@/lib/tire";
 

@@ -1,9 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { eq } from "drizzle-orm";
 import { GET as authGet, POST as authPost } from "@/app/api/auth/[...all]/route";
-import { getDatabaseHandle, getDb } from "@/db/client";
+import { getDatabaseHandle, getDb } from "@/lib/database/app-database";
 import { account, user } from "@/db/schema";
-import { seedDemoAccounts } from "@/db/seed/accounts";
+import { seedDemoAccounts } from "@/lib/demo/accounts";
 import { callRoute, signIn } from "../helpers/auth-session";
 
 vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typeof import("next/server")>()), connection: async () => undefined }));

@@ -3,7 +3,7 @@ import { NextRequest } from "next/server";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { GET as getAlternatives } from "@/app/api/v1/alternatives/route";
 import { GET as getCatalog } from "@/app/api/v1/catalog/route";
-import { getDatabaseHandle, getDb } from "@/db/client";
+import { getDatabaseHandle, getDb } from "@/lib/database/app-database";
 
 // Outside a Next.js request `connection()` throws; here every call is a request of its own.
 vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typeof import("next/server")>()), connection: async () => undefined }));

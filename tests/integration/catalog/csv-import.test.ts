@@ -1,8 +1,8 @@
 import { and, count, countDistinct, eq, gt, like, min } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { auditEvent, stockItem, tireLine, user } from "@/db/schema";
-import { seedCatalog } from "@/db/seed/catalog";
-import { DEMO_CATALOG } from "@/db/seed/catalog-stock";
+import { seedCatalog } from "@/lib/demo/catalog";
+import { DEMO_CATALOG } from "@/lib/demo/catalog-stock";
 import { generatedCsvItems } from "../../fixtures/generated-csv-items";
 import { exportCatalogCsv } from "@/lib/catalog-csv/export";
 import { importCatalogCsv } from "@/lib/catalog-csv/import";

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { brand, stockItem, tireLine } from "@/db/schema";
-import { seedDemoData } from "@/db/seed";
-import { DEMO_CATALOG } from "@/db/seed/catalog-stock";
+import { seedDemoData } from "@/lib/demo";
+import { DEMO_CATALOG } from "@/lib/demo/catalog-stock";
 import { openTestDatabase, type TestDatabase, testDatabaseKinds } from "../helpers/test-database";
 
 describe.each(testDatabaseKinds)("demo catalog seed on %s", (kind) => {

@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { seedDemoData } from "@/db/seed";
-import { seedCatalog } from "@/db/seed/catalog";
+import { seedDemoData } from "@/lib/demo";
+import { seedCatalog } from "@/lib/demo/catalog";
 import { findAlternatives, type AlternativesOptions } from "@/lib/alternatives/find-alternatives";
 import { decodeAlternativesCursor } from "@/lib/alternatives/cursor";
 import { judgedCandidate } from "@/lib/alternatives/judged-candidate";

@@ -3,7 +3,7 @@ import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { GET as getAlternatives } from "@/app/api/v1/alternatives/route";
 import { DELETE as retire, PATCH as patch } from "@/app/api/v1/catalog/[sku]/route";
 import { POST as create } from "@/app/api/v1/catalog/route";
-import { getDatabaseHandle, getDb } from "@/db/client";
+import { getDatabaseHandle, getDb } from "@/lib/database/app-database";
 import { stockItem } from "@/db/schema";
 import { callRoute, signIn } from "../helpers/auth-session";
 

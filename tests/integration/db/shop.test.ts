@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
 import { shop } from "@/db/schema";
-import { seedDemoData, seedDemoDataIfEmpty } from "@/db/seed";
+import { seedDemoData, seedDemoDataIfEmpty } from "@/lib/demo";
 import { getShopContact } from "@/lib/shop/queries";
 import { openTestDatabase, type TestDatabase, testDatabaseKinds } from "../helpers/test-database";
 

@@ -1,7 +1,7 @@
 import { NextRequest } from "next/server";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { GET, POST } from "@/app/api/v1/quote-requests/route";
-import { getDatabaseHandle, getDb } from "@/db/client";
+import { getDatabaseHandle, getDb } from "@/lib/database/app-database";
 import { quoteRequest } from "@/db/schema";
 import { signFormToken } from "@/lib/quotes/form-token";
 import { type FakeResend, startFakeResend } from "@/scripts/fake-resend.mjs";

@@ -1,7 +1,7 @@
 import { readFileSync } from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
-import { DEMO_BRANDS } from "@/db/seed/catalog-lines";
+import { DEMO_BRANDS } from "@/lib/demo/catalog-lines";
 import { CATALOG_CSV_COLUMN_NAMES, CATALOG_CSV_COLUMNS } from "@/lib/catalog-csv/columns";
 import { readCatalogCsv } from "@/lib/catalog-csv/read-file";
 import { readCsvRow } from "@/lib/catalog-csv/read-row";

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { DEMO_BRANDS } from "@/db/seed/catalog-lines";
-import { DEMO_CATALOG, generateStock } from "@/db/seed/catalog-stock";
+import { DEMO_BRANDS } from "@/lib/demo/catalog-lines";
+import { DEMO_CATALOG, generateStock } from "@/lib/demo/catalog-stock";
 import { sizeFromSlug } from "@/lib/tire";
 import { hiddenMarketNames, marketNameHash } from "../../fixtures/market-name-hashes";
 

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { connection } from "next/server";
-import { getDb } from "@/db/client";
+import { getDb } from "@/lib/database/app-database";
 import { CounterRefusal } from "@/components/counter/counter-refusal";
 import { ItemForm } from "@/components/counter/item-form";
 import { dollarsText } from "@/components/counter/item-form-values";

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { connection } from "next/server";
-import { getDb } from "@/db/client";
+import { getDb } from "@/lib/database/app-database";
 import { CounterRefusal } from "@/components/counter/counter-refusal";
 import { ItemForm } from "@/components/counter/item-form";
 import { PageIntro } from "@/components/ui/page-intro";

@@ -3,7 +3,7 @@ import { connection } from "next/server";
 import { CounterRefusal } from "@/components/counter/counter-refusal";
 import { RequestList } from "@/components/counter/request-list";
 import { PageIntro } from "@/components/ui/page-intro";
-import { getDb } from "@/db/client";
+import { getDb } from "@/lib/database/app-database";
 import { requirePageUser } from "@/lib/auth/page-user";
 import { listQuoteRequests, requestListQuerySchema } from "@/lib/quotes/queries";
 

@@ -8,7 +8,7 @@ import { RequestStatusBadge } from "@/components/counter/request-list";
 import { RequestReplyForm } from "@/components/counter/request-reply-form";
 import { RequestStatusButtons } from "@/components/counter/request-status-buttons";
 import { PageIntro } from "@/components/ui/page-intro";
-import { getDb } from "@/db/client";
+import { getDb } from "@/lib/database/app-database";
 import { requirePageUser } from "@/lib/auth/page-user";
 import { getQuoteRequest, requestIdSchema } from "@/lib/quotes/queries";
 

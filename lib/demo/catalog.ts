@@ -1,6 +1,6 @@
 import { sql } from "drizzle-orm";
-import type { Database } from "../client";
-import { brand, stockFitment, stockItem, tireLine, type NewTireLine } from "../schema";
+import type { Database } from "@/db/client";
+import { brand, stockFitment, stockItem, tireLine, type NewTireLine } from "@/db/schema";
 import { buildStockRow } from "@/lib/stock/build-stock-row";
 import { insertStockRows } from "@/lib/stock/insert-stock-rows";
 import { CATEGORY_TRAITS, DEMO_BRANDS, type LineCategory } from "./catalog-lines";

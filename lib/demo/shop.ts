@@ -1,4 +1,4 @@
-import type { NewShop } from "../schema";
+import type { NewShop } from "@/db/schema";
 
 /** An invented shop in an invented town; the 555-01xx number is reserved for fiction. */
 export const demoShop: NewShop = {

@@ -1,4 +1,4 @@
-import type { Season, Terrain } from "../schema";
+import type { Season, Terrain } from "@/db/schema";
 
 /** What a line is made for; it decides the sizes it comes in, its speed ratings and its price. */
 export type LineCategory =

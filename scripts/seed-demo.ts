@@ -1,10 +1,10 @@
-import { migrateDatabase, openDatabase } from "./client";
-import { seedDemoData } from "./seed";
-import { seedDemoAccounts } from "./seed/accounts";
-import { readServerEnv } from "@/lib/env/server-env";
+import { migrateDatabase, openDatabase } from "@/db/client";
+import { seedDemoData } from "@/lib/demo";
+import { seedDemoAccounts } from "@/lib/demo/accounts";
+import { readEnv } from "@/lib/env/env";
 
 // Re-seeds the demo data on demand. With PGlite, stop the dev server first: one process per data folder.
-const env = readServerEnv();
+const env = readEnv();
 const handle = await openDatabase({ url: env.DATABASE_URL, dataDir: env.PGLITE_DATA_DIR });
 try {
   await migrateDatabase(handle);

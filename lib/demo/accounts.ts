@@ -1,6 +1,6 @@
 import { inArray } from "drizzle-orm";
-import type { Database } from "../client";
-import { user, type Role } from "../schema";
+import type { Database } from "@/db/client";
+import { user, type Role } from "@/db/schema";
 import { createAuth } from "@/lib/auth/create-auth";
 
 export const DEMO_PASSWORD = "sidewise-demo";

@@ -1,6 +1,6 @@
 import { count } from "drizzle-orm";
 import type { PgDatabase, PgQueryResultHKT } from "drizzle-orm/pg-core";
-import * as schema from "../schema";
+import * as schema from "@/db/schema";
 import { clearCatalog, seedCatalog } from "./catalog";
 import { DEMO_CATALOG } from "./catalog-stock";
 import { demoShop } from "./shop";
