@@ -10,12 +10,6 @@ const PLACEHOLDER_SKU = "EDITED-ITEM";
 
 const sentence = (text: string) => `${text.charAt(0).toUpperCase()}${text.slice(1)}${/[.!?]$/.test(text) ? "" : "."}`;
 
-/** A refusal from the API as it reads next to its field: `The field "x" is invalid: 300 is …` → `300 is …`. */
-export function fieldMessage(message: string): string {
-  const reason = message.replace(/^The field "\w+" is invalid:\s*/, "").replace(/^The field "\w+" is required\.?$/, "fill in this field");
-  return sentence(reason);
-}
-
 /**
  * Checks the form as the server will, before anything is sent: each field that cannot be read gets
  * its own message, then the tire core reads the whole item (the first problem it finds is named).

@@ -16,8 +16,8 @@ export function parseWholeNumber(text: string): number | null {
 export type CatalogWriteResult = { ok: true } | { ok: false; field: string | null; message: string };
 
 /**
- * Sends a write to the catalog API and reads its refusal: which field it blames (from
- * `The field "loadIndex" is invalid: …`) and the message to show.
+ * Sends a write to the catalog API and reads its refusal: the message to show and the field it
+ * names (the API's `field`), if any.
  */
 export async function sendCatalogWrite(method: "POST" | "PATCH" | "DELETE", path: string, body?: unknown): Promise<CatalogWriteResult> {
   let response: Response;
@@ -31,11 +31,8 @@ export async function sendCatalogWrite(method: "POST" | "PATCH" | "DELETE", path
     return { ok: false, field: null, message: "The shop's server could not be reached. Check the connection and try again." };
   }
   if (response.ok) return { ok: true };
-  const refusal = (await response.json().catch(() => null)) as { error?: { code?: string; message?: string } } | null;
-  const message = refusal?.error?.message ?? `The server answered ${response.status}. Try again.`;
-  const named = /^The field "(\w+)"/.exec(message)?.[1] ?? null;
-  const field = named ?? ({ unknown_line: "line", already_exists: "sku" } as Record<string, string>)[refusal?.error?.code ?? ""] ?? null;
-  return { ok: false, field, message };
+  const refusal = (await response.json().catch(() => null)) as { error?: { message?: string; field?: string } } | null;
+  return { ok: false, field: refusal?.error?.field ?? null, message: refusal?.error?.message ?? `The server answered ${response.status}. Try again.` };
 }
 
 /** The item form's fields, named as the catalog API names them (the price is typed in dollars). */

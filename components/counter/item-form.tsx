@@ -4,7 +4,7 @@ import { useRouter } from "next/navigation";
 import { useEffect, useRef, useState, type FormEvent } from "react";
 import type { BrandWithLines } from "@/lib/counter/queries";
 import { ItemField, itemInputClass, useHydrated } from "./item-field";
-import { checkItemForm, fieldMessage } from "./item-form-check";
+import { checkItemForm } from "./item-form-check";
 import { ITEM_FIELDS, sendCatalogWrite, type ItemField as Field, type ItemFormErrors, type ItemFormValues } from "./item-form-values";
 import { ItemSizePreview } from "./item-size-preview";
 
@@ -64,7 +64,7 @@ export function ItemForm({ brands, initial, sku }: ItemFormProps) {
     }
     setBusy(false);
     const field = ITEM_FIELDS.find((name) => name === result.field);
-    refuse(field ? { [field]: fieldMessage(result.message) } : { form: result.message });
+    refuse(field ? { [field]: result.message } : { form: result.message });
   }
 
   const field = (name: Field) => ({ name, error: errors[name] });

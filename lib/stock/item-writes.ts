@@ -9,13 +9,16 @@ import type { NewStockItemBody, StockItemChanges } from "./item-bodies";
 import { buildStockRow, type StockItemInput, type StockLine, type StockRowProblem } from "./build-stock-row";
 import { tireColumns, toTire, type Tire } from "@/lib/catalog/catalog-tire";
 
-export type StockWriteResult = { ok: true; tire: Tire } | { ok: false; code: ApiErrorCode; message: string };
+/** A refusal names the field to blame when there is one, so that a form can show it there. */
+export type StockWriteResult = { ok: true; tire: Tire } | { ok: false; code: ApiErrorCode; message: string; field?: string };
 
-const refuse = (code: ApiErrorCode, message: string): StockWriteResult => ({ ok: false, code, message });
+const refuse = (code: ApiErrorCode, message: string, field?: string): StockWriteResult => ({ ok: false, code, message, field });
 const refusedRow = (problem: StockRowProblem) =>
-  problem.unmeasurable ? refuse("unreadable", `${problem.reason}.`) : refuse("invalid_parameter", `The field "${problem.field}" is invalid: ${problem.reason}.`);
+  problem.unmeasurable
+    ? refuse("unreadable", `${problem.reason}.`, problem.field)
+    : refuse("invalid_parameter", `The field "${problem.field}" is invalid: ${problem.reason}.`, problem.field);
 const unknownLine = (brandName: string, lineName: string) =>
-  refuse("unknown_line", `The catalog has no line "${lineName}" from the brand "${brandName}"; add the line first.`);
+  refuse("unknown_line", `The catalog has no line "${lineName}" from the brand "${brandName}"; add the line first.`, "line");
 
 const AUDITED_FIELDS = ["priceCents", "quantityOnHand", "designation", "loadIndex", "loadIndexDual", "speedSymbol", "loadRange", "extraLoad", "lineId"] as const;
 
@@ -79,7 +82,7 @@ export async function createStockItem(db: Database, body: NewStockItemBody, acto
     if (!built.ok) return refusedRow(built.problem);
     const { row } = built;
     const inserted = await tx.insert(stockItem).values(row).onConflictDoNothing({ target: stockItem.sku }).returning({ id: stockItem.id });
-    if (inserted.length === 0) return refuse("already_exists", `The SKU "${row.sku}" is taken (retired items keep theirs).`);
+    if (inserted.length === 0) return refuse("already_exists", `The SKU "${row.sku}" is taken (retired items keep theirs).`, "sku");
     const summary = `Added ${row.designation} (${brandName} ${lineName}) at ${formatPrice(row.priceCents)}, ${row.quantityOnHand} on hand`;
     await recordAudit(tx, actor, [{ action: "item_added", subject: row.sku, summary }]);
     return currentTire(tx, row.sku);

@@ -55,7 +55,7 @@ describe("staff catalog writes", () => {
     expect(body).toMatchObject({ sku: newItem.sku, brand: "Quensal", line: "Aldermoor Tour", designation: "225/65R17", speedSymbol: "H", loadRange: null, extraLoad: false, priceCents: 15_999, inStock: true });
     expect(body.overallDiameterMm).toBeCloseTo(724.3, 6);
     expect(await finderSkus()).toContain(newItem.sku);
-    expect((await post(newItem)).body.error.code).toBe("already_exists");
+    expect((await post(newItem)).body.error).toMatchObject({ code: "already_exists", field: "sku" });
   });
 
   it("change price, quantity and line, rebuilding the row", async () => {
@@ -75,24 +75,25 @@ describe("staff catalog writes", () => {
   });
 
   it.each([
-    [{ ...newItem, sku: undefined }, 400, "missing_parameter"],
-    [{ ...newItem, sku: "has space" }, 400, "invalid_parameter"],
-    [{ ...newItem, sku: "X-1", brand: "Nobrand" }, 422, "unknown_line"],
-    [{ ...newItem, sku: "X-1", line: "Aldermoor Nothing" }, 422, "unknown_line"],
-    [{ ...newItem, sku: "X-1", designation: "hello" }, 400, "invalid_parameter"],
-    [{ ...newItem, sku: "X-1", loadIndex: 300 }, 400, "invalid_parameter"],
-    [{ ...newItem, sku: "X-1", speedSymbol: "Z" }, 400, "invalid_parameter"],
-    [{ ...newItem, sku: "X-1", designation: "LT265/75R16" }, 400, "invalid_parameter"],
-    [{ ...newItem, sku: "X-1", priceCents: -1 }, 400, "invalid_parameter"],
-    [{ ...newItem, sku: "X-1", quantity: 1.5 }, 400, "invalid_parameter"],
-    [{ ...newItem, sku: "X-1", colour: "black" }, 400, "invalid_parameter"],
-    ["{not json", 400, "invalid_parameter"],
-    [[newItem], 400, "invalid_parameter"],
-  ])("refuse a new item %j with %i %s", async (body, status, code) => {
+    [{ ...newItem, sku: undefined }, 400, "missing_parameter", "sku"],
+    [{ ...newItem, sku: "has space" }, 400, "invalid_parameter", "sku"],
+    [{ ...newItem, sku: "X-1", brand: "Nobrand" }, 422, "unknown_line", "line"],
+    [{ ...newItem, sku: "X-1", line: "Aldermoor Nothing" }, 422, "unknown_line", "line"],
+    [{ ...newItem, sku: "X-1", designation: "hello" }, 400, "invalid_parameter", "designation"],
+    [{ ...newItem, sku: "X-1", loadIndex: 300 }, 400, "invalid_parameter", "loadIndex"],
+    [{ ...newItem, sku: "X-1", speedSymbol: "Z" }, 400, "invalid_parameter", "speedSymbol"],
+    [{ ...newItem, sku: "X-1", designation: "LT265/75R16" }, 400, "invalid_parameter", "loadRange"],
+    [{ ...newItem, sku: "X-1", priceCents: -1 }, 400, "invalid_parameter", "priceCents"],
+    [{ ...newItem, sku: "X-1", quantity: 1.5 }, 400, "invalid_parameter", "quantity"],
+    [{ ...newItem, sku: "X-1", colour: "black" }, 400, "invalid_parameter", "body"],
+    ["{not json", 400, "invalid_parameter", undefined],
+    [[newItem], 400, "invalid_parameter", "body"],
+  ])("refuse a new item %j with %i %s, naming the field %s", async (body, status, code, field) => {
     const response = await post(body);
     expect(response.status).toBe(status);
     expect(response.body.error.code).toBe(code);
     expect(typeof response.body.error.message).toBe("string");
+    expect(response.body.error.field).toBe(field);
   });
 
   it.each([

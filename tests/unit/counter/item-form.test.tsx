@@ -88,7 +88,7 @@ describe("the item form", () => {
   });
 
   it("puts a refusal from the server next to the field it names", async () => {
-    fetchMock.mockResolvedValue(new Response(JSON.stringify({ error: { code: "already_exists", message: 'The SKU "QNS-NEW-1" is taken (retired items keep theirs).' } }), { status: 409 }));
+    fetchMock.mockResolvedValue(new Response(JSON.stringify({ error: { code: "already_exists", message: 'The SKU "QNS-NEW-1" is taken (retired items keep theirs).', field: "sku" } }), { status: 409 }));
     render(<ItemForm brands={brands} initial={empty} />);
     fillValidItem();
     submit();

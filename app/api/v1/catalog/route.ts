@@ -19,5 +19,5 @@ export const GET = withRoute({ role: "public", query: catalogQuerySchema }, asyn
 /** Staff add a stock item to a line the catalog already has → 201 Tire. */
 export const POST = withRoute({ role: "staff", body: newStockItemSchema }, async ({ db, user, body }) => {
   const result = await createStockItem(db, body, user);
-  return result.ok ? NextResponse.json(result.tire, { status: 201 }) : apiError(result.code, result.message);
+  return result.ok ? NextResponse.json(result.tire, { status: 201 }) : apiError(result.code, result.message, undefined, result.field);
 });

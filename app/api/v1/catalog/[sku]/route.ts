@@ -7,7 +7,7 @@ import { retireStockItem, updateStockItem } from "@/lib/stock/item-writes";
 /** Staff change a current item's price, quantity or other fields → 200 Tire. */
 export const PATCH = withRoute({ role: "staff", params: skuParamsSchema, body: stockItemChangesSchema }, async ({ db, user, params, body }) => {
   const result = await updateStockItem(db, params.sku, body, user);
-  return result.ok ? NextResponse.json(result.tire) : apiError(result.code, result.message);
+  return result.ok ? NextResponse.json(result.tire) : apiError(result.code, result.message, undefined, result.field);
 });
 
 /** Staff retire an item → 204; it leaves the catalog and the finder but keeps its row. */
