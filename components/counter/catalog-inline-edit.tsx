@@ -3,7 +3,8 @@
 import { useRouter } from "next/navigation";
 import { useId, useRef, useState, type FormEvent, type KeyboardEvent } from "react";
 import { useHydrated } from "./item-field";
-import { dollarsText, parseDollars, parseWholeNumber, sendCatalogWrite } from "./item-form-values";
+import { centsToDollarsText, parseDollars } from "@/lib/money/money";
+import { parseWholeNumber, sendCatalogWrite } from "./item-form-values";
 
 type Status = { kind: "idle" } | { kind: "saving" } | { kind: "saved" } | { kind: "error"; message: string };
 
@@ -24,7 +25,7 @@ export function CatalogInlineEdit({ sku, field, value, label }: CatalogInlineEdi
   const router = useRouter();
   const id = useId();
   const hydrated = useHydrated();
-  const shown = field === "priceCents" ? dollarsText(value) : String(value);
+  const shown = field === "priceCents" ? centsToDollarsText(value) : String(value);
   const [text, setText] = useState(shown);
   const [status, setStatus] = useState<Status>({ kind: "idle" });
   const lastSent = useRef(value);
@@ -43,7 +44,7 @@ export function CatalogInlineEdit({ sku, field, value, label }: CatalogInlineEdi
     setStatus({ kind: "saving" });
     const result = await sendCatalogWrite("PATCH", `/api/v1/catalog/${encodeURIComponent(sku)}`, { [field]: parsed });
     if (result.ok) {
-      setText(field === "priceCents" ? dollarsText(parsed) : String(parsed));
+      setText(field === "priceCents" ? centsToDollarsText(parsed) : String(parsed));
       setStatus({ kind: "saved" });
       router.refresh();
     } else {
@@ -59,7 +60,7 @@ export function CatalogInlineEdit({ sku, field, value, label }: CatalogInlineEdi
 
   function cancelOnEscape(event: KeyboardEvent<HTMLInputElement>) {
     if (event.key !== "Escape") return;
-    setText(field === "priceCents" ? dollarsText(lastSent.current) : String(lastSent.current));
+    setText(field === "priceCents" ? centsToDollarsText(lastSent.current) : String(lastSent.current));
     setStatus({ kind: "idle" });
   }
 

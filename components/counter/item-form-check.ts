@@ -1,6 +1,7 @@
 import type { NewStockItemBody } from "@/lib/stock/item-bodies";
 import { buildStockRow } from "@/lib/stock/build-stock-row";
-import { parseDollars, parseWholeNumber, type ItemField, type ItemFormErrors, type ItemFormValues } from "./item-form-values";
+import { parseDollars } from "@/lib/money/money";
+import { parseWholeNumber, type ItemField, type ItemFormErrors, type ItemFormValues } from "./item-form-values";
 
 export type ItemFormCheck = { ok: true; body: NewStockItemBody } | { ok: false; errors: ItemFormErrors };
 

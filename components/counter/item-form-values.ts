@@ -1,13 +1,3 @@
-/** "189.99", "$189", "1,250.5" → whole cents; null when the text is not an amount of dollars. */
-export function parseDollars(text: string): number | null {
-  const match = /^\$?\s*(\d{1,8})(?:\.(\d{0,2}))?$/.exec(text.trim().replace(/,/g, ""));
-  if (!match) return null;
-  return Number(match[1]) * 100 + Number((match[2] ?? "").padEnd(2, "0"));
-}
-
-/** Cents as the price inputs show them: 18999 → "189.99". */
-export const dollarsText = (cents: number): string => (cents / 100).toFixed(2);
-
 /** A count or an index typed as digits only; null for anything else. */
 export function parseWholeNumber(text: string): number | null {
   return /^\d{1,9}$/.test(text.trim()) ? Number(text.trim()) : null;

@@ -1,6 +1,7 @@
 "use client";
 
 import type { FinderQuery } from "@/lib/finder/finder-query";
+import { centsToDollarsText, parseDollars } from "@/lib/money/money";
 import { FINDER_SORTS, SEASONS, TERRAINS } from "@/lib/tire";
 
 const sortLabels: Record<(typeof FINDER_SORTS)[number], string> = {
@@ -18,10 +19,7 @@ interface FinderFiltersProps {
 
 const select = "min-h-11 w-full rounded border border-rule bg-sheet px-2 text-ink";
 
-function dollarsToCents(value: string): number | undefined {
-  const dollars = Number.parseFloat(value);
-  return Number.isFinite(dollars) && dollars >= 0 ? Math.round(dollars * 100) : undefined;
-}
+const typedCents = (value: string): number | undefined => parseDollars(value) ?? undefined;
 
 /** Filters and sort; every change lands in the address so a reload or a pasted link shows the same list. */
 export function FinderFilters({ query, brands, defaultTolerancePct, onChange }: FinderFiltersProps) {
@@ -44,11 +42,11 @@ export function FinderFilters({ query, brands, defaultTolerancePct, onChange }: 
       <ChoiceSelect label="Brand" value={query.brand} choices={brands} onChange={(brand) => onChange({ brand })} />
       <label className="flex flex-col gap-1">
         Lowest price ($)
-        <input type="number" min={0} step={1} inputMode="numeric" className={select} defaultValue={query.minPriceCents === undefined ? "" : query.minPriceCents / 100} onBlur={(event) => onChange({ minPriceCents: dollarsToCents(event.target.value) })} />
+        <input type="text" inputMode="decimal" autoComplete="off" placeholder="any" className={select} defaultValue={query.minPriceCents === undefined ? "" : centsToDollarsText(query.minPriceCents)} onBlur={(event) => onChange({ minPriceCents: typedCents(event.target.value) })} />
       </label>
       <label className="flex flex-col gap-1">
         Highest price ($)
-        <input type="number" min={0} step={1} inputMode="numeric" className={select} defaultValue={query.maxPriceCents === undefined ? "" : query.maxPriceCents / 100} onBlur={(event) => onChange({ maxPriceCents: dollarsToCents(event.target.value) })} />
+        <input type="text" inputMode="decimal" autoComplete="off" placeholder="any" className={select} defaultValue={query.maxPriceCents === undefined ? "" : centsToDollarsText(query.maxPriceCents)} onBlur={(event) => onChange({ maxPriceCents: typedCents(event.target.value) })} />
       </label>
       <label className="col-span-2 flex flex-col gap-1">
         Diameter tolerance: ±{tolerance} %

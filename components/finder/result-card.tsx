@@ -5,7 +5,7 @@ import { ScaledTireDrawing } from "@/components/diagram/scaled-tire-drawing";
 import type { DrawnTire } from "@/components/diagram/drawing-layout";
 import { drawnTireOf } from "@/components/reader/drawn-tire";
 import type { Candidate, NearMiss } from "@/lib/finder/alternatives-response";
-import { formatPrice } from "@/lib/shop/money";
+import { formatPrice } from "@/lib/money/money";
 import { formatServiceDescription, formatSignedPercent, parseMarking, type UnitSystem } from "@/lib/tire";
 import { RuleNotes } from "@/components/ui/rule-notes";
 

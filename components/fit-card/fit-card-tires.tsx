@@ -1,5 +1,5 @@
 import type { CardTire } from "@/lib/fit-cards/read-card";
-import { formatPrice } from "@/lib/shop/money";
+import { formatPrice } from "@/lib/money/money";
 import { formatServiceDescription, formatSignedPercent } from "@/lib/tire";
 import { RuleNotes } from "@/components/ui/rule-notes";
 

@@ -23,7 +23,7 @@ export const CATALOG_CSV_COLUMNS = [
   { name: "speed_symbol", required: true, meaning: "The speed symbol, such as T, H or V.", example: "H" },
   { name: "load_range", required: false, meaning: "The load range letter of a light-truck tire, such as E. Leave empty for passenger tires.", example: "" },
   { name: "extra_load", required: false, meaning: "yes for an extra load (XL) passenger tire; no or empty otherwise.", example: "no" },
-  { name: "price", required: true, meaning: "The price of one tire in US dollars, with a dot before the cents and no thousands separator.", example: "159.00" },
+  { name: "price", required: true, meaning: "The price of one tire in US dollars, with a dot before the cents; a dollar sign and thousands commas (1,204.50) are fine.", example: "159.00" },
   { name: "quantity", required: true, meaning: "How many are on hand, a whole number (0 when out of stock).", example: "8" },
 ] as const satisfies readonly CatalogCsvColumn[];
 

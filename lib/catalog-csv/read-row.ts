@@ -4,7 +4,7 @@ import { hasControlCharacters } from "@/lib/validation/text";
 import { buildStockRow, type StockItemInput, type StockLine, type StockRowProblem } from "@/lib/stock/build-stock-row";
 import { isLoadRange, isSpeedSymbol, LOAD_INDEX_MAX, LOAD_INDEX_MIN } from "@/lib/tire";
 import type { CatalogCsvColumnName, CatalogCsvRecord, CsvRefusal } from "./columns";
-import { centsToDollars, dollarsToCents, MAX_PRICE_CENTS } from "./money";
+import { centsToDollarsText, parseDollars, MAX_PRICE_CENTS } from "@/lib/money/money";
 
 /** One row read and checked: the item as the catalog's write path takes it, and the line it belongs to. */
 export interface CatalogCsvRow {
@@ -82,10 +82,10 @@ export function readCsvRow(record: CatalogCsvRecord, line: number): CsvRowResult
   if (!extraLoad && !NO.includes(extraLoadText)) refuse("extra_load", `extra_load "${cellText(record, "extra_load")}" should be yes or no`);
 
   const priceText = required("price");
-  const priceCents = priceText === "" ? null : dollarsToCents(priceText);
+  const priceCents = priceText === "" ? null : parseDollars(priceText);
   if (priceText !== "" && priceCents === null) {
     refuse("price", AMOUNT_SHAPE.test(priceText)
-      ? `price ${priceText} is more than a catalog price can be (at most ${centsToDollars(MAX_PRICE_CENTS)})`
+      ? `price ${priceText} is more than a catalog price can be (at most ${centsToDollarsText(MAX_PRICE_CENTS)})`
       : `price "${priceText}" is not an amount in dollars such as 129.99`);
   }
   const quantityText = required("quantity");

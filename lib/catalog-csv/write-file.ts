@@ -1,6 +1,6 @@
 import Papa from "papaparse";
 import { CATALOG_CSV_COLUMN_NAMES, CATALOG_CSV_COLUMNS, type CatalogCsvColumnName } from "./columns";
-import { centsToDollars } from "./money";
+import { centsToDollarsText } from "@/lib/money/money";
 
 /** A catalog item as the CSV writes it. */
 export interface CatalogCsvItem {
@@ -28,7 +28,7 @@ function cells(item: CatalogCsvItem): Record<CatalogCsvColumnName, string> {
     speed_symbol: item.speedSymbol,
     load_range: item.loadRange ?? "",
     extra_load: item.extraLoad ? "yes" : "no",
-    price: centsToDollars(item.priceCents),
+    price: centsToDollarsText(item.priceCents),
     quantity: String(item.quantity),
   };
 }

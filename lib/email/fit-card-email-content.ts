@@ -1,6 +1,6 @@
 import { originalServiceWords } from "@/lib/fit-cards/original-words";
 import type { PublicFitCard } from "@/lib/fit-cards/read-card";
-import { formatPrice } from "@/lib/shop/money";
+import { formatPrice } from "@/lib/money/money";
 import type { ShopContact } from "@/lib/shop/queries";
 import { compareSizes, formatServiceDescription, formatSignedPercent, measurableSizeFromSlug, type MeasurableSize } from "@/lib/tire";
 

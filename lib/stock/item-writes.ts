@@ -2,7 +2,7 @@ import { and, eq, sql } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { brand, stockItem, tireLine } from "@/db/schema";
 import type { ApiErrorCode } from "@/lib/api/errors";
-import { formatPrice } from "@/lib/shop/money";
+import { formatPrice } from "@/lib/money/money";
 import { changedFields, recordAudit, type Actor } from "@/lib/audit/record";
 import { ofBrand, ofLine } from "@/lib/catalog/columns";
 import type { NewStockItemBody, StockItemChanges } from "./item-bodies";

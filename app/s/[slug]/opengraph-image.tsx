@@ -6,7 +6,7 @@ import { getDb } from "@/lib/database/app-database";
 import { FIT_CARD_SLUG_PATTERN } from "@/lib/fit-cards/card-input";
 import { readFitCard } from "@/lib/fit-cards/read-card";
 import { shareImageFonts, shareImageSize } from "@/lib/share-image/fonts";
-import { formatPrice } from "@/lib/shop/money";
+import { formatPrice } from "@/lib/money/money";
 import { compareSizes, formatLength, formatSignedPercent, measurableSizeFromSlug, sizeGeometry, type MeasurableSize } from "@/lib/tire";
 
 export const size = shareImageSize;

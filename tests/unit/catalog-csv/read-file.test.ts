@@ -22,8 +22,12 @@ describe("readCatalogCsv", () => {
     expect(result.rows.map((row) => [row.line, row.item.sku])).toEqual([[2, "QNS-T1"], [5, "QNS-T2"]]);
     expect(result).toMatchObject({ refusals: [], headerRefused: false, rowCount: 2 });
 
-    const shuffled = read('Price,SKU,Quantity,Load Index,Speed-Symbol,Size,Brand,LINE\n"1,159.00",X-1,4,102,H,225/65R17,Quensal,Aldermoor Tour\n');
-    expect(shuffled.refusals).toEqual([{ line: 2, column: "price", reason: 'price "1,159.00" is not an amount in dollars such as 129.99' }]);
+    // A price as a person writes it, thousands comma and dollar sign included, reads as everywhere else.
+    const shuffled = read('Price,SKU,Quantity,Load Index,Speed-Symbol,Size,Brand,LINE\n"$1,159.00",X-1,4,102,H,225/65R17,Quensal,Aldermoor Tour\n');
+    expect(shuffled.refusals).toEqual([]);
+    expect(shuffled.rows[0]?.item).toMatchObject({ sku: "X-1", priceCents: 115_900 });
+    const unreadable = read('price,sku,quantity,load_index,speed_symbol,size,brand,line\n"11,59.00",X-1,4,102,H,225/65R17,Quensal,Aldermoor Tour\n');
+    expect(unreadable.refusals).toEqual([{ line: 2, column: "price", reason: 'price "11,59.00" is not an amount in dollars such as 129.99' }]);
     const quoted = read('price,sku,quantity,load_index,speed_symbol,size,brand,line\n"1159.00",X-1,4,102,H,225/65R17,"Quensal","Aldermoor Tour"\n');
     expect(quoted.rows[0]?.item).toMatchObject({ sku: "X-1", priceCents: 115_900, quantity: 4 });
   });

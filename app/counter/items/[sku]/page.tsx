@@ -5,7 +5,7 @@ import { connection } from "next/server";
 import { getDb } from "@/lib/database/app-database";
 import { CounterRefusal } from "@/components/counter/counter-refusal";
 import { ItemForm } from "@/components/counter/item-form";
-import { dollarsText } from "@/components/counter/item-form-values";
+import { centsToDollarsText } from "@/lib/money/money";
 import { ItemRetire } from "@/components/counter/item-retire";
 import { PageIntro } from "@/components/ui/page-intro";
 import { requirePageUser } from "@/lib/auth/page-user";
@@ -29,7 +29,7 @@ export default async function EditItemPage({ params }: { params: Promise<{ sku: 
     loadIndex: String(item.loadIndex),
     loadIndexDual: item.loadIndexDual === null ? "" : String(item.loadIndexDual),
     loadRange: item.loadRange ?? "",
-    priceCents: dollarsText(item.priceCents),
+    priceCents: centsToDollarsText(item.priceCents),
     quantity: String(item.quantity),
   };
   return (
