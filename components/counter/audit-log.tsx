@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { AUDIT_ACTIONS, type AuditAction } from "@/lib/tire";
 import { AUDIT_PAGE_SIZE, type AuditListing, type AuditQuery } from "@/lib/audit/queries";
+import { formatCount, formatDateTime } from "@/lib/format/format";
 
 const actionLabels: Record<AuditAction, string> = {
   item_added: "Item added",
@@ -9,8 +10,6 @@ const actionLabels: Record<AuditAction, string> = {
   catalog_import: "Catalog import",
   role_changed: "Role changed",
 };
-
-const when = new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" });
 
 function pageHref(query: AuditQuery, page: number): string {
   const params = new URLSearchParams();
@@ -44,7 +43,7 @@ export function AuditLog({ listing, query }: { listing: AuditListing; query: Aud
         </button>
       </form>
       <p role="status" className="mb-3 text-ink-soft">
-        {listing.total === 0 ? "Nothing has been recorded yet." : `${listing.total.toLocaleString("en-US")} entries · page ${query.page} of ${pages} · times in UTC`}
+        {listing.total === 0 ? "Nothing has been recorded yet." : `${formatCount(listing.total)} entries · page ${query.page} of ${pages} · times in UTC`}
       </p>
       {listing.events.length > 0 ? (
         <div role="region" aria-label="Audit entries" tabIndex={0} className="overflow-x-auto rounded border border-rule bg-sheet">
@@ -61,7 +60,7 @@ export function AuditLog({ listing, query }: { listing: AuditListing; query: Aud
             <tbody className="divide-y divide-rule">
               {listing.events.map((event) => (
                 <tr key={event.id} className="align-top">
-                  <td className="p-3 whitespace-nowrap">{when.format(event.at)}</td>
+                  <td className="p-3 whitespace-nowrap">{formatDateTime(event.at)}</td>
                   <td className="p-3 break-all">{event.actorEmail}</td>
                   <td className="p-3 whitespace-nowrap">{actionLabels[event.action]}</td>
                   <td className="p-3 font-mono text-sm break-all">{event.subject}</td>

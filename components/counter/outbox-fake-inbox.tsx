@@ -1,6 +1,5 @@
 import type { DevOutbox } from "@/lib/email/dev-outbox";
-
-const when = new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeStyle: "medium", timeZone: "UTC" });
+import { formatDateTime } from "@/lib/format/format";
 
 /** What the local fake e-mail service received, newest first, with each e-mail's text and links. */
 export function OutboxFakeInbox({ outbox }: { outbox: DevOutbox }) {
@@ -29,7 +28,7 @@ export function OutboxFakeInbox({ outbox }: { outbox: DevOutbox }) {
           <li key={email.id} className="rounded border border-rule bg-sheet p-4">
             <p className="font-semibold break-words">{email.subject}</p>
             <p className="text-sm text-ink-soft">
-              To <span className="break-all">{email.to}</span> · <time dateTime={email.receivedAt.toISOString()}>{when.format(email.receivedAt)} UTC</time>
+              To <span className="break-all">{email.to}</span> · <time dateTime={email.receivedAt.toISOString()}>{formatDateTime(email.receivedAt, { seconds: true })} UTC</time>
             </p>
             {email.links.length > 0 ? (
               <ul className="mt-2 flex flex-col">

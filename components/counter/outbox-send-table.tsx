@@ -1,7 +1,6 @@
 import { statusLabel } from "@/components/fit-card/email-history";
 import type { EmailSendRow } from "@/lib/email/queries";
-
-const when = new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" });
+import { formatDateTime } from "@/lib/format/format";
 
 const kindLabel = { fit_card: "Fit card", quote_to_shop: "Request to the shop", quote_confirmation: "Request confirmation", quote_reply: "Reply to a request" } as const;
 
@@ -24,7 +23,7 @@ export function OutboxSendTable({ sends }: { sends: EmailSendRow[] }) {
         <tbody>
           {sends.map((send) => (
             <tr key={send.id} className="border-b border-rule align-top">
-              <td className="py-2 pr-3">{when.format(send.createdAt)}</td>
+              <td className="py-2 pr-3">{formatDateTime(send.createdAt)}</td>
               <td className="py-2 pr-3">
                 <span className="font-semibold">{kindLabel[send.kind]}</span> to <span className="wrap-anywhere">{send.toAddress}</span>
                 <span className="block text-ink-soft break-words">{send.subject}</span>

@@ -3,8 +3,7 @@ import type { ReactNode } from "react";
 import type { EmailStatus } from "@/db/schema";
 import { sourceHref, sourceLabels } from "@/lib/quotes/labels";
 import type { QuoteRequestDetail } from "@/lib/quotes/queries";
-
-const when = new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" });
+import { formatDateTime } from "@/lib/format/format";
 
 const emailWords: Record<EmailStatus, string> = { sent: "e-mailed", sending: "e-mail being sent", failed: "e-mail failed" };
 
@@ -12,7 +11,7 @@ const emailWords: Record<EmailStatus, string> = { sent: "e-mailed", sending: "e-
 export function RequestFields({ request }: { request: QuoteRequestDetail }) {
   const from = sourceHref(request.source, request.reference);
   const rows: [string, ReactNode][] = [
-    ["Received", <time key="t" dateTime={request.createdAt.toISOString()}>{when.format(request.createdAt)} UTC</time>],
+    ["Received", <time key="t" dateTime={request.createdAt.toISOString()}>{formatDateTime(request.createdAt)} UTC</time>],
     ["E-mail", <a key="e" href={`mailto:${request.email}`} className="break-all text-accent underline underline-offset-4">{request.email}</a>],
     ["Phone", request.phone ? <a key="p" href={`tel:${request.phone.replace(/[^\d+]/g, "")}`} className="text-accent underline underline-offset-4">{request.phone}</a> : "not given"],
     ["Vehicle", request.vehicle],
@@ -41,7 +40,7 @@ export function RequestReplies({ replies }: { replies: QuoteRequestDetail["repli
       {replies.map((reply) => (
         <li key={reply.id} className="rounded border border-rule bg-sheet p-4">
           <p className="text-sm text-ink-soft">
-            {reply.authorName} · <time dateTime={reply.createdAt.toISOString()}>{when.format(reply.createdAt)} UTC</time> ·{" "}
+            {reply.authorName} · <time dateTime={reply.createdAt.toISOString()}>{formatDateTime(reply.createdAt)} UTC</time> ·{" "}
             <span className={reply.emailStatus === "failed" ? "font-semibold text-danger" : undefined}>{reply.emailStatus ? emailWords[reply.emailStatus] : "not e-mailed"}</span>
           </p>
           <p className="mt-2 break-words whitespace-pre-line">{reply.body}</p>

@@ -2,8 +2,8 @@ import Link from "next/link";
 import { QUOTE_STATUSES, type QuoteStatus } from "@/lib/tire";
 import { sourceLabels, statusLabels } from "@/lib/quotes/labels";
 import type { QuoteRequestListing, RequestListQuery } from "@/lib/quotes/queries";
+import { formatCount, formatDateTime } from "@/lib/format/format";
 
-const when = new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" });
 const linkClass = "inline-flex min-h-11 items-center font-semibold text-accent underline underline-offset-4";
 
 function listHref(status: QuoteStatus | undefined, page = 1): string {
@@ -55,7 +55,7 @@ export function RequestList({ listing, query }: { listing: QuoteRequestListing; 
       <p role="status" className="mb-3 text-ink-soft">
         {listing.total === 0
           ? query.status ? `No ${statusLabels[query.status].toLowerCase()} requests.` : "No requests yet. They arrive here from “Ask the shop” on the Size sheet, the finder and Fit cards."
-          : `${listing.total.toLocaleString("en-US")} ${listing.total === 1 ? "request" : "requests"} · page ${listing.page} of ${listing.pageCount} · newest first · times in UTC`}
+          : `${formatCount(listing.total)} ${listing.total === 1 ? "request" : "requests"} · page ${listing.page} of ${listing.pageCount} · newest first · times in UTC`}
       </p>
       {listing.requests.length > 0 ? (
         <ul className="flex flex-col gap-2">
@@ -71,7 +71,7 @@ export function RequestList({ listing, query }: { listing: QuoteRequestListing; 
                 {request.quantity} × {request.tires}
               </p>
               <p className="text-sm text-ink-soft">
-                {request.vehicle} · {sourceLabels[request.source]} · <time dateTime={request.createdAt.toISOString()}>{when.format(request.createdAt)}</time>
+                {request.vehicle} · {sourceLabels[request.source]} · <time dateTime={request.createdAt.toISOString()}>{formatDateTime(request.createdAt)}</time>
                 {request.preferredDay ? ` · would like ${request.preferredDay}` : ""}
               </p>
             </li>

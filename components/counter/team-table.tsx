@@ -1,7 +1,6 @@
 import type { TeamMember } from "@/lib/team/queries";
 import { TeamRoleForm } from "./team-role-form";
-
-const joined = new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeZone: "UTC" });
+import { formatDay } from "@/lib/format/format";
 
 /** The accounts, each with its role form; a search narrows the list when it is long. */
 export function TeamTable({ accounts, total, search, currentUserId }: { accounts: TeamMember[]; total: number; search?: string; currentUserId: string }) {
@@ -35,7 +34,7 @@ export function TeamTable({ accounts, total, search, currentUserId }: { accounts
                   {account.id === currentUserId ? <span className="ml-2 text-sm font-normal text-ink-soft">(you)</span> : null}
                 </p>
                 <p className="break-all text-ink-soft">{account.email}</p>
-                <p className="text-sm text-ink-soft">Joined {joined.format(account.createdAt)}</p>
+                <p className="text-sm text-ink-soft">Joined {formatDay(account.createdAt)}</p>
               </div>
               <TeamRoleForm userId={account.id} email={account.email} role={account.role} />
             </li>

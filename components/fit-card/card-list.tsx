@@ -1,8 +1,8 @@
 import Link from "next/link";
 import type { CardState, CardSummary } from "@/lib/fit-cards/queries";
 import { RevokeCardButton } from "./revoke-card-button";
+import { formatDay } from "@/lib/format/format";
 
-const day = new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeZone: "UTC" });
 const stateText: Record<CardState, string> = { active: "Active", withdrawn: "Withdrawn", expired: "Expired" };
 
 type ListedCard = CardSummary & { authorEmail?: string | null };
@@ -19,9 +19,9 @@ export function CardList({ cards, emptyText }: { cards: ListedCard[]; emptyText:
             <div className="min-w-0">
               <p className="font-mono font-semibold break-words">{label}</p>
               <p className="text-sm text-ink-soft">
-                Saved {day.format(card.createdAt)} · {card.tireCount} {card.tireCount === 1 ? "tire" : "tires"} ·{" "}
+                Saved {formatDay(card.createdAt)} · {card.tireCount} {card.tireCount === 1 ? "tire" : "tires"} ·{" "}
                 <span className={card.state === "active" ? "font-semibold text-ink" : ""}>{stateText[card.state]}</span>
-                {card.state === "active" && card.expiresAt ? ` until ${day.format(card.expiresAt)}` : ""}
+                {card.state === "active" && card.expiresAt ? ` until ${formatDay(card.expiresAt)}` : ""}
                 {card.authorEmail !== undefined ? ` · by ${card.authorEmail ?? "a removed account"}` : ""}
               </p>
               {card.note ? <p className="mt-1 line-clamp-2 text-sm">{card.note}</p> : null}

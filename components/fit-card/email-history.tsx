@@ -1,6 +1,5 @@
 import type { EmailSendRow } from "@/lib/email/queries";
-
-const when = new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" });
+import { formatDateTime } from "@/lib/format/format";
 
 export const statusLabel = { sent: "Sent", failed: "Failed", sending: "Sending" } as const;
 
@@ -24,7 +23,7 @@ export function EmailHistory({ sends }: { sends: EmailSendRow[] }) {
         <tbody>
           {sends.map((send) => (
             <tr key={send.id} className="border-b border-rule align-top">
-              <td className="py-2 pr-3">{when.format(send.createdAt)}</td>
+              <td className="py-2 pr-3">{formatDateTime(send.createdAt)}</td>
               <td className="py-2 pr-3">{send.senderName ?? "A removed account"}</td>
               <td className="py-2 pr-3 wrap-anywhere">{send.toAddress}</td>
               <td className="py-2">

@@ -10,8 +10,7 @@ import { FitCardComparison } from "./fit-card-comparison";
 import { FitCardTires } from "./fit-card-tires";
 import { ShareActions } from "./share-actions";
 import { ShopCard } from "./shop-card";
-
-const day = new Intl.DateTimeFormat("en-US", { dateStyle: "long", timeZone: "UTC" });
+import { formatDay } from "@/lib/format/format";
 
 /** A Fit card as anyone with its link sees it: on screen, and on one printed page. */
 export function FitCardView({ card, shop, url }: { card: PublicFitCard; shop: ShopContact | null; url: string }) {
@@ -25,8 +24,8 @@ export function FitCardView({ card, shop, url }: { card: PublicFitCard; shop: Sh
       <PageIntro eyebrow="Fit card" title={title}>
         <p>
           The tire on the car: <span className="font-mono">{original.designation}</span>, load index and speed symbol{" "}
-          <span className="font-mono">{service}</span>. Diameter tolerance ±{card.tolerancePct} %. Saved {day.format(new Date(card.createdAt))}
-          {card.expiresAt ? `, shown until ${day.format(new Date(card.expiresAt))}` : ""}.
+          <span className="font-mono">{service}</span>. Diameter tolerance ±{card.tolerancePct} %. Saved {formatDay(new Date(card.createdAt), { long: true })}
+          {card.expiresAt ? `, shown until ${formatDay(new Date(card.expiresAt), { long: true })}` : ""}.
           {placard ? ` ${placard}` : ""}
           {original.season ? ` The tire on the car now is ${seasonTireWords(original.season)}.` : ""}
         </p>

@@ -6,6 +6,7 @@ import type { CsvRefusal } from "./columns";
 import { planImport } from "./import-plan";
 import type { CatalogImportReport, ImportMode } from "./import-report";
 import { readCatalogCsv } from "./read-file";
+import { formatCount } from "@/lib/format/format";
 
 export type CatalogImportResult = { ok: true; report: CatalogImportReport } | { ok: false; message: string };
 
@@ -42,7 +43,6 @@ async function upsertStockRows(db: Database, rows: readonly NewStockItem[]): Pro
   }
 }
 
-const count = (n: number) => n.toLocaleString("en-US");
 const byLine = (a: CsvRefusal, b: CsvRefusal) => a.line - b.line;
 
 /**
@@ -69,8 +69,8 @@ export async function importCatalogCsv(
     if (written) {
       await upsertStockRows(tx, changes);
       const summary =
-        `Imported ${count(read.rowCount)} rows: ${count(plan.added.length)} added, ${count(plan.updated.length)} updated, ` +
-        `${count(plan.unchanged)} unchanged, ${count(new Set(refused.map((refusal) => refusal.line)).size)} refused`;
+        `Imported ${formatCount(read.rowCount)} rows: ${formatCount(plan.added.length)} added, ${formatCount(plan.updated.length)} updated, ` +
+        `${formatCount(plan.unchanged)} unchanged, ${formatCount(new Set(refused.map((refusal) => refusal.line)).size)} refused`;
       await recordAudit(tx, actor, [{ action: "catalog_import", subject: file.name, summary }]);
     }
     return { added: plan.added.length, updated: plan.updated.length, unchanged: plan.unchanged, refused, written };

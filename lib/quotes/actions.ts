@@ -8,6 +8,7 @@ import { multiLineText } from "@/lib/validation/text";
 import { requestIdSchema } from "./queries";
 import { MAX_REPLY_LENGTH } from "./quote-input";
 import { changeQuoteStatus, replyToQuoteRequest } from "./staff-changes";
+import { formatCount } from "@/lib/format/format";
 
 const statusChangeSchema = z.object({
   id: requestIdSchema,
@@ -19,7 +20,7 @@ const replySchema = z.object({
   body: multiLineText("Write the reply before sending it.")
     .trim()
     .min(1, "Write the reply before sending it.")
-    .max(MAX_REPLY_LENGTH, `Keep the reply under ${MAX_REPLY_LENGTH.toLocaleString("en-US")} characters.`),
+    .max(MAX_REPLY_LENGTH, `Keep the reply under ${formatCount(MAX_REPLY_LENGTH)} characters.`),
 });
 
 const statusWords = { new: "open again", answered: "answered", closed: "closed" } as const;

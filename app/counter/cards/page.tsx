@@ -6,6 +6,7 @@ import { PageIntro } from "@/components/ui/page-intro";
 import { getDb } from "@/lib/database/app-database";
 import { requirePageUser } from "@/lib/auth/page-user";
 import { CARD_LIST_PAGE_SIZE, cardListQuerySchema, listAllCards } from "@/lib/fit-cards/queries";
+import { formatCount } from "@/lib/format/format";
 
 export const metadata: Metadata = { title: "Fit cards · Counter", robots: { index: false } };
 
@@ -33,7 +34,7 @@ export default async function CounterCardsPage({ searchParams }: { searchParams:
         </button>
       </form>
       <p role="status" className="text-ink-soft">
-        {total === 0 ? "" : `${total.toLocaleString("en-US")} ${total === 1 ? "card" : "cards"} · page ${query.page} of ${pages}`}
+        {total === 0 ? "" : `${formatCount(total)} ${total === 1 ? "card" : "cards"} · page ${query.page} of ${pages}`}
       </p>
       <CardList cards={cards} emptyText={query.q ? "No card matches that search." : "No Fit cards have been saved yet."} />
       {pages > 1 ? (
