@@ -4,7 +4,7 @@ import { useState, type FormEvent, type ReactNode } from "react";
 import { fieldErrors, type FieldErrors } from "@/lib/auth/form-schemas";
 import { authForms, type AuthFormKind } from "./form-kinds";
 import { postAuth } from "./post-auth";
-import { TextField } from "./text-field";
+import { fieldClass, FormField } from "@/components/ui/form-field";
 
 /**
  * A sign-in or sign-up form: checked in the browser for a quick answer next to each field, then sent
@@ -37,7 +37,9 @@ export function AuthForm({ kind, next, children }: { kind: AuthFormKind; next: s
   return (
     <form noValidate onSubmit={submit} className="flex max-w-md flex-col gap-4">
       {fields.map((field) => (
-        <TextField key={field.name} {...field} required error={errors[field.name]} />
+        <FormField key={field.name} id={field.name} label={field.label} error={errors[field.name]}>
+          {(control) => <input {...control} name={field.name} type={field.type} autoComplete={field.autoComplete} required className={fieldClass} />}
+        </FormField>
       ))}
       <div role="alert" className="min-h-6 text-danger">
         {errors.form ?? ""}

@@ -5,7 +5,7 @@ import { fieldErrors, type FieldErrors } from "@/lib/auth/form-schemas";
 import { RESET_LINK_LIFETIME_SECONDS } from "@/lib/email/password-reset-email";
 import { forgotPasswordSchema } from "./password-reset-schemas";
 import { postAuth } from "./post-auth";
-import { TextField } from "./text-field";
+import { fieldClass, FormField } from "@/components/ui/form-field";
 
 /** Asks for a reset link. The answer is the same whether or not an account uses the address. */
 export function ForgotPasswordForm() {
@@ -30,7 +30,9 @@ export function ForgotPasswordForm() {
 
   return (
     <form noValidate onSubmit={submit} className="flex max-w-md flex-col gap-4">
-      <TextField name="email" label="E-mail" type="email" autoComplete="email" required error={errors.email} />
+      <FormField id="email" label="E-mail" error={errors.email}>
+        {(control) => <input {...control} name="email" type="email" autoComplete="email" required className={fieldClass} />}
+      </FormField>
       <div role="status" className={sentTo ? "rounded border border-accent bg-accent-soft px-4 py-3" : undefined}>
         {sentTo ? (
           <>

@@ -6,7 +6,7 @@ import { useState, type FormEvent } from "react";
 import { fieldErrors, type FieldErrors } from "@/lib/auth/form-schemas";
 import { resetPasswordSchema } from "./password-reset-schemas";
 import { postAuth } from "./post-auth";
-import { TextField } from "./text-field";
+import { fieldClass, FormField } from "@/components/ui/form-field";
 
 /** Sets a new password with the token from a reset link, then sends the person to sign in with it. */
 export function ResetPasswordForm({ token }: { token: string }) {
@@ -36,15 +36,12 @@ export function ResetPasswordForm({ token }: { token: string }) {
 
   return (
     <form noValidate onSubmit={submit} className="flex max-w-md flex-col gap-4">
-      <TextField
-        name="newPassword"
-        label="New password (at least 8 characters)"
-        type="password"
-        autoComplete="new-password"
-        required
-        error={errors.newPassword}
-      />
-      <TextField name="confirmPassword" label="New password again" type="password" autoComplete="new-password" required error={errors.confirmPassword} />
+      <FormField id="newPassword" label="New password (at least 8 characters)" error={errors.newPassword}>
+        {(control) => <input {...control} name="newPassword" type="password" autoComplete="new-password" required className={fieldClass} />}
+      </FormField>
+      <FormField id="confirmPassword" label="New password again" error={errors.confirmPassword}>
+        {(control) => <input {...control} name="confirmPassword" type="password" autoComplete="new-password" required className={fieldClass} />}
+      </FormField>
       <div role="alert" className="min-h-6 text-danger">
         {linkRefused ? (
           <>

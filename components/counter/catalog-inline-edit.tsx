@@ -2,7 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { useId, useRef, useState, type FormEvent, type KeyboardEvent } from "react";
-import { useHydrated } from "./item-field";
+import { useHydrated } from "./item-controls";
 import { centsToDollarsText, parseDollars } from "@/lib/money/money";
 import { parseWholeNumber, sendCatalogWrite } from "./item-form-values";
 

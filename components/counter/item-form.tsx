@@ -3,7 +3,8 @@
 import { useRouter } from "next/navigation";
 import { useEffect, useRef, useState, type FormEvent } from "react";
 import type { BrandWithLines } from "@/lib/counter/queries";
-import { ItemField, itemInputClass, useHydrated } from "./item-field";
+import { FormField } from "@/components/ui/form-field";
+import { itemInputClass, useHydrated } from "./item-controls";
 import { checkItemForm } from "./item-form-check";
 import { ITEM_FIELDS, sendCatalogWrite, type ItemField as Field, type ItemFormErrors, type ItemFormValues } from "./item-form-values";
 import { ItemSizePreview } from "./item-size-preview";
@@ -67,17 +68,17 @@ export function ItemForm({ brands, initial, sku }: ItemFormProps) {
     refuse(field ? { [field]: result.message } : { form: result.message });
   }
 
-  const field = (name: Field) => ({ name, error: errors[name] });
+  const field = (name: Field) => ({ id: `item-${name}`, error: errors[name] });
   return (
     <form ref={formRef} noValidate onSubmit={submit} aria-label={isNew ? "New item" : `Edit ${sku}`} className="grid max-w-3xl gap-4 rounded border border-rule bg-sheet p-4 sm:grid-cols-2 sm:p-6">
       {/* Typing before the page is hydrated could be lost, so the fields wait for it. */}
       <fieldset disabled={!hydrated} className="contents">
         {isNew ? (
-          <ItemField {...field("sku")} label="SKU">
+          <FormField {...field("sku")} label="SKU">
             {(control) => <input {...control} name="sku" value={values.sku} onChange={(e) => set("sku", e.target.value)} autoComplete="off" className={`${itemInputClass} font-mono`} />}
-          </ItemField>
+          </FormField>
         ) : null}
-        <ItemField {...field("brand")} label="Brand">
+        <FormField {...field("brand")} label="Brand">
           {(control) => (
             <select {...control} name="brand" value={values.brand} onChange={(e) => setValues((current) => ({ ...current, brand: e.target.value, line: "" }))} className={itemInputClass}>
               <option value="">Choose a brand</option>
@@ -86,8 +87,8 @@ export function ItemForm({ brands, initial, sku }: ItemFormProps) {
               ))}
             </select>
           )}
-        </ItemField>
-        <ItemField {...field("line")} label="Line">
+        </FormField>
+        <FormField {...field("line")} label="Line">
           {(control) => (
             <select {...control} name="line" value={values.line} onChange={(e) => set("line", e.target.value)} className={itemInputClass}>
               <option value="">{values.brand ? "Choose a line" : "Choose a brand first"}</option>
@@ -96,18 +97,18 @@ export function ItemForm({ brands, initial, sku }: ItemFormProps) {
               ))}
             </select>
           )}
-        </ItemField>
+        </FormField>
         <div className="sm:col-span-2">
-          <ItemField {...field("designation")} label="Size" hintId="item-size-reading" hint={<ItemSizePreview id="item-size-reading" text={values.designation} />}>
+          <FormField {...field("designation")} label="Size" hintId="item-size-reading" hint={<ItemSizePreview id="item-size-reading" text={values.designation} />}>
             {(control) => (
               <input {...control} name="designation" value={values.designation} onChange={(e) => set("designation", e.target.value)} autoComplete="off" spellCheck={false} className={`${itemInputClass} font-mono`} />
             )}
-          </ItemField>
+          </FormField>
         </div>
         {TEXT_FIELDS.map(({ name, label, inputMode }) => (
-          <ItemField key={name} {...field(name)} label={label}>
+          <FormField key={name} {...field(name)} label={label}>
             {(control) => <input {...control} name={name} value={values[name]} inputMode={inputMode} autoComplete="off" onChange={(e) => set(name, e.target.value)} className={`${itemInputClass} font-mono`} />}
-          </ItemField>
+          </FormField>
         ))}
         <div className="flex flex-col gap-1 sm:col-span-2">
           <label className="flex min-h-11 items-center gap-3 font-semibold">

@@ -2,7 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { useEffect, useRef, useState } from "react";
-import { useHydrated } from "./item-field";
+import { useHydrated } from "./item-controls";
 import { sendCatalogWrite } from "./item-form-values";
 
 /** Retires an item after a second, explicit confirmation; its history stays in the audit log. */

@@ -2,7 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { useState, type FormEvent } from "react";
-import { TextField } from "@/components/auth/text-field";
+import { fieldClass, FormField } from "@/components/ui/form-field";
 import { type FitCardEmailBody, fitCardEmailBodySchema, MAX_EMAIL_MESSAGE_LENGTH } from "@/lib/email/fit-card-email-input";
 
 type SendState =
@@ -75,26 +75,20 @@ export function EmailCardForm({ slug }: { slug: string }) {
 
   return (
     <form noValidate onSubmit={submit} onChange={edited} className="flex max-w-xl flex-col gap-4" aria-describedby="email-card-status">
-      <TextField label="Send to" name="to" type="email" autoComplete="off" required error={errors.to} />
-      <div className="flex flex-col gap-1">
-        <label htmlFor="message" className="font-semibold">
-          Message <span className="font-normal text-ink-soft">(optional, up to {MAX_EMAIL_MESSAGE_LENGTH} characters)</span>
-        </label>
-        <textarea
-          id="message"
-          name="message"
-          rows={3}
-          maxLength={MAX_EMAIL_MESSAGE_LENGTH}
-          aria-invalid={errors.message ? true : undefined}
-          aria-describedby={errors.message ? "message-error" : undefined}
-          className="min-h-11 rounded border border-rule bg-sheet px-3 py-2 text-base aria-invalid:border-danger"
-        />
-        {errors.message ? (
-          <p id="message-error" className="text-sm text-danger">
-            {errors.message}
-          </p>
-        ) : null}
-      </div>
+      <FormField id="to" label="Send to" error={errors.to}>
+        {(control) => <input {...control} name="to" type="email" autoComplete="off" required className={fieldClass} />}
+      </FormField>
+      <FormField
+        id="message"
+        label={
+          <>
+            Message <span className="font-normal text-ink-soft">(optional, up to {MAX_EMAIL_MESSAGE_LENGTH} characters)</span>
+          </>
+        }
+        error={errors.message}
+      >
+        {(control) => <textarea {...control} name="message" rows={3} maxLength={MAX_EMAIL_MESSAGE_LENGTH} className={`${fieldClass} py-2`} />}
+      </FormField>
       <div className="flex flex-wrap gap-3">
         <button type="submit" disabled={state.step === "sending"} className="min-h-11 rounded bg-accent px-4 font-semibold text-sheet disabled:opacity-60">
           {state.step === "sending" ? "Sending…" : "Send"}

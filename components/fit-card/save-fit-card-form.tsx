@@ -1,7 +1,7 @@
 "use client";
 
 import { useId, useState, type FormEvent } from "react";
-import { describedBy, fieldClass, FormField } from "@/components/ui/form-field";
+import { fieldClass, FormField } from "@/components/ui/form-field";
 import { MAX_NOTE_LENGTH } from "@/lib/fit-cards/card-input";
 import { postFitCard, type SaveOutcome } from "./post-fit-card";
 import type { FitCardDraft } from "./save-fit-card-button";
@@ -50,23 +50,25 @@ export function SaveFitCardForm({ draft, onCancel }: { draft: FitCardDraft; onCa
       {needsService ? (
         <div className="grid grid-cols-2 gap-3">
           <FormField id={`${id}-load`} label="Load index on the car" error={error("loadIndex")}>
-            <input id={`${id}-load`} name="loadIndex" inputMode="numeric" defaultValue={draft.loadIndex ?? ""} {...describedBy(`${id}-load`, { error: error("loadIndex") })} className={fieldClass} />
+            {(control) => <input {...control} name="loadIndex" inputMode="numeric" defaultValue={draft.loadIndex ?? ""} className={fieldClass} />}
           </FormField>
           <FormField id={`${id}-speed`} label="Speed symbol on the car" error={error("speedSymbol")}>
-            <input id={`${id}-speed`} name="speedSymbol" defaultValue={draft.speedSymbol ?? ""} {...describedBy(`${id}-speed`, { error: error("speedSymbol") })} className={fieldClass} />
+            {(control) => <input {...control} name="speedSymbol" defaultValue={draft.speedSymbol ?? ""} className={fieldClass} />}
           </FormField>
         </div>
       ) : null}
       <FormField id={`${id}-note`} label="Note for the customer (optional)" error={error("note")}>
-        <textarea id={`${id}-note`} name="note" rows={3} maxLength={MAX_NOTE_LENGTH} {...describedBy(`${id}-note`, { error: error("note") })} className={`${fieldClass} py-2`} />
+        {(control) => <textarea {...control} name="note" rows={3} maxLength={MAX_NOTE_LENGTH} className={`${fieldClass} py-2`} />}
       </FormField>
       <FormField id={`${id}-expiry`} label="The link works" error={error("expiresInDays")}>
-        <select id={`${id}-expiry`} name="expiresInDays" defaultValue="30" className={fieldClass}>
-          <option value="">until withdrawn</option>
-          <option value="7">for 7 days</option>
-          <option value="30">for 30 days</option>
-          <option value="90">for 90 days</option>
-        </select>
+        {(control) => (
+          <select {...control} name="expiresInDays" defaultValue="30" className={fieldClass}>
+            <option value="">until withdrawn</option>
+            <option value="7">for 7 days</option>
+            <option value="30">for 30 days</option>
+            <option value="90">for 90 days</option>
+          </select>
+        )}
       </FormField>
       <div role="alert" className="text-danger">
         {outcome && !outcome.ok ? (

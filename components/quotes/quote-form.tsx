@@ -3,7 +3,7 @@
 import { useEffect, useId, useRef, useState, type FormEvent } from "react";
 import { DEFAULT_QUANTITY, HONEYPOT_FIELD, MAX_QUANTITY, MIN_QUANTITY, PREFERRED_DAY_MAX_AHEAD } from "@/lib/quotes/quote-input";
 import { fetchFormToken, postQuoteRequest, type QuoteContext, type QuoteOutcome } from "./post-quote-request";
-import { describedBy, fieldClass, FormField } from "@/components/ui/form-field";
+import { fieldClass, FormField } from "@/components/ui/form-field";
 
 const FIELD_ORDER = ["name", "email", "phone", "vehicle", "tires", "quantity", "preferredDay"] as const;
 
@@ -63,33 +63,32 @@ export default function QuoteForm({ context, tires, onCancel }: { context: Quote
     );
   }
   const error = (name: string) => (outcome && !outcome.ok ? outcome.fieldErrors[name] : undefined);
-  const control = (name: (typeof FIELD_ORDER)[number], hint = false) => ({ id: `${id}-${name}`, name, ...describedBy(`${id}-${name}`, { hint, error: error(name) }) });
   return (
     <form ref={formRef} onSubmit={submit} noValidate className="@container flex flex-col gap-4">
       <input type="hidden" name="renderedAt" value={renderedAt} />
       <div className="grid gap-4 @xl:grid-cols-2">
         <FormField id={`${id}-name`} label="Your name" error={error("name")}>
-          <input {...control("name")} autoComplete="name" className={fieldClass} />
+          {(control) => <input {...control} name="name" autoComplete="name" className={fieldClass} />}
         </FormField>
         <FormField id={`${id}-email`} label="E-mail (the answer goes here)" error={error("email")}>
-          <input {...control("email")} type="email" autoComplete="email" className={fieldClass} />
+          {(control) => <input {...control} name="email" type="email" autoComplete="email" className={fieldClass} />}
         </FormField>
         <FormField id={`${id}-phone`} label="Phone (optional)" error={error("phone")}>
-          <input {...control("phone")} type="tel" autoComplete="tel" className={fieldClass} />
+          {(control) => <input {...control} name="phone" type="tel" autoComplete="tel" className={fieldClass} />}
         </FormField>
         <FormField id={`${id}-vehicle`} label="Vehicle" hint="Year and kind is enough, such as “2019 family SUV”." error={error("vehicle")}>
-          <input {...control("vehicle", true)} className={fieldClass} />
+          {(control) => <input {...control} name="vehicle" className={fieldClass} />}
         </FormField>
       </div>
       <FormField id={`${id}-tires`} label="Tires or size" hint="Filled in from this page; change it as you like." error={error("tires")}>
-        <textarea {...control("tires", true)} rows={2} defaultValue={tires} className={`${fieldClass} py-2`} />
+        {(control) => <textarea {...control} name="tires" rows={2} defaultValue={tires} className={`${fieldClass} py-2`} />}
       </FormField>
       <div className="grid gap-4 @xl:grid-cols-2">
         <FormField id={`${id}-quantity`} label={`How many tires (${MIN_QUANTITY}–${MAX_QUANTITY})`} error={error("quantity")}>
-          <input {...control("quantity")} type="number" inputMode="numeric" min={MIN_QUANTITY} max={MAX_QUANTITY} defaultValue={DEFAULT_QUANTITY} className={fieldClass} />
+          {(control) => <input {...control} name="quantity" type="number" inputMode="numeric" min={MIN_QUANTITY} max={MAX_QUANTITY} defaultValue={DEFAULT_QUANTITY} className={fieldClass} />}
         </FormField>
         <FormField id={`${id}-preferredDay`} label="Preferred day for fitting (optional)" hint={`Up to ${PREFERRED_DAY_MAX_AHEAD} days ahead.`} error={error("preferredDay")}>
-          <input {...control("preferredDay", true)} type="date" min={localDay()} max={localDay(PREFERRED_DAY_MAX_AHEAD)} className={fieldClass} />
+          {(control) => <input {...control} name="preferredDay" type="date" min={localDay()} max={localDay(PREFERRED_DAY_MAX_AHEAD)} className={fieldClass} />}
         </FormField>
       </div>
       <div className="sr-only">
