@@ -2,7 +2,7 @@
 
 import { useState, type FormEvent } from "react";
 import { fieldErrors, type FieldErrors } from "@/lib/auth/form-schemas";
-import { RESET_LINK_LIFETIME_SECONDS } from "@/lib/email/password-reset-email";
+import { RESET_LINK_LIFETIME_SECONDS } from "@/lib/email/account-emails";
 import { forgotPasswordSchema } from "./password-reset-schemas";
 import { postAuth } from "./post-auth";
 import { fieldClass, FormField } from "@/components/ui/form-field";

@@ -4,9 +4,8 @@ import { nextCookies } from "better-auth/next-js";
 import { admin } from "better-auth/plugins";
 import type { Database } from "@/db/client";
 import * as schema from "@/db/schema";
-import { accountExistsEmail } from "@/lib/email/account-exists-email";
-import { passwordResetEmail, RESET_LINK_LIFETIME_SECONDS } from "@/lib/email/password-reset-email";
-import { sendEmail } from "@/lib/email/send-email";
+import { accountExistsEmail, passwordResetEmail, RESET_LINK_LIFETIME_SECONDS } from "@/lib/email/account-emails";
+import { sendMessage } from "@/lib/email/send-email";
 import { siteUrl } from "@/lib/env/site-url";
 import { CLIENT_ADDRESS_HEADER } from "@/lib/security/client-address";
 import { readAuthEnv } from "./auth-env";
@@ -31,14 +30,14 @@ export function createAuth(db: Database) {
       autoSignIn: false,
       onExistingUserSignUp: async ({ user }) => {
         const link = (path: string) => new URL(path, siteUrl()).toString();
-        void sendEmail({ to: user.email, ...accountExistsEmail({ name: user.name, signInUrl: link("/sign-in"), forgotPasswordUrl: link("/forgot-password") }) });
+        void sendMessage(user.email, accountExistsEmail({ name: user.name, signInUrl: link("/sign-in"), forgotPasswordUrl: link("/forgot-password") }));
       },
       resetPasswordTokenExpiresIn: RESET_LINK_LIFETIME_SECONDS,
       revokeSessionsOnPasswordReset: true,
       // Not awaited: the answer must take as long for an unknown address as for a known one.
-      // sendEmail never throws and logs its own failures.
+      // sendMessage never throws and logs its own failures.
       sendResetPassword: async ({ user, url }) => {
-        void sendEmail({ to: user.email, ...passwordResetEmail({ name: user.name, link: url }) });
+        void sendMessage(user.email, passwordResetEmail({ name: user.name, link: url }));
       },
       onPasswordReset: async ({ user }) => clearSignInFailures(db, user.email),
     },

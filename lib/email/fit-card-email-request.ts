@@ -4,9 +4,9 @@ import { readEnv } from "@/lib/env/env";
 import { readFitCard } from "@/lib/fit-cards/read-card";
 import { hitRateLimit, type RateLimitVerdict } from "@/lib/rate-limit/rate-limit";
 import { getShopContact } from "@/lib/shop/queries";
-import { type FitCardEmailContent, fitCardEmailContent } from "./fit-card-email-content";
+import { fitCardEmailContent } from "./fit-card-email-content";
 import type { FitCardEmailBody } from "./fit-card-email-input";
-import { fitCardEmailText } from "./fit-card-email-text";
+import { fitCardEmail } from "./fit-card-email";
 import { type RecordedSendResult, sendRecordedEmail } from "./recorded-send";
 
 /** Fit card e-mails one staff member may send per hour (default 20; FIT_CARD_EMAIL_LIMIT_PER_HOUR changes it). */
@@ -31,15 +31,13 @@ export interface FitCardEmailRequest {
   body: FitCardEmailBody;
   /** The client's Idempotency-Key; null makes this request an e-mail of its own. */
   clientKey: string | null;
-  /** The HTML version; the caller picks the template, since lib code renders no components. */
-  renderHtml: (content: FitCardEmailContent) => Promise<string>;
 }
 
 /**
  * E-mails a Fit card's link and key numbers. The same client key for the same card always means the
  * same e-mail, so a "Try again" after a failure or a timeout never delivers it twice.
  */
-export async function emailFitCard(db: Database, { senderId, slug, link, body, clientKey, renderHtml }: FitCardEmailRequest): Promise<EmailFitCardOutcome> {
+export async function emailFitCard(db: Database, { senderId, slug, link, body, clientKey }: FitCardEmailRequest): Promise<EmailFitCardOutcome> {
   const lookup = await readFitCard(db, slug);
   if (lookup.status !== "found") return lookup;
   const verdict = await hitFitCardEmailLimit(db, senderId);
@@ -50,9 +48,7 @@ export async function emailFitCard(db: Database, { senderId, slug, link, body, c
     kind: "fit_card",
     reference: slug,
     to: body.to,
-    subject: content.subject,
-    text: fitCardEmailText(content),
-    html: await renderHtml(content),
+    message: fitCardEmail(content),
     idempotencyKey: `fit-card:${slug}:${clientKey ?? randomUUID()}`,
   });
   return { status: "attempted", result };

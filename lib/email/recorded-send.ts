@@ -1,6 +1,8 @@
 import { and, eq, ne, sql } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { emailSend, type EmailKind } from "@/db/schema";
+import type { EmailMessage } from "./email-message";
+import { renderEmail } from "./render-email";
 import { sendEmail } from "./send-email";
 
 export interface RecordedEmail {
@@ -10,9 +12,7 @@ export interface RecordedEmail {
   /** What the e-mail is about: a Fit card's slug, a quote request's id. */
   reference: string;
   to: string;
-  subject: string;
-  text: string;
-  html?: string;
+  message: EmailMessage;
   /** Where a reply to the e-mail goes, when not to the sender. */
   replyTo?: string;
   /** Same key, same e-mail: a retry after a failure or a timeout never delivers it twice. */
@@ -31,7 +31,7 @@ async function findOrCreateRow(db: Database, email: RecordedEmail) {
       kind: email.kind,
       reference: email.reference,
       toAddress: email.to,
-      subject: email.subject,
+      subject: email.message.subject,
       idempotencyKey: email.idempotencyKey,
     })
     .onConflictDoNothing({ target: emailSend.idempotencyKey })
@@ -65,7 +65,8 @@ export async function sendRecordedEmail(db: Database, email: RecordedEmail): Pro
     return { ok: true, id: row.id, providerId: done?.providerId ?? "", alreadySent: true };
   }
 
-  const result = await sendEmail({ to: email.to, subject: email.subject, text: email.text, html: email.html, replyTo: email.replyTo }, { idempotencyKey: email.idempotencyKey });
+  const rendered = await renderEmail(email.message);
+  const result = await sendEmail({ to: email.to, ...rendered, replyTo: email.replyTo }, { idempotencyKey: email.idempotencyKey });
   if (result.ok) {
     await db.update(emailSend).set({ status: "sent", providerId: result.id, error: null, updatedAt: new Date() }).where(eq(emailSend.id, row.id));
     return { ok: true, id: row.id, providerId: result.id, alreadySent: false };

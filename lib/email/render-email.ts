@@ -1,11 +1,18 @@
-import type { ReactElement } from "react";
+import { createElement } from "react";
+import { EmailDocument } from "./email-document";
+import type { EmailMessage, RenderedEmail } from "./email-message";
+import { emailText } from "./email-text";
 
 /**
- * An e-mail's React tree as an HTML document. react-dom/server is loaded when first needed rather
- * than imported at the top, because route handlers are bundled for React Server Components, where
- * a static import of it is refused. React escapes every text it renders.
+ * An e-mail's blocks as its subject, text and HTML. react-dom/server is loaded when first needed
+ * rather than imported at the top, because route handlers are bundled for React Server Components,
+ * where a static import of it is refused.
  */
-export async function renderEmailHtml(email: ReactElement): Promise<string> {
+export async function renderEmail(message: EmailMessage): Promise<RenderedEmail> {
   const { renderToStaticMarkup } = await import("react-dom/server");
-  return `<!DOCTYPE html>${renderToStaticMarkup(email)}`;
+  return {
+    subject: message.subject,
+    text: emailText(message),
+    html: `<!DOCTYPE html>${renderToStaticMarkup(createElement(EmailDocument, { message }))}`,
+  };
 }

@@ -1,6 +1,8 @@
 import { Resend } from "resend";
 import { z } from "zod";
 import { readEmailEnv } from "./email-env";
+import type { EmailMessage } from "./email-message";
+import { renderEmail } from "./render-email";
 
 const emailSchema = z.object({
   to: z.union([z.email(), z.array(z.email()).min(1).max(50)]),
@@ -35,6 +37,15 @@ export async function sendEmail(email: OutgoingEmail, { idempotencyKey }: SendOp
     const { data, error } = await resend.emails.send({ from: env.from, ...parsed.data }, idempotencyKey ? { idempotencyKey } : undefined);
     if (error) return failed(`${error.name}: ${error.message}`);
     return { ok: true, id: data.id };
+  } catch (error) {
+    return failed(error instanceof Error ? error.message : String(error));
+  }
+}
+
+/** Renders an e-mail's blocks and sends it, for e-mails no one keeps a record of (the sign-in service's). Never throws. */
+export async function sendMessage(to: string, message: EmailMessage): Promise<SendEmailResult> {
+  try {
+    return await sendEmail({ to, ...(await renderEmail(message)) });
   } catch (error) {
     return failed(error instanceof Error ? error.message : String(error));
   }

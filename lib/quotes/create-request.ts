@@ -50,7 +50,7 @@ export async function createQuoteRequest(db: Database, input: NewQuoteRequest): 
         reference,
         to: shop.email,
         replyTo: input.email,
-        ...requestToShopEmail(summary, counterUrl),
+        message: requestToShopEmail(summary, counterUrl),
         idempotencyKey: `quote-request-${row.id}-to-shop`,
       })
     : { ok: false };
@@ -62,7 +62,7 @@ export async function createQuoteRequest(db: Database, input: NewQuoteRequest): 
     reference,
     to: input.email,
     replyTo: shop?.email,
-    ...requestConfirmationEmail(summary, shop),
+    message: requestConfirmationEmail(summary, shop),
     idempotencyKey: `quote-request-${row.id}-confirmation`,
   });
   return { id: row.id, status: "new", emailed: { shop: toShop.ok, customer: confirmation.ok } };

@@ -1,4 +1,4 @@
-import { escapeHtml } from "@/lib/email/escape-html";
+import { type EmailBlock, type EmailMessage, paragraph } from "@/lib/email/email-message";
 import type { ShopContact } from "@/lib/shop/queries";
 
 /** The request as the e-mails tell it: only what the driver typed, never internal data. */
@@ -13,13 +13,7 @@ export interface RequestSummary {
   preferredDay: string | null;
 }
 
-interface EmailBody {
-  subject: string;
-  text: string;
-  html: string;
-}
-
-function summaryLines(request: RequestSummary): [string, string][] {
+function summaryRows(request: RequestSummary): [string, string][] {
   return [
     ["Name", request.name],
     ["E-mail", request.email],
@@ -31,30 +25,22 @@ function summaryLines(request: RequestSummary): [string, string][] {
   ];
 }
 
-function shopLines(shop: ShopContact | null): string[] {
+function shopBlock(shop: ShopContact | null): EmailBlock[] {
   if (!shop) return [];
-  return [shop.name, `${shop.streetAddress}, ${shop.town}, ${shop.region} ${shop.postalCode}`, `Phone ${shop.phone} · ${shop.email}`, shop.openingHours];
+  return [paragraph(shop.name, `${shop.streetAddress}, ${shop.town}, ${shop.region} ${shop.postalCode}`, `Phone ${shop.phone} · ${shop.email}`, shop.openingHours)];
 }
-
-function render(subject: string, paragraphs: (string | string[])[]): EmailBody {
-  const text = paragraphs.map((paragraph) => (Array.isArray(paragraph) ? paragraph.join("\n") : paragraph)).join("\n\n");
-  const html = paragraphs
-    .filter((paragraph) => paragraph.length > 0)
-    .map((paragraph) => `<p>${(Array.isArray(paragraph) ? paragraph : paragraph.split("\n")).map(escapeHtml).join("<br>")}</p>`)
-    .join("\n");
-  return { subject, text, html };
-}
-
-const table = (request: RequestSummary) => summaryLines(request).map(([label, value]) => `${label}: ${value}`);
 
 /** To the shop: a new request; replying to the e-mail reaches the driver. */
-export function requestToShopEmail(request: RequestSummary, counterUrl: string): EmailBody {
-  return render(`Price request #${request.id}: ${request.quantity} × ${request.tires.slice(0, 60)}`, [
-    `${request.name} asks for a price through Sidewise.`,
-    table(request),
-    `Reply to this e-mail to write to ${request.name} directly, or answer in the Counter so the reply is kept with the request:`,
-    counterUrl,
-  ]);
+export function requestToShopEmail(request: RequestSummary, counterUrl: string): EmailMessage {
+  return {
+    subject: `Price request #${request.id}: ${request.quantity} × ${request.tires.slice(0, 60)}`,
+    blocks: [
+      paragraph(`${request.name} asks for a price through Sidewise.`),
+      { kind: "fields", rows: summaryRows(request) },
+      paragraph(`Reply to this e-mail to write to ${request.name} directly, or answer in the Counter so the reply is kept with the request:`),
+      { kind: "button", label: "Answer in the Counter", href: counterUrl },
+    ],
+  };
 }
 
 /**
@@ -62,25 +48,35 @@ export function requestToShopEmail(request: RequestSummary, counterUrl: string):
  * form, so this e-mail carries nothing the sender wrote (not even the name): only the number, the
  * quantity, the day picked and the shop's own words.
  */
-export function requestConfirmationEmail(request: Pick<RequestSummary, "id" | "quantity" | "preferredDay">, shop: ShopContact | null): EmailBody {
+export function requestConfirmationEmail(request: Pick<RequestSummary, "id" | "quantity" | "preferredDay">, shop: ShopContact | null): EmailMessage {
   const shopName = shop?.name ?? "The shop";
-  return render(`We have your price request (#${request.id})`, [
-    "Hello,",
-    `Thank you for asking. ${shopName} has your request #${request.id} for a price on ${request.quantity} ${request.quantity === 1 ? "tire" : "tires"}${
-      request.preferredDay ? `, fitted on ${request.preferredDay} if you book` : ""
-    }, and will answer at this address, usually within one working day.`,
-    "A price depends on the tires in stock on the day; the shop confirms it when you book the fitting. If you did not ask for a price, ignore this e-mail: nothing is booked and no one will write again unless you reply.",
-    shopLines(shop),
-  ]);
+  return {
+    subject: `We have your price request (#${request.id})`,
+    blocks: [
+      paragraph("Hello,"),
+      paragraph(
+        `Thank you for asking. ${shopName} has your request #${request.id} for a price on ${request.quantity} ${request.quantity === 1 ? "tire" : "tires"}${
+          request.preferredDay ? `, fitted on ${request.preferredDay} if you book` : ""
+        }, and will answer at this address, usually within one working day.`,
+      ),
+      paragraph(
+        "A price depends on the tires in stock on the day; the shop confirms it when you book the fitting. If you did not ask for a price, ignore this e-mail: nothing is booked and no one will write again unless you reply.",
+      ),
+      ...shopBlock(shop),
+    ],
+  };
 }
 
 /** To the driver: the shop's answer, in the staff member's words. */
-export function quoteReplyEmail(request: RequestSummary, reply: { body: string; authorName: string }, shop: ShopContact | null): EmailBody {
-  return render(`About your price request (#${request.id})`, [
-    `Hello ${request.name},`,
-    reply.body,
-    `${reply.authorName}${shop ? `, ${shop.name}` : ""}`,
-    `You asked about: ${request.quantity} × ${request.tires}, for ${request.vehicle}.`,
-    shopLines(shop),
-  ]);
+export function quoteReplyEmail(request: RequestSummary, reply: { body: string; authorName: string }, shop: ShopContact | null): EmailMessage {
+  return {
+    subject: `About your price request (#${request.id})`,
+    blocks: [
+      paragraph(`Hello ${request.name},`),
+      paragraph(...reply.body.split("\n")),
+      paragraph(`${reply.authorName}${shop ? `, ${shop.name}` : ""}`),
+      paragraph(`You asked about: ${request.quantity} × ${request.tires}, for ${request.vehicle}.`),
+      ...shopBlock(shop),
+    ],
+  };
 }

@@ -56,7 +56,7 @@ export async function replyToQuoteRequest(db: Database, author: SessionUser, id:
     reference: String(request.id),
     to: request.email,
     replyTo: shop?.email,
-    ...quoteReplyEmail(request, { body, authorName: reply.authorName }, shop),
+    message: quoteReplyEmail(request, { body, authorName: reply.authorName }, shop),
     idempotencyKey: `quote-reply-${reply.id}`,
   });
   await db.update(quoteReply).set({ emailSendId: sent.id }).where(eq(quoteReply.id, reply.id));

@@ -1,12 +1,8 @@
 import { eq } from "drizzle-orm";
 import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from "vitest";
-import { createElement } from "react";
-import { FitCardEmail } from "@/components/email/fit-card-email";
 import { emailSend, rateLimitHit, user } from "@/db/schema";
-import type { FitCardEmailContent } from "@/lib/email/fit-card-email-content";
 import { emailFitCard } from "@/lib/email/fit-card-email-request";
 import { listFitCardSends, listRecentSends } from "@/lib/email/queries";
-import { renderEmailHtml } from "@/lib/email/render-email";
 import { newFitCardSchema } from "@/lib/fit-cards/card-input";
 import { createFitCard } from "@/lib/fit-cards/create-card";
 import { revokeFitCard } from "@/lib/fit-cards/revoke-card";
@@ -15,7 +11,6 @@ import { seedFixture } from "../catalog/fixtures";
 import { openTestDatabase, type TestDatabase, testDatabaseKinds } from "../helpers/test-database";
 
 const staff = { id: "u-staff", name: "Ollie", email: "ollie@example.test", role: "staff" };
-const renderHtml = (content: FitCardEmailContent) => renderEmailHtml(createElement(FitCardEmail, { content }));
 const body = { to: "pat.reader@example.test", message: "Ask for Ollie" };
 
 describe.each(testDatabaseKinds)("e-mailing a Fit card on %s", (kind) => {
@@ -26,7 +21,7 @@ describe.each(testDatabaseKinds)("e-mailing a Fit card on %s", (kind) => {
     if (!saved.ok) throw new Error(saved.message);
     return saved.slug;
   };
-  const email = (slug: string, clientKey: string | null = null) => emailFitCard(database.db, { senderId: staff.id, slug, link: `https://shop.example.test/s/${slug}`, body, clientKey, renderHtml });
+  const email = (slug: string, clientKey: string | null = null) => emailFitCard(database.db, { senderId: staff.id, slug, link: `https://shop.example.test/s/${slug}`, body, clientKey });
 
   beforeAll(async () => {
     fake = await startFakeResend({ port: 0 });

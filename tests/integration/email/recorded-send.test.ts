@@ -14,9 +14,7 @@ function cardEmail(idempotencyKey: string, to = "pat.reader@example.test"): Reco
     kind: "fit_card",
     reference: "abc123",
     to,
-    subject: "Your Fit card: 225/45R17 and 225/40R18",
-    text: `Open your card: ${link}`,
-    html: `<p><a href="${link}">Open your card</a></p>`,
+    message: { subject: "Your Fit card: 225/45R17 and 225/40R18", blocks: [{ kind: "button", label: "Open your card", href: link }] },
     idempotencyKey,
   };
 }

@@ -1,9 +1,7 @@
-import { createElement } from "react";
 import { describe, expect, it } from "vitest";
-import { FitCardEmail } from "@/components/email/fit-card-email";
 import { fitCardEmailContent } from "@/lib/email/fit-card-email-content";
-import { fitCardEmailText } from "@/lib/email/fit-card-email-text";
-import { renderEmailHtml } from "@/lib/email/render-email";
+import { fitCardEmail } from "@/lib/email/fit-card-email";
+import { renderEmail } from "@/lib/email/render-email";
 import type { CardTire, PublicFitCard } from "@/lib/fit-cards/read-card";
 import type { ShopContact } from "@/lib/shop/queries";
 
@@ -81,15 +79,15 @@ describe("Fit card e-mail", () => {
     ]);
   });
 
-  it("puts the link, the sizes, the prices, the message, the shop and the caution in the text version", () => {
-    const text = fitCardEmailText(content);
+  it("puts the link, the sizes, the prices, the message, the shop and the caution in the text version", async () => {
+    const { text } = await renderEmail(fitCardEmail(content));
     for (const part of [link, "225/45R17 91V", "225/40R18 (+0.5 % overall diameter)", "$149.00 each today", "$179.00 each today", "Ask for Ollie <b>at the counter</b>", "(555) 010-2030", "placard", "qualified fitter"]) {
       expect(text).toContain(part);
     }
   });
 
   it("renders the same facts as HTML with the link as a button and the staff message escaped", async () => {
-    const html = await renderEmailHtml(createElement(FitCardEmail, { content }));
+    const { html } = await renderEmail(fitCardEmail(content));
     expect(html.startsWith("<!DOCTYPE html><html")).toBe(true);
     expect(html).toContain(`href="${link}"`);
     expect(html).toContain("Open your Fit card");
@@ -101,10 +99,10 @@ describe("Fit card e-mail", () => {
     expect(html).not.toMatch(/<style|class=/);
   });
 
-  it("says a tire is no longer stocked with its price when saved, and leaves out an empty message", () => {
+  it("says a tire is no longer stocked with its price when saved, and leaves out an empty message", async () => {
     const gone = fitCardEmailContent({ card: { ...card, tires: [tire({ stillStocked: false })] }, shop: null, link, message: "   " });
     expect(gone.tires[0]?.price).toBe("$159.00 when saved, no longer stocked");
     expect(gone.message).toBeNull();
-    expect(fitCardEmailText(gone)).not.toContain("A note from the shop");
+    expect((await renderEmail(fitCardEmail(gone))).text).not.toContain("A note from the shop");
   });
 });

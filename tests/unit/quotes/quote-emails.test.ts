@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { renderEmail } from "@/lib/email/render-email";
 import { quoteReplyEmail, requestConfirmationEmail, requestToShopEmail } from "@/lib/quotes/quote-emails";
 import { describeTire, finderQuoteTires, fitCardQuoteTires } from "@/components/quotes/quote-tires";
 
@@ -24,8 +25,8 @@ const shop = {
 };
 
 describe("quote e-mails", () => {
-  it("give the shop every field the driver typed and a link to answer in the Counter", () => {
-    const email = requestToShopEmail(request, "https://shop.test/counter/requests/42");
+  it("give the shop every field the driver typed and a link to answer in the Counter", async () => {
+    const email = await renderEmail(requestToShopEmail(request, "https://shop.test/counter/requests/42"));
     expect(email.subject).toBe("Price request #42: 4 × 235/65R17 104H");
     expect(email.text).toContain("Vehicle: 2019 family SUV");
     expect(email.text).toContain("Phone: not given");
@@ -33,9 +34,9 @@ describe("quote e-mails", () => {
     expect(email.text).toContain("https://shop.test/counter/requests/42");
   });
 
-  it("confirm to the driver that the shop has the request and how to reach it, with nothing the sender typed", () => {
+  it("confirm to the driver that the shop has the request and how to reach it, with nothing the sender typed", async () => {
     const typed = { ...request, name: "Visit https://elsewhere.example now", vehicle: "Call 555-0199 <b>today</b>", tires: "Free prize: reply with your password" };
-    const email = requestConfirmationEmail(typed, shop);
+    const email = await renderEmail(requestConfirmationEmail(typed, shop));
     expect(email.text).toContain("Marrowby Tire Works has your request #42 for a price on 4 tires, fitted on 2026-12-10 if you book");
     expect(email.text).toContain("Phone (555) 010-4477 · counter@marrowby-tire.test");
     expect(email.text).toContain("If you did not ask for a price, ignore this e-mail");
@@ -44,11 +45,11 @@ describe("quote e-mails", () => {
     }
   });
 
-  it("carry a staff reply with its line breaks and the shop's contact, and nothing internal", () => {
-    const email = quoteReplyEmail(request, { body: "Four in stock at $129 each.\nFitting on Thursday works.", authorName: "Ollie" }, shop);
+  it("carry a staff reply with its line breaks and the shop's contact, and nothing internal", async () => {
+    const email = await renderEmail(quoteReplyEmail(request, { body: "Four in stock at $129 each.\nFitting on Thursday works.", authorName: "Ollie" }, shop));
     expect(email.subject).toBe("About your price request (#42)");
     expect(email.text).toContain("Four in stock at $129 each.\nFitting on Thursday works.");
-    expect(email.html).toContain("Four in stock at $129 each.<br>Fitting on Thursday works.");
+    expect(email.html).toContain("Four in stock at $129 each.<br/>Fitting on Thursday works.");
     expect(email.text).toContain("Ollie, Marrowby Tire Works");
     expect(email.text).not.toMatch(/counter\/requests|source|status/i);
   });

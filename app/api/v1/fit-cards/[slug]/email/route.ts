@@ -1,16 +1,10 @@
 import { NextResponse } from "next/server";
-import { createElement } from "react";
-import { FitCardEmail } from "@/components/email/fit-card-email";
 import { apiError } from "@/lib/api/errors";
 import { withRoute } from "@/lib/auth/guard";
 import { fitCardEmailBodySchema, idempotencyHeaderSchema } from "@/lib/email/fit-card-email-input";
-import type { FitCardEmailContent } from "@/lib/email/fit-card-email-content";
 import { emailFitCard } from "@/lib/email/fit-card-email-request";
-import { renderEmailHtml } from "@/lib/email/render-email";
 import { siteUrl } from "@/lib/env/site-url";
 import { fitCardParamsSchema } from "@/lib/fit-cards/card-input";
-
-const renderFitCardEmail = (content: FitCardEmailContent) => renderEmailHtml(createElement(FitCardEmail, { content }));
 
 /**
  * Staff e-mail a card's link → 202 { id, status: "sent", providerId }. When the e-mail service
@@ -29,7 +23,6 @@ export const POST = withRoute({ role: "staff", params: fitCardParamsSchema, body
     link: new URL(`/s/${params.slug}`, siteUrl()).toString(),
     body,
     clientKey: clientKey?.data ?? null,
-    renderHtml: renderFitCardEmail,
   });
   switch (outcome.status) {
     case "missing":
