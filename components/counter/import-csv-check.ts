@@ -1,7 +1,7 @@
 import Papa from "papaparse";
 import type { CsvRefusal } from "@/lib/catalog-csv/columns";
-import { readCatalogCsv } from "@/lib/catalog-csv/read-file";
-import { MAX_IMPORT_BYTES, MAX_IMPORT_SIZE_TEXT, notCsvFileMessage } from "@/lib/catalog-csv/upload";
+import { readCatalogHeader, readCatalogRows } from "@/lib/catalog-csv/read-file";
+import { EXPORT_AS_CSV, MAX_IMPORT_BYTES, MAX_IMPORT_SIZE_TEXT, notCsvFileMessage } from "@/lib/catalog-csv/upload";
 
 export const PREVIEW_ROW_COUNT = 10;
 export const LISTED_PROBLEM_COUNT = 20;
@@ -45,27 +45,14 @@ function noteProblems(check: CsvCheck, refusals: readonly CsvRefusal[]) {
   if (room > 0) check.problems.push(...refusals.slice(0, room));
 }
 
-/**
- * Checks one batch of rows with the server's own file reader, as a small file under the same header,
- * so the preview refuses exactly what the import will. Only a SKU repeated across batches needs
- * noting here. `firstLine` is the file line of the batch's first row.
- */
-function checkBatch(check: CsvCheck, header: string[], cells: string[][], firstLine: number, lineOfSku: Map<string, number>) {
-  const read = readCatalogCsv(Papa.unparse([header, ...cells], { newline: "\n" }));
-  if (!read.ok) return;
-  const shift = firstLine - 2;
-  const refusals = read.refusals.map((refusal) => ({ ...refusal, line: refusal.line + shift }));
-  for (const row of read.rows) {
-    const line = row.line + shift;
-    const earlier = lineOfSku.get(row.item.sku);
-    if (earlier === undefined) lineOfSku.set(row.item.sku, line);
-    else refusals.push({ line, column: "sku", reason: `SKU "${row.item.sku}" is already on line ${earlier} of this file; each SKU may appear once` });
-  }
-  const refusedRows = new Set(refusals.map((refusal) => refusal.line)).size;
+/** Checks one batch of rows with the server's own row reader; `firstLine` is the file line of its first row. */
+function checkBatch(check: CsvCheck, columns: readonly string[], cells: string[][], firstLine: number, lineOfSku: Map<string, number>) {
+  const read = readCatalogRows(columns, cells, firstLine, lineOfSku);
+  const refusedRows = new Set(read.refusals.map((refusal) => refusal.line)).size;
   check.rowsRead += read.rowCount;
   check.problemRows += refusedRows;
   check.validRows += read.rowCount - refusedRows;
-  noteProblems(check, refusals.sort((a, b) => a.line - b.line));
+  noteProblems(check, read.refusals);
 }
 
 /**
@@ -79,6 +66,7 @@ export async function checkCsvFile(file: File, onProgress: (check: CsvCheck) => 
     unreadable: null, headerRefused: false, fraction: 0, done: false,
   };
   const lineOfSku = new Map<string, number>();
+  let columns: string[] = [];
   let nextLine = 1;
   const snapshot = () => onProgress({ ...check, problems: [...check.problems], previewRows: [...check.previewRows] });
 
@@ -92,19 +80,19 @@ export async function checkCsvFile(file: File, onProgress: (check: CsvCheck) => 
           check.fields = cells[0] ?? [];
           cells = cells.slice(1);
           nextLine = 2;
-          const header = readCatalogCsv(Papa.unparse([check.fields], { newline: "\n" }));
-          if (!header.ok) check.unreadable = header.message;
-          else if (header.headerRefused) {
+          const header = readCatalogHeader(check.fields);
+          if (!header.ok) check.unreadable = `${header.problem}: ${EXPORT_AS_CSV}.`;
+          else if (header.refusals.length > 0) {
             check.headerRefused = true;
             noteProblems(check, header.refusals);
-          }
+          } else columns = header.columns;
           if (check.unreadable || check.headerRefused) return parser.abort();
         }
         if (results.errors.some((error) => error.type === "Quotes")) {
           check.unreadable = `A double quote (") opens a cell after line ${nextLine - 1} and never closes, so the file cannot be read to the end. Close the quote, or export the file again from the spreadsheet as CSV.`;
           return parser.abort();
         }
-        checkBatch(check, check.fields, cells, nextLine, lineOfSku);
+        checkBatch(check, columns, cells, nextLine, lineOfSku);
         nextLine += cells.length;
         for (const row of cells) {
           if (check.previewRows.length >= PREVIEW_ROW_COUNT) break;

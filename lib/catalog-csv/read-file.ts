@@ -47,38 +47,55 @@ export function readCatalogCsv(fileText: string): CatalogCsvFile {
     return unreadable(`This file is not a CSV that can be read to the end (a quote opened on line ${(unclosedQuote.row ?? 0) + 1} never closes)`);
   }
   const [headerCells = [], ...dataRows] = parsed.data;
-  const header = headerCells.map(normalizeHeaderName);
-  if (!header.some(isCatalogCsvColumnName)) {
+  const header = readCatalogHeader(headerCells);
+  if (!header.ok) return unreadable(header.problem);
+  if (header.refusals.length > 0) {
+    return { ok: true, rows: [], refusals: header.refusals, headerRefused: true, rowCount: dataRows.filter((cells) => !isBlank(cells)).length };
+  }
+  return { ok: true, ...readCatalogRows(header.columns, dataRows, 2, new Map()), headerRefused: false };
+}
+
+export type CatalogCsvHeader =
+  | { ok: false; problem: string }
+  /** `columns`: each cell's column name, normalized; `refusals` on line 1 when the header itself is wrong. */
+  | { ok: true; columns: string[]; refusals: CsvRefusal[] };
+
+/** Reads the header row: whether this is a catalog CSV at all, and what is wrong with its columns. */
+export function readCatalogHeader(headerCells: readonly string[]): CatalogCsvHeader {
+  const columns = headerCells.map(normalizeHeaderName);
+  if (!columns.some(isCatalogCsvColumnName)) {
     const separator = /;/.test(headerCells.join("")) ? "semicolons" : /\t/.test(headerCells.join("")) ? "tabs" : null;
     return separator
-      ? unreadable(`This file is not a comma-separated CSV (its columns are separated by ${separator})`)
-      : unreadable(`This file is not a CSV with a header row (its first line should name the columns ${CATALOG_CSV_COLUMN_NAMES.join(", ")})`);
+      ? { ok: false, problem: `This file is not a comma-separated CSV (its columns are separated by ${separator})` }
+      : { ok: false, problem: `This file is not a CSV with a header row (its first line should name the columns ${CATALOG_CSV_COLUMN_NAMES.join(", ")})` };
   }
+  return { ok: true, columns, refusals: checkHeader(headerCells, columns) };
+}
 
-  const headerRefusals = checkHeader(headerCells, header);
-  if (headerRefusals.length > 0) {
-    return { ok: true, rows: [], refusals: headerRefusals, headerRefused: true, rowCount: dataRows.filter((cells) => !isBlank(cells)).length };
-  }
-
+/**
+ * Reads rows under a header that reads: each through readCsvRow, blank rows skipped. `firstLine` is
+ * the file line of the first of them; `lineOfSku` remembers SKUs across calls, so that a file read in
+ * batches refuses a repeated SKU on its later line exactly as a file read whole does.
+ */
+export function readCatalogRows(columns: readonly string[], dataRows: readonly string[][], firstLine: number, lineOfSku: Map<string, number>) {
   const rows: CatalogCsvRow[] = [];
   const refusals: CsvRefusal[] = [];
-  const lineOfSku = new Map<string, number>();
   let rowCount = 0;
   dataRows.forEach((cells, index) => {
     if (isBlank(cells)) return;
     rowCount += 1;
-    const line = index + 2;
-    const extra = cells.slice(header.length);
-    if (cells.length < header.length || !isBlank(extra)) {
+    const line = firstLine + index;
+    const extra = cells.slice(columns.length);
+    if (cells.length < columns.length || !isBlank(extra)) {
       refusals.push({
         line,
         column: "",
-        reason: `the row has ${cells.length} cells but the header names ${header.length} columns; put a value that contains a comma in double quotes`,
+        reason: `the row has ${cells.length} cells but the header names ${columns.length} columns; put a value that contains a comma in double quotes`,
       });
       return;
     }
     const record: CatalogCsvRecord = {};
-    header.forEach((name, i) => {
+    columns.forEach((name, i) => {
       if (isCatalogCsvColumnName(name)) record[name] = cells[i] ?? "";
     });
     const read = readCsvRow(record, line);
@@ -95,7 +112,7 @@ export function readCatalogCsv(fileText: string): CatalogCsvFile {
     lineOfSku.set(sku, line);
     rows.push(read.row);
   });
-  return { ok: true, rows, refusals, headerRefused: false, rowCount };
+  return { rows, refusals, rowCount };
 }
 
 /** Missing required columns, columns the catalog does not read, and columns named twice; an unnamed column is ignored. */
