@@ -9,6 +9,13 @@ const actionLabels: Record<AuditAction, string> = {
   item_retired: "Item retired",
   catalog_import: "Catalog import",
   role_changed: "Role changed",
+  shop_changed: "Shop settings changed",
+  brand_added: "Brand added",
+  brand_renamed: "Brand renamed",
+  line_added: "Line added",
+  line_changed: "Line changed",
+  fit_card_emailed: "Fit card e-mailed",
+  request_replied: "Request answered",
 };
 
 function pageHref(query: AuditQuery, page: number): string {

@@ -11,6 +11,7 @@ import {
   text,
   timestamp,
   unique,
+  uniqueIndex,
 } from "drizzle-orm/pg-core";
 
 import { CONSTRUCTIONS, SEASONS, SERVICE_TYPES, SKU_CHARACTERS, SKU_MAX_LENGTH, TERRAINS } from "../../lib/tire/vocabulary";
@@ -23,10 +24,15 @@ export const TEMPERATURE_GRADES = ["A", "B", "C"] as const;
 
 const oneOf = (values: readonly string[]) => sql.raw(`(${values.map((v) => `'${v}'`).join(", ")})`);
 
-export const brand = pgTable("brand", {
-  id: serial().primaryKey(),
-  name: text().notNull().unique(),
-});
+export const brand = pgTable(
+  "brand",
+  {
+    id: serial().primaryKey(),
+    name: text().notNull().unique(),
+  },
+  // Names are compared without case: "Quensal" and "QUENSAL" are one brand.
+  (table) => [uniqueIndex("brand_name_any_case").on(sql`lower(${table.name})`)],
+);
 
 /** A tread pattern a brand sells in many sizes; what it is made for belongs here, not to each size. */
 export const tireLine = pgTable(
@@ -46,9 +52,15 @@ export const tireLine = pgTable(
     utqgTraction: text({ enum: TRACTION_GRADES }),
     utqgTemperature: text({ enum: TEMPERATURE_GRADES }),
     mileageWarrantyMiles: integer(),
+    /** New tread depth in 32nds of an inch; an item may state its own. */
+    treadDepth32: smallint(),
+    /** A retired line keeps its items' history but takes no new items. */
+    retired: boolean().notNull().default(false),
   },
   (table) => [
     unique("tire_line_brand_name").on(table.brandId, table.name),
+    uniqueIndex("tire_line_brand_name_any_case").on(table.brandId, sql`lower(${table.name})`),
+    check("tire_line_tread_depth", sql`${table.treadDepth32} between 1 and 40`),
     check("tire_line_season", sql`${table.season} in ${oneOf(SEASONS)}`),
     check("tire_line_terrain", sql`${table.terrain} in ${oneOf(TERRAINS)}`),
     check("tire_line_traction", sql`${table.utqgTraction} in ${oneOf(TRACTION_GRADES)}`),
@@ -145,6 +157,8 @@ export const stockItem = pgTable(
     priceCents: integer().notNull(),
     quantityOnHand: integer().notNull(),
     retired: boolean().notNull().default(false),
+    /** New tread depth in 32nds of an inch, when it differs from its line's. */
+    treadDepth32: smallint(),
     /** Set by the database on every write (see stockFitment); never given by the application. */
     fitmentId: integer().references(() => stockFitment.id, { onDelete: "restrict" }),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
@@ -209,6 +223,7 @@ export const stockItem = pgTable(
     check("stock_item_diameter", sql`${table.overallDiameterMm} > 0`),
     check("stock_item_price", sql`${table.priceCents} >= 0`),
     check("stock_item_quantity", sql`${table.quantityOnHand} >= 0`),
+    check("stock_item_tread_depth", sql`${table.treadDepth32} between 1 and 40`),
   ],
 );
 

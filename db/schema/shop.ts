@@ -1,7 +1,12 @@
 import { sql } from "drizzle-orm";
-import { check, doublePrecision, pgTable, serial, text, timestamp } from "drizzle-orm/pg-core";
+import { boolean, check, doublePrecision, integer, jsonb, pgTable, serial, text, timestamp } from "drizzle-orm/pg-core";
+import { DEFAULT_WEEKLY_HOURS, type WeeklyHours } from "../../lib/tire/vocabulary";
 
-/** The one shop this installation serves. Its default tolerance feeds the finder and the planner. */
+/**
+ * The one shop this installation serves: its contact, its time zone and opening hours, the default
+ * tolerance of the finder and the planner, and what a set costs beyond the tires (per tire, in cents;
+ * the sales tax in basis points, 725 = 7.25 %).
+ */
 export const shop = pgTable(
   "shop",
   {
@@ -13,12 +18,25 @@ export const shop = pgTable(
     postalCode: text().notNull(),
     phone: text().notNull(),
     email: text().notNull(),
-    openingHours: text().notNull(),
+    /** An IANA time zone name, e.g. America/New_York. */
+    timeZone: text().notNull().default("America/New_York"),
+    hours: jsonb().$type<WeeklyHours>().notNull().default(DEFAULT_WEEKLY_HOURS),
+    /** Holidays, as YYYY-MM-DD in the shop's time zone. */
+    closedDates: jsonb().$type<string[]>().notNull().default([]),
     defaultTolerancePct: doublePrecision().notNull().default(3),
+    fittingPerTireCents: integer().notNull().default(0),
+    disposalPerTireCents: integer().notNull().default(0),
+    /** A per-new-tire fee some states charge; never taxed. */
+    tireFeePerTireCents: integer().notNull().default(0),
+    taxRateBp: integer().notNull().default(0),
+    /** Whether fitting and disposal are taxed as well as the tires. */
+    taxServices: boolean().notNull().default(false),
     updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
   (table) => [
     check("shop_tolerance_range", sql`${table.defaultTolerancePct} between 1 and 5`),
+    check("shop_charges", sql`${table.fittingPerTireCents} >= 0 and ${table.disposalPerTireCents} >= 0 and ${table.tireFeePerTireCents} >= 0`),
+    check("shop_tax_rate", sql`${table.taxRateBp} between 0 and 10000`),
   ],
 );
 

@@ -26,21 +26,23 @@ export interface CategoryTraits {
   mileageWarrantyMiles: number | null;
   /** Dollars added to a size's base price. */
   premium: number;
+  /** New tread depth in 32nds of an inch (invented, in the usual range for such tires). */
+  treadDepth32: number;
 }
 
 export const CATEGORY_TRAITS: Record<LineCategory, CategoryTraits> = {
-  touring: { season: "all-season", terrain: "highway", mudAndSnow: true, threePeak: false, runFlat: false, utqg: [700, "A", "B"], mileageWarrantyMiles: 70_000, premium: 0 },
-  "grand-touring": { season: "all-season", terrain: "highway", mudAndSnow: true, threePeak: false, runFlat: false, utqg: [540, "A", "A"], mileageWarrantyMiles: 50_000, premium: 18 },
-  summer: { season: "summer", terrain: "highway", mudAndSnow: false, threePeak: false, runFlat: false, utqg: [300, "AA", "A"], mileageWarrantyMiles: null, premium: 28 },
-  winter: { season: "winter", terrain: "highway", mudAndSnow: true, threePeak: true, runFlat: false, utqg: null, mileageWarrantyMiles: null, premium: 22 },
-  "all-weather": { season: "all-weather", terrain: "highway", mudAndSnow: true, threePeak: true, runFlat: false, utqg: [600, "A", "B"], mileageWarrantyMiles: 60_000, premium: 16 },
-  "suv-highway": { season: "all-season", terrain: "highway", mudAndSnow: true, threePeak: false, runFlat: false, utqg: [720, "A", "B"], mileageWarrantyMiles: 70_000, premium: 10 },
-  "all-terrain": { season: "all-season", terrain: "all-terrain", mudAndSnow: true, threePeak: true, runFlat: false, utqg: [600, "A", "B"], mileageWarrantyMiles: 55_000, premium: 32 },
-  "mud-terrain": { season: "all-season", terrain: "mud-terrain", mudAndSnow: true, threePeak: false, runFlat: false, utqg: null, mileageWarrantyMiles: null, premium: 62 },
-  van: { season: "all-season", terrain: "highway", mudAndSnow: true, threePeak: false, runFlat: false, utqg: null, mileageWarrantyMiles: 40_000, premium: 20 },
-  "run-flat": { season: "all-season", terrain: "highway", mudAndSnow: true, threePeak: false, runFlat: true, utqg: [500, "A", "A"], mileageWarrantyMiles: 45_000, premium: 70 },
-  trailer: { season: "all-season", terrain: "highway", mudAndSnow: false, threePeak: false, runFlat: false, utqg: null, mileageWarrantyMiles: null, premium: -8 },
-  spare: { season: "all-season", terrain: "highway", mudAndSnow: false, threePeak: false, runFlat: false, utqg: null, mileageWarrantyMiles: null, premium: -25 },
+  touring: { season: "all-season", terrain: "highway", mudAndSnow: true, threePeak: false, runFlat: false, utqg: [700, "A", "B"], mileageWarrantyMiles: 70_000, premium: 0, treadDepth32: 10 },
+  "grand-touring": { season: "all-season", terrain: "highway", mudAndSnow: true, threePeak: false, runFlat: false, utqg: [540, "A", "A"], mileageWarrantyMiles: 50_000, premium: 18, treadDepth32: 10 },
+  summer: { season: "summer", terrain: "highway", mudAndSnow: false, threePeak: false, runFlat: false, utqg: [300, "AA", "A"], mileageWarrantyMiles: null, premium: 28, treadDepth32: 9 },
+  winter: { season: "winter", terrain: "highway", mudAndSnow: true, threePeak: true, runFlat: false, utqg: null, mileageWarrantyMiles: null, premium: 22, treadDepth32: 12 },
+  "all-weather": { season: "all-weather", terrain: "highway", mudAndSnow: true, threePeak: true, runFlat: false, utqg: [600, "A", "B"], mileageWarrantyMiles: 60_000, premium: 16, treadDepth32: 11 },
+  "suv-highway": { season: "all-season", terrain: "highway", mudAndSnow: true, threePeak: false, runFlat: false, utqg: [720, "A", "B"], mileageWarrantyMiles: 70_000, premium: 10, treadDepth32: 11 },
+  "all-terrain": { season: "all-season", terrain: "all-terrain", mudAndSnow: true, threePeak: true, runFlat: false, utqg: [600, "A", "B"], mileageWarrantyMiles: 55_000, premium: 32, treadDepth32: 15 },
+  "mud-terrain": { season: "all-season", terrain: "mud-terrain", mudAndSnow: true, threePeak: false, runFlat: false, utqg: null, mileageWarrantyMiles: null, premium: 62, treadDepth32: 19 },
+  van: { season: "all-season", terrain: "highway", mudAndSnow: true, threePeak: false, runFlat: false, utqg: null, mileageWarrantyMiles: 40_000, premium: 20, treadDepth32: 11 },
+  "run-flat": { season: "all-season", terrain: "highway", mudAndSnow: true, threePeak: false, runFlat: true, utqg: [500, "A", "A"], mileageWarrantyMiles: 45_000, premium: 70, treadDepth32: 10 },
+  trailer: { season: "all-season", terrain: "highway", mudAndSnow: false, threePeak: false, runFlat: false, utqg: null, mileageWarrantyMiles: null, premium: -8, treadDepth32: 9 },
+  spare: { season: "all-season", terrain: "highway", mudAndSnow: false, threePeak: false, runFlat: false, utqg: null, mileageWarrantyMiles: null, premium: -25, treadDepth32: 6 },
 };
 
 export interface DemoBrand {

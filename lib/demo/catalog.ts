@@ -30,6 +30,7 @@ function lineValues(brandId: number, name: string, category: LineCategory, varia
     utqgTraction: traction,
     utqgTemperature: temperature,
     mileageWarrantyMiles: traits.mileageWarrantyMiles === null ? null : traits.mileageWarrantyMiles + (variant % 3) * 5_000,
+    treadDepth32: traits.treadDepth32 + (variant % 2),
   };
 }
 

@@ -9,6 +9,22 @@ export const demoShop: NewShop = {
   postalCode: "43999",
   phone: "(555) 014-2290",
   email: "counter@marrowby-tire.test",
-  openingHours: "Mon–Fri 7:30–18:00, Sat 8:00–14:00",
+  timeZone: "America/New_York",
+  hours: {
+    mon: [["07:30", "18:00"]],
+    tue: [["07:30", "18:00"]],
+    wed: [["07:30", "18:00"]],
+    thu: [["07:30", "18:00"]],
+    fri: [["07:30", "18:00"]],
+    sat: [["08:00", "14:00"]],
+    sun: [],
+  },
+  // Invented charges: fitting and balancing, disposal of the old tire, a state tire fee, sales tax.
+  closedDates: ["2026-12-25", "2027-01-01"],
   defaultTolerancePct: 3,
+  fittingPerTireCents: 2_500,
+  disposalPerTireCents: 400,
+  tireFeePerTireCents: 100,
+  taxRateBp: 725,
+  taxServices: true,
 };

@@ -1,9 +1,10 @@
 import type { Database } from "@/db/client";
 import { shop } from "@/db/schema";
 import { getDb } from "@/lib/database/app-database";
+import { describeOpeningHours } from "./hours";
 
 /** The shop's public face: what a customer may see in the footer, a Fit card or an e-mail. */
-export async function getShopContact(db: Database) {
+export async function getShopContact(db: Database): Promise<ShopContact | null> {
   const [row] = await db
     .select({
       name: shop.name,
@@ -13,15 +14,27 @@ export async function getShopContact(db: Database) {
       postalCode: shop.postalCode,
       phone: shop.phone,
       email: shop.email,
-      openingHours: shop.openingHours,
+      hours: shop.hours,
     })
     .from(shop)
     .orderBy(shop.id)
     .limit(1);
-  return row ?? null;
+  if (!row) return null;
+  const { hours, ...contact } = row;
+  return { ...contact, openingHours: describeOpeningHours(hours) };
 }
 
-export type ShopContact = NonNullable<Awaited<ReturnType<typeof getShopContact>>>;
+export interface ShopContact {
+  name: string;
+  streetAddress: string;
+  town: string;
+  region: string;
+  postalCode: string;
+  phone: string;
+  email: string;
+  /** The week's opening hours in one line, from the shop's hours. */
+  openingHours: string;
+}
 
 /** The shop's contact for the footer of every page; null when the database cannot be reached, so no page fails for it. */
 export async function readShopContact(): Promise<ShopContact | null> {

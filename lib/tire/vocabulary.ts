@@ -43,5 +43,25 @@ export type QuoteStatus = (typeof QUOTE_STATUSES)[number];
 export const QUOTE_SOURCES = ["fit-card", "size-sheet", "finder"] as const;
 export type QuoteSource = (typeof QUOTE_SOURCES)[number];
 
-export const AUDIT_ACTIONS = ["item_added", "item_changed", "item_retired", "catalog_import", "role_changed"] as const;
+export const AUDIT_ACTIONS = [
+  "item_added", "item_changed", "item_retired", "catalog_import", "role_changed", "shop_changed",
+  "brand_added", "brand_renamed", "line_added", "line_changed", "fit_card_emailed", "request_replied",
+] as const;
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];
+
+/** The days of a week of opening hours, Monday first. */
+export const WEEKDAYS = ["mon", "tue", "wed", "thu", "fri", "sat", "sun"] as const;
+export type Weekday = (typeof WEEKDAYS)[number];
+/** Opening intervals per day as ["HH:MM", "HH:MM"] in the shop's time zone; a lunch break is two intervals, an empty list is closed. */
+export type WeeklyHours = Record<Weekday, [string, string][]>;
+
+/** Hours a shop starts with until its admin sets its own. */
+export const DEFAULT_WEEKLY_HOURS: WeeklyHours = {
+  mon: [["08:00", "17:00"]],
+  tue: [["08:00", "17:00"]],
+  wed: [["08:00", "17:00"]],
+  thu: [["08:00", "17:00"]],
+  fri: [["08:00", "17:00"]],
+  sat: [["08:00", "12:00"]],
+  sun: [],
+};

@@ -40,11 +40,12 @@ describe.each(testDatabaseKinds)("shop data on %s", (kind) => {
     await expect(database.db.update(shop).set({ defaultTolerancePct: 7 })).rejects.toThrow();
   });
 
-  it("keeps only public contact fields in the contact query", async () => {
+  it("keeps only public contact fields in the contact query, the hours in one line", async () => {
     await seedDemoData(database.db);
     const contact = await getShopContact(database.db);
     expect(Object.keys(contact ?? {}).sort()).toEqual(
       ["email", "name", "openingHours", "phone", "postalCode", "region", "streetAddress", "town"].sort(),
     );
+    expect(contact?.openingHours).toBe("Mon–Fri 07:30–18:00; Sat 08:00–14:00");
   });
 });

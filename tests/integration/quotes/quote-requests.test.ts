@@ -17,8 +17,8 @@ const shopRow = {
   postalCode: "97000",
   phone: "(555) 010-4477",
   email: "counter@marrowby-tire.test",
-  openingHours: "Mon–Fri 8–6",
-};
+  hours: { mon: [["08:00", "18:00"]], tue: [["08:00", "18:00"]], wed: [["08:00", "18:00"]], thu: [["08:00", "18:00"]], fri: [["08:00", "18:00"]], sat: [], sun: [] },
+} satisfies typeof shop.$inferInsert;
 
 const asking = (overrides: Record<string, unknown> = {}) =>
   quoteRequestSchema.parse({
