@@ -15,7 +15,17 @@ export function RequestFields({ request }: { request: QuoteRequestDetail }) {
     ["E-mail", <a key="e" href={`mailto:${request.email}`} className="break-all text-accent underline underline-offset-4">{request.email}</a>],
     ["Phone", request.phone ? <a key="p" href={`tel:${request.phone.replace(/[^\d+]/g, "")}`} className="text-accent underline underline-offset-4">{request.phone}</a> : "not given"],
     ["Vehicle", request.vehicle],
-    ["Tires", request.tires],
+    [
+      "Tires",
+      <ul key="tires" className="list-none">
+        {request.tires
+          .split("\n")
+          .filter((line) => line.trim() !== "")
+          .map((line, index) => (
+            <li key={index}>{line}</li>
+          ))}
+      </ul>,
+    ],
     ["How many", String(request.quantity)],
     ["Preferred day", request.preferredDay ?? "no preference"],
     ["Sent from", from ? <Link key="s" href={from} prefetch={false} className="text-accent underline underline-offset-4">{sourceLabels[request.source]} {request.reference}</Link> : `${sourceLabels[request.source]}${request.reference ? ` ${request.reference}` : ""}`],

@@ -29,3 +29,9 @@ export interface RenderedEmail {
 }
 
 export const paragraph = (...lines: string[]): EmailBlock => ({ kind: "paragraph", lines });
+
+/**
+ * A header value on one line: line breaks and other control characters (which a driver's text may
+ * hold, and which would start a new header) become spaces, and runs of spaces one.
+ */
+export const headerText = (text: string): string => text.replace(/[\u0000-\u001f\u007f]+/g, " ").replace(/ {2,}/g, " ").trim();

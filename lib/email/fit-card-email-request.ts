@@ -1,5 +1,6 @@
 import { randomUUID } from "node:crypto";
 import type { Database } from "@/db/client";
+import { recordAudit, type Actor } from "@/lib/audit/record";
 import { readEnv } from "@/lib/env/env";
 import { readFitCard } from "@/lib/fit-cards/read-card";
 import { hitRateLimit, type RateLimitVerdict } from "@/lib/rate-limit/rate-limit";
@@ -25,7 +26,8 @@ export type EmailFitCardOutcome =
   | { status: "attempted"; result: RecordedSendResult };
 
 export interface FitCardEmailRequest {
-  senderId: string;
+  /** The staff member sending it, who the audit log names. */
+  sender: Actor;
   slug: string;
   link: string;
   body: FitCardEmailBody;
@@ -37,19 +39,23 @@ export interface FitCardEmailRequest {
  * E-mails a Fit card's link and key numbers. The same client key for the same card always means the
  * same e-mail, so a "Try again" after a failure or a timeout never delivers it twice.
  */
-export async function emailFitCard(db: Database, { senderId, slug, link, body, clientKey }: FitCardEmailRequest): Promise<EmailFitCardOutcome> {
+export async function emailFitCard(db: Database, { sender, slug, link, body, clientKey }: FitCardEmailRequest): Promise<EmailFitCardOutcome> {
   const lookup = await readFitCard(db, slug);
   if (lookup.status !== "found") return lookup;
-  const verdict = await hitFitCardEmailLimit(db, senderId);
+  const verdict = await hitFitCardEmailLimit(db, sender.id);
   if (!verdict.allowed) return { status: "rate_limited", retryAfterSeconds: verdict.retryAfterSeconds };
   const content = fitCardEmailContent({ card: lookup.card, shop: await getShopContact(db), link, message: body.message });
   const result = await sendRecordedEmail(db, {
-    senderId,
+    senderId: sender.id,
     kind: "fit_card",
     reference: slug,
     to: body.to,
     message: fitCardEmail(content),
     idempotencyKey: `fit-card:${slug}:${clientKey ?? randomUUID()}`,
   });
+  if (!(result.ok && result.alreadySent)) {
+    const how = result.ok ? "" : ` (not delivered: ${result.message})`;
+    await recordAudit(db, sender, [{ action: "fit_card_emailed", subject: slug, summary: `Fit card ${slug} e-mailed to ${body.to}${how}` }]);
+  }
   return { status: "attempted", result };
 }

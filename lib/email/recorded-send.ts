@@ -1,7 +1,7 @@
 import { and, eq, ne, sql } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { emailSend, type EmailKind } from "@/db/schema";
-import type { EmailMessage } from "./email-message";
+import { headerText, type EmailMessage } from "./email-message";
 import { renderEmail } from "./render-email";
 import { sendEmail } from "./send-email";
 
@@ -31,7 +31,7 @@ async function findOrCreateRow(db: Database, email: RecordedEmail) {
       kind: email.kind,
       reference: email.reference,
       toAddress: email.to,
-      subject: email.message.subject,
+      subject: headerText(email.message.subject),
       idempotencyKey: email.idempotencyKey,
     })
     .onConflictDoNothing({ target: emailSend.idempotencyKey })

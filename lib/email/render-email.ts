@@ -1,6 +1,6 @@
 import { createElement } from "react";
 import { EmailDocument } from "./email-document";
-import type { EmailMessage, RenderedEmail } from "./email-message";
+import { headerText, type EmailMessage, type RenderedEmail } from "./email-message";
 import { emailText } from "./email-text";
 
 /**
@@ -11,7 +11,7 @@ import { emailText } from "./email-text";
 export async function renderEmail(message: EmailMessage): Promise<RenderedEmail> {
   const { renderToStaticMarkup } = await import("react-dom/server");
   return {
-    subject: message.subject,
+    subject: headerText(message.subject),
     text: emailText(message),
     html: `<!DOCTYPE html>${renderToStaticMarkup(createElement(EmailDocument, { message }))}`,
   };

@@ -6,7 +6,8 @@ import { renderEmail } from "./render-email";
 
 const emailSchema = z.object({
   to: z.union([z.email(), z.array(z.email()).min(1).max(50)]),
-  subject: z.string().trim().min(1).max(300),
+  // The one path to the provider refuses what would break a header; renderEmail has already made it one line.
+  subject: z.string().trim().min(1).max(300).regex(/^[^\u0000-\u001f\u007f]*$/, "a header holds no line break or control character"),
   text: z.string().min(1),
   html: z.string().min(1).optional(),
   replyTo: z.email().optional(),

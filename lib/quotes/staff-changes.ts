@@ -1,6 +1,7 @@
 import { eq } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { quoteReply, quoteRequest, type QuoteStatus } from "@/db/schema";
+import { recordAudit } from "@/lib/audit/record";
 import type { SessionUser } from "@/lib/auth/session";
 import { sendRecordedEmail } from "@/lib/email/recorded-send";
 import { getShopContact } from "@/lib/shop/queries";
@@ -44,6 +45,7 @@ export async function replyToQuoteRequest(db: Database, author: SessionUser, id:
       .values({ requestId: id, authorId: author.id, authorName: author.name || author.email, body })
       .returning({ id: quoteReply.id, authorName: quoteReply.authorName });
     if (!reply) throw new Error("the reply was not stored");
+    await recordAudit(tx, author, [{ action: "request_replied", subject: `#${id}`, summary: `Request #${id} answered to ${request.email}` }]);
     return { request, reply };
   });
   if (!saved) return { status: "not_found" };

@@ -1,6 +1,6 @@
 import { eq } from "drizzle-orm";
 import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from "vitest";
-import { emailSend, rateLimitHit, user } from "@/db/schema";
+import { auditEvent, emailSend, rateLimitHit, user } from "@/db/schema";
 import { emailFitCard } from "@/lib/email/fit-card-email-request";
 import { listFitCardSends, listRecentSends } from "@/lib/email/queries";
 import { newFitCardSchema } from "@/lib/fit-cards/card-input";
@@ -21,7 +21,7 @@ describe.each(testDatabaseKinds)("e-mailing a Fit card on %s", (kind) => {
     if (!saved.ok) throw new Error(saved.message);
     return saved.slug;
   };
-  const email = (slug: string, clientKey: string | null = null) => emailFitCard(database.db, { senderId: staff.id, slug, link: `https://shop.example.test/s/${slug}`, body, clientKey });
+  const email = (slug: string, clientKey: string | null = null) => emailFitCard(database.db, { sender: staff, slug, link: `https://shop.example.test/s/${slug}`, body, clientKey });
 
   beforeAll(async () => {
     fake = await startFakeResend({ port: 0 });
@@ -53,6 +53,11 @@ describe.each(testDatabaseKinds)("e-mailing a Fit card on %s", (kind) => {
     expect(row).toMatchObject({ kind: "fit_card", reference: slug, idempotencyKey: `fit-card:${slug}:client-key-1`, status: "sent" });
     expect(await listFitCardSends(database.db, slug)).toEqual([expect.objectContaining({ senderName: "Ollie", toAddress: body.to, status: "sent", attempts: 1 })]);
     expect((await listRecentSends(database.db)).map((send) => send.reference)).toContain(slug);
+    const audited = await database.db.select().from(auditEvent).where(eq(auditEvent.subject, slug));
+    expect(audited).toEqual([expect.objectContaining({ action: "fit_card_emailed", actorEmail: staff.email, summary: `Fit card ${slug} e-mailed to ${body.to}` })]);
+    // The same key again sends nothing, and records nothing again.
+    await email(slug, "client-key-1");
+    expect(await database.db.$count(auditEvent, eq(auditEvent.subject, slug))).toBe(1);
   });
 
   it("refuses a withdrawn card and an unknown one without sending, and stops at the hour's limit", async () => {

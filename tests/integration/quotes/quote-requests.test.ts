@@ -1,6 +1,6 @@
 import { eq } from "drizzle-orm";
 import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it, vi } from "vitest";
-import { emailSend, quoteReply, quoteRequest, shop, user } from "@/db/schema";
+import { auditEvent, emailSend, quoteReply, quoteRequest, shop, user } from "@/db/schema";
 import { createQuoteRequest } from "@/lib/quotes/create-request";
 import { getQuoteRequest, listQuoteRequests, REQUEST_PAGE_SIZE } from "@/lib/quotes/queries";
 import { quoteRequestSchema } from "@/lib/quotes/quote-input";
@@ -129,6 +129,8 @@ describe.each(testDatabaseKinds)("quote requests on %s", (kind) => {
     const email = fake.received().find((received) => received.subject === `About your price request (#${id})`);
     expect(email?.to).toBe("rosa@example.test");
     expect(email?.text).toContain("Thursday at 10 works.");
+    const [audited] = await database.db.select().from(auditEvent).where(eq(auditEvent.subject, `#${id}`));
+    expect(audited).toMatchObject({ action: "request_replied", actorEmail: staff.email });
   });
 
   it("keeps a reply whose e-mail failed, with the failure shown beside it", async () => {

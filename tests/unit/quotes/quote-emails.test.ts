@@ -34,6 +34,12 @@ describe("quote e-mails", () => {
     expect(email.text).toContain("https://shop.test/counter/requests/42");
   });
 
+  it("keep every header on one line, whatever the driver typed: a line break would start a new header (RFC 5322 §2.2)", async () => {
+    const email = await renderEmail(requestToShopEmail({ ...request, tires: "235/65R17 104H\r\nBcc: everyone@example.test\tand 4 more" }, "https://shop.test/counter/requests/42"));
+    expect(email.subject).toBe("Price request #42: 4 × 235/65R17 104H Bcc: everyone@example.test and 4 more");
+    expect(email.subject).not.toMatch(/[\u0000-\u001f\u007f]/);
+  });
+
   it("confirm to the driver that the shop has the request and how to reach it, with nothing the sender typed", async () => {
     const typed = { ...request, name: "Visit https://elsewhere.example now", vehicle: "Call 555-0199 <b>today</b>", tires: "Free prize: reply with your password" };
     const email = await renderEmail(requestConfirmationEmail(typed, shop));

@@ -18,7 +18,7 @@ export const POST = withRoute({ role: "staff", params: fitCardParamsSchema, body
     return apiError("invalid_parameter", "The Idempotency-Key header must be 8–100 letters, digits or - _ . : (a UUID works).");
   }
   const outcome = await emailFitCard(db, {
-    senderId: user.id,
+    sender: user,
     slug: params.slug,
     link: new URL(`/s/${params.slug}`, siteUrl()).toString(),
     body,
