@@ -1,12 +1,21 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import { useId, useRef, useState, type FormEvent, type KeyboardEvent } from "react";
+import { useEffect, useId, useRef, useState, type FormEvent, type KeyboardEvent } from "react";
 import { useHydrated } from "./item-controls";
-import { centsToDollarsText, parseDollars } from "@/lib/money/money";
+import { centsToDollarsText, formatPrice, parseDollars } from "@/lib/money/money";
 import { parseWholeNumber, sendCatalogWrite } from "./item-form-values";
 
-type Status = { kind: "idle" } | { kind: "saving" } | { kind: "saved" } | { kind: "error"; message: string };
+type Status =
+  | { kind: "idle" }
+  | { kind: "saving" }
+  /** Saved, with the value before, which Undo puts back for a few seconds. */
+  | { kind: "saved"; previous: number; now: number }
+  | { kind: "undone"; now: number }
+  | { kind: "error"; message: string };
+
+/** How long a saved change offers Undo. */
+const UNDO_MILLISECONDS = 8_000;
 
 interface CatalogInlineEditProps {
   sku: string;
@@ -20,7 +29,10 @@ const invalidMessage = {
   quantity: "Enter a whole number, 0 or more.",
 };
 
-/** One price or quantity in the table, changed in place: Enter or leaving the field saves, Escape puts it back. */
+/**
+ * One price or quantity in the table, changed in place: Enter or leaving the field saves, Escape puts
+ * the typed text back, and for a few seconds after a save "Undo" restores the value before.
+ */
 export function CatalogInlineEdit({ sku, field, value, label }: CatalogInlineEditProps) {
   const router = useRouter();
   const id = useId();
@@ -29,6 +41,29 @@ export function CatalogInlineEdit({ sku, field, value, label }: CatalogInlineEdi
   const [text, setText] = useState(shown);
   const [status, setStatus] = useState<Status>({ kind: "idle" });
   const lastSent = useRef(value);
+  const shownAs = (amount: number) => (field === "priceCents" ? centsToDollarsText(amount) : String(amount));
+  const said = (amount: number) => (field === "priceCents" ? formatPrice(amount) : String(amount));
+
+  useEffect(() => {
+    if (status.kind !== "saved") return;
+    const timer = setTimeout(() => setStatus({ kind: "idle" }), UNDO_MILLISECONDS);
+    return () => clearTimeout(timer);
+  }, [status]);
+
+  async function write(next: number, done: (previous: number) => Status) {
+    const previous = lastSent.current;
+    lastSent.current = next;
+    setStatus({ kind: "saving" });
+    const result = await sendCatalogWrite("PATCH", `/api/v1/catalog/${encodeURIComponent(sku)}`, { [field]: next });
+    if (result.ok) {
+      setText(shownAs(next));
+      setStatus(done(previous));
+      router.refresh();
+    } else {
+      lastSent.current = previous;
+      setStatus({ kind: "error", message: result.message });
+    }
+  }
 
   async function save() {
     const parsed = field === "priceCents" ? parseDollars(text) : parseWholeNumber(text);
@@ -40,17 +75,11 @@ export function CatalogInlineEdit({ sku, field, value, label }: CatalogInlineEdi
       if (status.kind === "error") setStatus({ kind: "idle" });
       return;
     }
-    lastSent.current = parsed;
-    setStatus({ kind: "saving" });
-    const result = await sendCatalogWrite("PATCH", `/api/v1/catalog/${encodeURIComponent(sku)}`, { [field]: parsed });
-    if (result.ok) {
-      setText(field === "priceCents" ? centsToDollarsText(parsed) : String(parsed));
-      setStatus({ kind: "saved" });
-      router.refresh();
-    } else {
-      lastSent.current = value;
-      setStatus({ kind: "error", message: result.message });
-    }
+    await write(parsed, (previous) => ({ kind: "saved", previous, now: parsed }));
+  }
+
+  function undo(previous: number) {
+    void write(previous, () => ({ kind: "undone", now: previous }));
   }
 
   function submit(event: FormEvent) {
@@ -60,11 +89,17 @@ export function CatalogInlineEdit({ sku, field, value, label }: CatalogInlineEdi
 
   function cancelOnEscape(event: KeyboardEvent<HTMLInputElement>) {
     if (event.key !== "Escape") return;
-    setText(field === "priceCents" ? centsToDollarsText(lastSent.current) : String(lastSent.current));
+    setText(shownAs(lastSent.current));
     setStatus({ kind: "idle" });
   }
 
-  const message = status.kind === "saving" ? "Saving…" : status.kind === "saved" ? "Saved" : status.kind === "error" ? status.message : "";
+  const what = field === "priceCents" ? "Price" : "Quantity";
+  const message =
+    status.kind === "saving" ? "Saving…"
+    : status.kind === "saved" ? `${what} changed to ${said(status.now)}`
+    : status.kind === "undone" ? `${what} back to ${said(status.now)}`
+    : status.kind === "error" ? status.message
+    : "";
   return (
     <form onSubmit={submit} className="flex flex-col items-end gap-0.5">
       <label htmlFor={id} className="sr-only">
@@ -88,6 +123,14 @@ export function CatalogInlineEdit({ sku, field, value, label }: CatalogInlineEdi
       </span>
       <span id={`${id}-status`} role="status" className={`max-w-40 text-right text-xs ${status.kind === "error" ? "text-danger" : "text-ink-soft"}`}>
         {message}
+        {status.kind === "saved" ? (
+          <>
+            {" · "}
+            <button type="button" onClick={() => undo(status.previous)} className="min-h-6 font-semibold text-accent underline underline-offset-2">
+              Undo
+            </button>
+          </>
+        ) : null}
       </span>
     </form>
   );

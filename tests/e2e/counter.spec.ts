@@ -32,7 +32,8 @@ test.describe("the Counter's catalog", () => {
     const newPrice = testInfo.project.name === "phone" ? "1.11" : "1.12";
     await price.fill(newPrice);
     await price.press("Enter");
-    await expect(row.getByText("Saved")).toBeVisible();
+    await expect(row.getByText(`Price changed to $${newPrice}`)).toBeVisible();
+    await expect(row.getByRole("button", { name: "Undo" })).toBeVisible();
 
     await page.goto(`/replace?size=${designation.replace("/", "-")}&loadIndex=${loadIndex.split("/")[0]}&speedSymbol=${speedSymbol}&sort=price`);
     await expect(page.locator(`article[data-sku="${sku}"]`)).toContainText(`$${newPrice}`);
@@ -42,7 +43,7 @@ test.describe("the Counter's catalog", () => {
     await expect(restored).toHaveValue(newPrice);
     await restored.fill(before);
     await restored.press("Enter");
-    await expect(page.getByText("Saved")).toBeVisible();
+    await expect(page.getByText(/^Price changed to \$/)).toBeVisible();
   });
 
   test("sorts by a column from its header and says which way", async ({ page }) => {
