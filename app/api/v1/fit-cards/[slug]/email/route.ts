@@ -3,7 +3,7 @@ import { createElement } from "react";
 import { FitCardEmail } from "@/components/email/fit-card-email";
 import { apiError } from "@/lib/api/errors";
 import { withRoute } from "@/lib/auth/guard";
-import { fitCardEmailBodySchema, idempotencyHeaderSchema } from "@/lib/email/fit-card-email-input";
+import { fitCardEmailBodySchema, idempotencyHeaderSchema, type FitCardEmailAnswer } from "@/lib/email/fit-card-email-input";
 import type { FitCardEmailContent } from "@/lib/email/fit-card-email-content";
 import { emailFitCard } from "@/lib/email/fit-card-email-request";
 import { renderEmailHtml } from "@/lib/email/render-email";
@@ -42,7 +42,9 @@ export const POST = withRoute({ role: "staff", params: fitCardParamsSchema, body
       });
     case "attempted": {
       const { result } = outcome;
-      const answer = result.ok ? { id: result.id, status: "sent", providerId: result.providerId } : { id: result.id, status: "failed", message: result.message };
+      const answer: FitCardEmailAnswer = result.ok
+        ? { id: result.id, status: "sent", providerId: result.providerId }
+        : { id: result.id, status: "failed", message: result.message };
       return NextResponse.json(answer, { status: 202 });
     }
   }
