@@ -1,7 +1,7 @@
-import { apiErrorBodySchema, apiErrorStatus, type ApiErrorCode } from "@/lib/api/errors";
-import { componentRef, componentSchemas, parametersOf, type JsonSchema } from "./json-schema";
-import { errorCodesOf, named, type ApiAnswer, type ApiOperation } from "./operation";
 import { z } from "zod";
+import { apiErrorBodySchema, apiErrorStatus, type ApiErrorCode } from "@/lib/api/errors";
+import { componentRef, componentSchemas, jsonSchemaOf, parametersOf, type JsonSchema } from "./json-schema";
+import { errorCodesOf, named, type ApiAnswer, type ApiOperation } from "./operation";
 
 export const OPENAPI_VERSION = "3.1.1";
 const ERROR_SCHEMA = "Error";
@@ -29,7 +29,7 @@ const SESSION_SCHEME = {
     "The session cookie the sign-in service sets: POST /api/auth/sign-in/email with {email, password}. Over HTTPS it is named __Secure-better-auth.session_token.",
 };
 
-const RETRY_AFTER = { "Retry-After": { description: "Seconds to wait before trying again.", schema: { type: "string", pattern: "^\\d+$" } } };
+const RETRY_AFTER = { "Retry-After": { description: "Seconds to wait before trying again.", schema: jsonSchemaOf(z.string().regex(/^\d+$/), "output") } };
 
 function answerObject(answer: ApiAnswer) {
   const content = answer.json
@@ -38,7 +38,7 @@ function answerObject(answer: ApiAnswer) {
       ? { "text/csv": { schema: { type: "string", description: answer.csv } } }
       : undefined;
   const headers = answer.headers
-    ? Object.fromEntries(Object.entries(answer.headers).map(([name, { description, schema }]) => [name, { description, schema: z.toJSONSchema(schema, { io: "output" }) }]))
+    ? Object.fromEntries(Object.entries(answer.headers).map(([name, { description, schema }]) => [name, { description, schema: jsonSchemaOf(schema, "output") }]))
     : undefined;
   return { description: answer.description, ...(headers ? { headers } : {}), ...(content ? { content } : {}) };
 }

@@ -30,6 +30,13 @@ export function componentSchemas(bodies: readonly NamedSchema[], io: "input" | "
   return schemas;
 }
 
+/** One schema on its own (a header's, a parameter's), without the dialect a document of its own would name. */
+export function jsonSchemaOf(schema: z.ZodType, io: "input" | "output", unrepresentable: "throw" | "any" = "throw"): JsonSchema {
+  const json = z.toJSONSchema(schema, { io, unrepresentable }) as JsonSchema;
+  delete json.$schema;
+  return json;
+}
+
 export interface ParameterObject {
   name: string;
   in: "path" | "query" | "header";
@@ -38,15 +45,27 @@ export interface ParameterObject {
   schema: JsonSchema;
 }
 
-/** The parameters an object schema reads from the path, the query string or the headers, one per property. */
+type ObjectSchema = JsonSchema & { properties?: Record<string, JsonSchema>; required?: string[] };
+
+/**
+ * The parameters an object schema reads from the path, the query string or the headers, one per
+ * property. Each is described by the value it is read as where zod can say so (`limit`: a number
+ * from 1 to 500, rather than text of digits), else by the text it must be; which ones are required
+ * follows what a client sends.
+ */
 export function parametersOf(schema: z.ZodType, location: ParameterObject["in"]): ParameterObject[] {
-  const json = z.toJSONSchema(schema, { io: "input" }) as JsonSchema & { properties?: Record<string, JsonSchema>; required?: string[] };
-  if (json.type !== "object") throw new Error(`${location} parameters must be described by an object schema`);
-  return Object.entries(json.properties ?? {}).map(([name, { description, ...property }]) => ({
-    name,
-    in: location,
-    required: location === "path" || (json.required ?? []).includes(name),
-    ...(typeof description === "string" ? { description } : {}),
-    schema: property,
-  }));
+  const sent = jsonSchemaOf(schema, "input") as ObjectSchema;
+  const read = jsonSchemaOf(schema, "output", "any") as ObjectSchema;
+  if (sent.type !== "object") throw new Error(`${location} parameters must be described by an object schema`);
+  return Object.entries(sent.properties ?? {}).map(([name, asSent]) => {
+    const asRead = read.properties?.[name];
+    const { description, ...property } = asRead && Object.keys(asRead).length > 0 ? asRead : asSent;
+    return {
+      name,
+      in: location,
+      required: location === "path" || (sent.required ?? []).includes(name),
+      ...(typeof description === "string" ? { description } : {}),
+      schema: property,
+    };
+  });
 }
