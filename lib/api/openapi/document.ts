@@ -1,9 +1,9 @@
 import { z } from "zod";
 import { apiErrorBodySchema, apiErrorStatus, type ApiErrorCode } from "@/lib/api/errors";
-import { componentRef, componentSchemas, jsonSchemaOf, parametersOf, type JsonSchema } from "./json-schema";
+import { componentRef, componentSchemas, jsonSchemaOf, parametersOf } from "./json-schema";
 import { errorCodesOf, named, type ApiAnswer, type ApiOperation } from "./operation";
 
-export const OPENAPI_VERSION = "3.1.1";
+const OPENAPI_VERSION = "3.1.1";
 const ERROR_SCHEMA = "Error";
 const SESSION = "session";
 
@@ -112,7 +112,7 @@ export function buildOpenApiDocument(operations: readonly ApiOperation[]) {
     info: { title: "Sidewise API", version: "1", description: DESCRIPTION },
     tags: [...new Set(operations.map((operation) => operation.tag))].map((name) => ({ name })),
     paths,
-    components: { schemas: { ...answerSchemas, ...requestSchemas } as Record<string, JsonSchema>, securitySchemes: { [SESSION]: SESSION_SCHEME } },
+    components: { schemas: { ...answerSchemas, ...requestSchemas }, securitySchemes: { [SESSION]: SESSION_SCHEME } },
   };
 }
 

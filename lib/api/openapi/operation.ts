@@ -53,13 +53,14 @@ const JSON_BODY_REFUSALS: ApiErrorCode[] = ["missing_parameter", "invalid_parame
 
 /**
  * Every error code an operation can answer: what withRoute (lib/auth/guard.ts), parseQuery and
- * parseJsonBody refuse for its kind of request, then the handler's own codes.
+ * parseJsonBody refuse for its kind of request, and proxy.ts for a path segment that does not
+ * decode, then the handler's own codes.
  */
 export function errorCodesOf(operation: ApiOperation): ApiErrorCode[] {
   const codes = new Set<ApiErrorCode>();
   if (operation.method !== "get") codes.add("forbidden");
   if (operation.access !== "public") for (const code of ["unauthenticated", "forbidden"] as const) codes.add(code);
-  if (operation.params) codes.add("not_found");
+  if (operation.params) for (const code of ["invalid_parameter", "not_found"] as const) codes.add(code);
   if (operation.query) for (const code of QUERY_REFUSALS) codes.add(code);
   if (operation.body) for (const code of JSON_BODY_REFUSALS) codes.add(code);
   for (const code of operation.errors ?? []) codes.add(code);
