@@ -1,3 +1,4 @@
+import { z } from "zod";
 import type { Database } from "@/db/client";
 import type { FinderSort } from "@/lib/tire";
 import { encodeAlternativesCursor, type AlternativesCursor } from "./cursor";
@@ -8,7 +9,7 @@ import { judgedCandidate } from "./judged-candidate";
 import type { Original } from "./original";
 import { finderShape, finderValues, ruleSql, type CatalogFilters } from "./rule-sql";
 import { cachedStatement } from "./statement-cache";
-import { toTire, type Tire } from "@/lib/catalog/catalog-tire";
+import { tireSchema, toTire } from "@/lib/catalog/catalog-tire";
 
 export interface AlternativesOptions extends CatalogFilters {
   tolerancePct: number;
@@ -17,25 +18,37 @@ export interface AlternativesOptions extends CatalogFilters {
   cursor: AlternativesCursor | null;
 }
 
-/** `notes`: what a driver should know beyond the rules (a change of season, a different inflation). */
-export type Alternative = Tire & { diameterDiffPct: number; reasons: string[]; notes: string[] };
-export type NearMiss = Tire & { diameterDiffPct: number; failed: string[] };
+const diameterDiffPct = z.number().describe("(this − original) ÷ original × 100, signed and unrounded.");
+
+export const alternativeSchema = tireSchema.extend({
+  diameterDiffPct,
+  reasons: z.array(z.string()).describe("Why each rule of equal-or-better holds, in plain words."),
+  notes: z.array(z.string()).describe("What a driver should know beyond the rules (a change of season, a different inflation)."),
+});
+export const nearMissSchema = tireSchema.extend({
+  diameterDiffPct,
+  failed: z.array(z.string()).describe("The one rule of 2–5 the tire fails, in plain words."),
+});
 
 /** The 200 body of GET /api/v1/alternatives. */
-export interface Alternatives {
-  original: {
-    designation: string;
-    overallDiameterMm: number;
-    loadIndex: number;
-    speedSymbol: string | null;
-    loadRange: string | null;
-  };
-  tolerancePct: number;
-  total: number;
-  results: Alternative[];
-  nextCursor: string | null;
-  nearMisses: NearMiss[];
-}
+export const alternativesSchema = z.object({
+  original: z.object({
+    designation: z.string(),
+    overallDiameterMm: z.number(),
+    loadIndex: z.number().int(),
+    speedSymbol: z.string().nullable().describe("Null for a ZR size given without a speed symbol (taken as above 240 km/h)."),
+    loadRange: z.string().nullable(),
+  }),
+  tolerancePct: z.number(),
+  total: z.number().int().describe("Every qualifying tire after the filters, on every page."),
+  results: z.array(alternativeSchema),
+  nextCursor: z.string().nullable(),
+  nearMisses: z.array(nearMissSchema).describe("At most 20 tires that fail exactly one of rules 2–5."),
+});
+
+export type Alternative = z.infer<typeof alternativeSchema>;
+export type NearMiss = z.infer<typeof nearMissSchema>;
+export type Alternatives = z.infer<typeof alternativesSchema>;
 
 function cursorValues(cursor: AlternativesCursor | null) {
   return { cursorKey: cursor?.key, cursorPriceCents: cursor?.priceCents, cursorSku: cursor?.sku };

@@ -1,4 +1,5 @@
 import { NextResponse } from "next/server";
+import { z } from "zod";
 
 /** The public API's error codes and the HTTP status each one answers with. */
 export const apiErrorStatus = {
@@ -21,7 +22,21 @@ export const apiErrorStatus = {
 
 export type ApiErrorCode = keyof typeof apiErrorStatus;
 
+export const API_ERROR_CODES = Object.keys(apiErrorStatus) as [ApiErrorCode, ...ApiErrorCode[]];
+
 /** `{"error":{"code","message"}}`, with `"field"` when the error is about one field of the request. */
+export const apiErrorBodySchema = z.object({
+  error: z.object({
+    code: z.enum(API_ERROR_CODES),
+    message: z.string(),
+    /** The parameter or body field the error is about, as a dotted path ("items.1.name"). */
+    field: z.string().optional(),
+  }),
+});
+
+export type ApiErrorBody = z.infer<typeof apiErrorBodySchema>;
+
 export function apiError(code: ApiErrorCode, message: string, headers?: HeadersInit, field?: string): NextResponse {
-  return NextResponse.json({ error: field === undefined ? { code, message } : { code, message, field } }, { status: apiErrorStatus[code], headers });
+  const body: ApiErrorBody = { error: field === undefined ? { code, message } : { code, message, field } };
+  return NextResponse.json(body, { status: apiErrorStatus[code], headers });
 }

@@ -1,25 +1,29 @@
 import type { SelectResultFields } from "drizzle-orm/query-builders/select.types";
-import { brand, stockItem, tireLine, type Season, type Terrain } from "@/db/schema";
+import { z } from "zod";
+import { brand, stockItem, tireLine } from "@/db/schema";
+import { SEASONS, TERRAINS } from "@/lib/tire";
 
 /** One catalog item as every endpoint returns it. */
-export interface Tire {
-  sku: string;
-  brand: string;
-  line: string;
-  designation: string;
-  loadIndex: number;
-  loadIndexDual: number | null;
-  speedSymbol: string;
-  loadRange: string | null;
-  extraLoad: boolean;
-  runFlat: boolean;
-  season: Season;
-  terrain: Terrain;
-  threePeak: boolean;
-  overallDiameterMm: number;
-  priceCents: number;
-  inStock: boolean;
-}
+export const tireSchema = z.object({
+  sku: z.string(),
+  brand: z.string(),
+  line: z.string(),
+  designation: z.string().describe('The size as the tire core writes it, e.g. "285/50R20".'),
+  loadIndex: z.number().int(),
+  loadIndexDual: z.number().int().nullable().describe("The dual-mounting load index; null for a tire with no dual rating (every passenger tire)."),
+  speedSymbol: z.string(),
+  loadRange: z.string().nullable(),
+  extraLoad: z.boolean(),
+  runFlat: z.boolean(),
+  season: z.enum(SEASONS),
+  terrain: z.enum(TERRAINS),
+  threePeak: z.boolean().describe("Marked with the three-peak mountain snowflake (3PMSF)."),
+  overallDiameterMm: z.number().describe("Nominal overall diameter, unrounded."),
+  priceCents: z.number().int().describe("Price of one tire in US cents."),
+  inStock: z.boolean(),
+});
+
+export type Tire = z.infer<typeof tireSchema>;
 
 /** A Tire's columns from stock_item. */
 export const tireStockColumns = {

@@ -37,5 +37,10 @@ export const newFitCardSchema = z
 
 export type NewFitCard = z.infer<typeof newFitCardSchema>;
 
+/** The 201 body of POST /api/v1/fit-cards. */
+export const savedFitCardSchema = z.object({ slug: z.string(), url: z.url().describe("The card's public page, /s/{slug}.") });
+
+export type SavedFitCard = z.infer<typeof savedFitCardSchema>;
+
 /** The `{slug}` in a card's address. */
 export const fitCardParamsSchema = z.object({ slug: z.string().regex(FIT_CARD_SLUG_PATTERN) });

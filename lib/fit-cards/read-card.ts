@@ -1,38 +1,44 @@
 import { asc, eq } from "drizzle-orm";
+import { z } from "zod";
 import type { Database } from "@/db/client";
 import { brand, fitCard, fitCardTire, stockItem, tireLine } from "@/db/schema";
 import { ofBrand, ofLine, ruleFactColumns } from "@/lib/catalog/columns";
 import { readOriginal } from "@/lib/alternatives/original";
-import { tireColumns, toTire, type Tire } from "@/lib/catalog/catalog-tire";
-import type { LoadRange, Season } from "@/lib/tire";
-import { cardTireVerdict, type TireVerdict } from "./tire-verdict";
+import { tireColumns, tireSchema, toTire } from "@/lib/catalog/catalog-tire";
+import { SEASONS, type LoadRange } from "@/lib/tire";
+import { cardTireVerdict, tireVerdictSchema } from "./tire-verdict";
 
 /** A chosen tire as the public card shows it: live price and stock beside the price when saved. */
-export type CardTire = Tire & TireVerdict & { priceCentsAtSave: number; stillStocked: boolean };
+const cardTireSchema = tireSchema.extend(tireVerdictSchema.shape).extend({
+  priceCentsAtSave: z.number().int(),
+  stillStocked: z.boolean().describe("False once the item is retired (it then counts as not in stock)."),
+});
 
 /** GET /api/v1/fit-cards/{slug}: what anyone with the link may see; nothing about who made it. */
-export interface PublicFitCard {
-  slug: string;
-  createdAt: string;
-  expiresAt: string | null;
-  sizes: string[];
-  original: {
-    designation: string;
-    overallDiameterMm: number;
-    loadIndex: number;
-    loadIndexDual: number | null;
-    speedSymbol: string;
-    loadRange: string | null;
-    runFlat: boolean;
-    /** The Placard check's minimums the card was saved with. */
-    minLoadIndex: number | null;
-    minLoadIndexDual: number | null;
-    season: Season | null;
-  };
-  tolerancePct: number;
-  note: string | null;
-  tires: CardTire[];
-}
+export const publicFitCardSchema = z.object({
+  slug: z.string(),
+  createdAt: z.iso.datetime(),
+  expiresAt: z.iso.datetime().nullable(),
+  sizes: z.array(z.string()).describe("As saved; the first is the tire on the car."),
+  original: z.object({
+    designation: z.string(),
+    overallDiameterMm: z.number(),
+    loadIndex: z.number().int(),
+    loadIndexDual: z.number().int().nullable(),
+    speedSymbol: z.string(),
+    loadRange: z.string().nullable(),
+    runFlat: z.boolean(),
+    minLoadIndex: z.number().int().nullable().describe("The Placard check's minimum the card was saved with."),
+    minLoadIndexDual: z.number().int().nullable(),
+    season: z.enum(SEASONS).nullable(),
+  }),
+  tolerancePct: z.number(),
+  note: z.string().nullable(),
+  tires: z.array(cardTireSchema),
+});
+
+export type CardTire = z.infer<typeof cardTireSchema>;
+export type PublicFitCard = z.infer<typeof publicFitCardSchema>;
 
 export type CardLookup = { status: "found"; card: PublicFitCard } | { status: "withdrawn"; why: "revoked" | "expired" } | { status: "missing" };
 

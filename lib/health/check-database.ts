@@ -1,9 +1,18 @@
 import { sql } from "drizzle-orm";
+import { z } from "zod";
 import type { DatabaseHandle, DatabaseKind } from "@/db/client";
+import { schemaOf } from "@/lib/api/schema-match";
 
-export type HealthReport =
-  | { ok: true; body: { status: "ok"; db: DatabaseKind } }
-  | { ok: false; body: { status: "error"; error: { code: "database_unavailable"; message: string } } };
+/** GET /api/health's 200 body. */
+export const healthyBodySchema = z.object({ status: z.literal("ok"), db: schemaOf<DatabaseKind>()(z.enum(["pglite", "postgres"])) });
+
+/** Its 503 body. */
+export const unhealthyBodySchema = z.object({
+  status: z.literal("error"),
+  error: z.object({ code: z.literal("database_unavailable"), message: z.string() }),
+});
+
+export type HealthReport = { ok: true; body: z.infer<typeof healthyBodySchema> } | { ok: false; body: z.infer<typeof unhealthyBodySchema> };
 
 /** Healthy only once a real query has come back from the database. */
 export async function checkDatabase(open: () => Promise<DatabaseHandle>): Promise<HealthReport> {

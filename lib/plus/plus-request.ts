@@ -19,8 +19,32 @@ export interface PlusPlan {
 
 export type PlusAnswer = { ok: true; plan: PlusPlan } | { ok: false; code: ApiErrorCode; message: string };
 
+/** The 200 body of GET /api/v1/plus. */
+export const plusBodySchema = z.object({
+  original: z.object({ designation: z.string(), overallDiameterMm: z.number() }),
+  tolerancePct: z.number(),
+  candidates: z
+    .array(
+      z.object({
+        designation: z.string(),
+        plus: z.number().int().describe("Rim diameter change in inches, −1 to +3."),
+        rimDiameterIn: z.number(),
+        sectionWidthMm: z.number(),
+        aspectRatio: z.number().nullable(),
+        overallDiameterMm: z.number(),
+        diameterDiffPct: z.number().describe("(this − original) ÷ original × 100, signed and unrounded."),
+        theoreticalRimWidthIn: z.number(),
+        minLoadIndex: z.number().int().nullable().describe("The given loadIndex; null when none was given."),
+        catalogMatches: z.number().int().describe("Current catalog tires of exactly this designation that meet rules 2–7 against the original, each on its own rim."),
+      }),
+    )
+    .describe("Ordered by plus, then |diameterDiffPct|, then section width; the original is listed with plus 0."),
+});
+
+export type PlusBody = z.infer<typeof plusBodySchema>;
+
 /** The published body of GET /api/v1/plus: the plan without the fields only the page uses. */
-export function toPlusBody(plan: PlusPlan) {
+export function toPlusBody(plan: PlusPlan): PlusBody {
   return {
     original: { designation: plan.original.designation, overallDiameterMm: plan.original.overallDiameterMm },
     tolerancePct: plan.tolerancePct,

@@ -1,4 +1,5 @@
 import { createHmac, timingSafeEqual } from "node:crypto";
+import { z } from "zod";
 import { readAuthEnv } from "@/lib/auth/auth-env";
 import { HONEYPOT_FIELD, MIN_FILL_MS } from "./quote-input";
 
@@ -10,6 +11,13 @@ const TOKEN_PATTERN = /^(\d{1,15})\.([A-Za-z0-9_-]{43})$/;
 function signature(issuedAtMs: number, secret: string): Buffer {
   return createHmac("sha256", secret).update(`sidewise quote form opened at ${issuedAtMs}`).digest();
 }
+
+/** The 200 body of GET /api/v1/quote-requests/form-token. */
+export const formTokenAnswerSchema = z.object({
+  renderedAt: z.string().regex(TOKEN_PATTERN).describe("When the server handed the form out, signed; post it back as the request's renderedAt."),
+});
+
+export type FormTokenAnswer = z.infer<typeof formTokenAnswerSchema>;
 
 /** The `renderedAt` a request form carries: when the server handed it out, signed with the app's secret. */
 export function signFormToken(issuedAtMs: number, secret = readAuthEnv().secret): string {

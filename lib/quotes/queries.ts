@@ -1,7 +1,7 @@
 import { asc, desc, eq, sql } from "drizzle-orm";
 import { z } from "zod";
 import type { Database } from "@/db/client";
-import { emailSend, QUOTE_STATUSES, quoteReply, quoteRequest, type QuoteStatus } from "@/db/schema";
+import { emailSend, QUOTE_SOURCES, QUOTE_STATUSES, quoteReply, quoteRequest, type QuoteStatus } from "@/db/schema";
 
 export const REQUEST_PAGE_SIZE = 25;
 
@@ -71,6 +71,30 @@ export async function getQuoteRequest(db: Database, id: number) {
     .orderBy(asc(quoteReply.createdAt), asc(quoteReply.id));
   return { ...request, replies };
 }
+
+/** The 200 body of GET /api/v1/quote-requests: a listing with each request's time in ISO 8601. */
+export const quoteRequestListSchema = z.object({
+  requests: z.array(
+    z.object({
+      id: z.number().int(),
+      createdAt: z.iso.datetime(),
+      name: z.string(),
+      email: z.string(),
+      vehicle: z.string(),
+      tires: z.string(),
+      quantity: z.number().int(),
+      preferredDay: z.iso.date().nullable(),
+      source: z.enum(QUOTE_SOURCES),
+      status: z.enum(QUOTE_STATUSES),
+    }),
+  ),
+  counts: z.record(z.enum(QUOTE_STATUSES), z.number().int()).describe("How many requests there are in each status."),
+  total: z.number().int().describe("Requests in the status asked for, or in all."),
+  page: z.number().int(),
+  pageCount: z.number().int(),
+});
+
+export type QuoteRequestList = z.infer<typeof quoteRequestListSchema>;
 
 export type QuoteRequestListing = Awaited<ReturnType<typeof listQuoteRequests>>;
 export type QuoteRequestSummary = QuoteRequestListing["requests"][number];

@@ -80,6 +80,11 @@ export const quoteRequestSchema = z.object({
 });
 
 export type QuoteRequestInput = z.infer<typeof quoteRequestSchema>;
+
+/** The 201 body of POST /api/v1/quote-requests. */
+export const quoteRequestCreatedSchema = z.object({ id: z.number().int(), status: z.literal("new") });
+
+export type QuoteRequestCreated = z.infer<typeof quoteRequestCreatedSchema>;
 export type NewQuoteRequest = Omit<QuoteRequestInput, typeof HONEYPOT_FIELD | "renderedAt">;
 
 /** What a refused sender reads: the same words for every reason, so a script learns nothing. */

@@ -1,6 +1,7 @@
 import { readdirSync } from "node:fs";
 import path from "node:path";
 import { type APIRequestContext, type APIResponse, expect, request as playwrightRequest } from "@playwright/test";
+import { contractChecker, type DescribedApi } from "../integration/helpers/contract-checker";
 
 let addresses = 0;
 
@@ -48,4 +49,26 @@ export async function errorShapeProblem(url: string, response: APIResponse): Pro
   if (typeof body.error?.code === "string" && typeof body.error.message === "string" && ["undefined", "string"].includes(typeof body.error.field)) return null;
   if (url.includes("/api/auth/") && typeof body.message === "string") return null;
   return `not the error shape: ${text.slice(0, 120)}`;
+}
+
+/**
+ * What the OpenAPI document the server serves says is wrong with each API answer over HTTP
+ * (proxy.ts included), or null. A 405 for a method a route does not export comes from Next.js
+ * itself, not from the API.
+ */
+export async function contractOf(context: APIRequestContext) {
+  const served = await context.get("/api/v1/openapi.json");
+  expect(served.status(), "GET /api/v1/openapi.json").toBe(200);
+  const { checkContract } = contractChecker((await served.json()) as DescribedApi);
+  return async (method: string, url: string, response: APIResponse): Promise<string | null> => {
+    const address = new URL(url, "http://localhost");
+    if (!address.pathname.startsWith("/api/") || response.status() === 405) return null;
+    const answer = new Response(response.status() === 204 ? null : new Uint8Array(await response.body()), { status: response.status(), headers: response.headers() });
+    try {
+      await checkContract(new Request(address, { method }), answer);
+      return null;
+    } catch (error) {
+      return (error as Error).message;
+    }
+  };
 }

@@ -9,6 +9,7 @@ import { seedDemoAccounts } from "@/lib/demo/accounts";
 import { signFormToken } from "@/lib/quotes/form-token";
 import { CLIENT_ADDRESS_HEADER, clientAddress, trustedProxyHops, UNKNOWN_CLIENT } from "@/lib/security/client-address";
 import { APP_ORIGIN } from "../integration/helpers/auth-session";
+import { checkContract } from "../integration/helpers/contract";
 
 vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typeof import("next/server")>()), connection: async () => undefined }));
 
@@ -53,13 +54,12 @@ describe("limits keyed on the trusted entry", () => {
   let sent = 0;
   const ask = async (forwardedFor: string) => {
     sent += 1;
-    const response = await askTheShop(
-      new NextRequest(`${APP_ORIGIN}/api/v1/quote-requests`, {
-        method: "POST",
-        headers: { origin: APP_ORIGIN, "content-type": "application/json", "x-forwarded-for": forwardedFor },
-        body: JSON.stringify({ ...request, email: `driver${sent}@example.test`, renderedAt: signFormToken(Date.now() - 10_000) }),
-      }),
-    );
+    const asking = new NextRequest(`${APP_ORIGIN}/api/v1/quote-requests`, {
+      method: "POST",
+      headers: { origin: APP_ORIGIN, "content-type": "application/json", "x-forwarded-for": forwardedFor },
+      body: JSON.stringify({ ...request, email: `driver${sent}@example.test`, renderedAt: signFormToken(Date.now() - 10_000) }),
+    });
+    const response = await checkContract(asking, await askTheShop(asking));
     return response.status;
   };
 

@@ -6,6 +6,7 @@ import { getDatabaseHandle, getDb } from "@/lib/database/app-database";
 import { seedDemoAccounts } from "@/lib/demo/accounts";
 import { checkRequestOrigin } from "@/lib/security/request-origin";
 import { APP_ORIGIN, signIn } from "../integration/helpers/auth-session";
+import { checkContract } from "../integration/helpers/contract";
 import { ACTION_MATRIX, MATRIX } from "./route-table";
 
 vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typeof import("next/server")>()), connection: async () => undefined }));
@@ -35,7 +36,7 @@ afterAll(async () => {
 async function call(row: (typeof MATRIX)[number], headers: Record<string, string>, body?: string) {
   const routeModule = (await import(/* @vite-ignore */ path.join(apiFolder, row.file))) as Record<string, Handler>;
   const request = new NextRequest(`${APP_ORIGIN}${row.path}`, { method: row.method, headers: { cookie: staff, ...headers }, body });
-  return routeModule[row.method]!(request, { params: Promise.resolve(row.params ?? {}) });
+  return checkContract(request, await routeModule[row.method]!(request, { params: Promise.resolve(row.params ?? {}) }));
 }
 
 const jsonBody = (row: (typeof MATRIX)[number]) => (row.body === undefined ? undefined : JSON.stringify(row.body));
@@ -84,7 +85,8 @@ describe("every state-changing route handler", () => {
 
   it("refuses a foreign origin on the public Ask the shop route and on the sign-in service", async () => {
     const { POST: askTheShop } = await import("@/app/api/v1/quote-requests/route");
-    const quote = await askTheShop(new NextRequest(`${APP_ORIGIN}/api/v1/quote-requests`, { method: "POST", headers: { origin: FOREIGN, "content-type": "application/json" }, body: "{}" }));
+    const asking = new NextRequest(`${APP_ORIGIN}/api/v1/quote-requests`, { method: "POST", headers: { origin: FOREIGN, "content-type": "application/json" }, body: "{}" });
+    const quote = await checkContract(asking, await askTheShop(asking));
     expect(quote.status).toBe(403);
     const signInAttempt = await authPost(
       new NextRequest(`${APP_ORIGIN}/api/auth/sign-in/email`, {

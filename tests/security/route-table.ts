@@ -16,6 +16,7 @@ export const PUBLIC_HANDLERS = [
   "v1/compare/route.ts#GET",
   "v1/decode/route.ts#GET",
   "v1/fit-cards/[slug]/route.ts#GET",
+  "v1/openapi.json/route.ts#GET",
   "v1/plus/route.ts#GET",
   "v1/quote-requests/form-token/route.ts#GET",
   "v1/quote-requests/route.ts#POST",

@@ -1,13 +1,14 @@
 import type { APIRequestContext } from "@playwright/test";
 import { expect, test } from "@playwright/test";
-import { client, errorShapeProblem, filesNamed, freshAddress } from "./http";
+import { client, contractOf, errorShapeProblem, filesNamed, freshAddress } from "./http";
 import {
   API_WALKS, type ApiWalk, BAD_BODIES, BAD_FIELD_VALUES, BAD_MULTIPART, BAD_PAGE_POSTS, BAD_PAGE_VALUES, BAD_QUERY_VALUES, BAD_SEGMENTS,
   type Caller, PAGE_WALKS,
 } from "./route-walk-data";
 
 // "Bad input never gets a 5xx": every route and page, walked with broken encodings, control
-// characters, wrong types and oversize bodies, must answer below 500, and the API in its error shape.
+// characters, wrong types and oversize bodies, must answer below 500, and the API in its error shape
+// with a status and body its OpenAPI document describes.
 test.describe.configure({ mode: "serial" });
 test.setTimeout(600_000);
 
@@ -22,6 +23,7 @@ interface Probe {
 const IN_FLIGHT = 4;
 let walked = 0;
 let clients: Record<Caller, APIRequestContext>;
+let contractProblem: Awaited<ReturnType<typeof contractOf>>;
 
 /** Sends the probes a few at a time and answers every one that got a 5xx or broke the error shape. */
 async function walk(probes: Probe[]): Promise<string[]> {
@@ -42,6 +44,8 @@ async function walk(probes: Probe[]): Promise<string[]> {
       if (response.status() >= 500) problems.push(`${response.status()} ${label}`);
       const shape = await errorShapeProblem(probe.url, response);
       if (shape) problems.push(`${label}: ${shape}`);
+      const contract = await contractProblem(probe.method, probe.url, response);
+      if (contract) problems.push(contract);
     }
   };
   await Promise.all(Array.from({ length: IN_FLIGHT }, worker));
@@ -89,6 +93,7 @@ test.beforeAll(async ({ baseURL }) => {
   clients = { anonymous: await client(baseURL!), staff: await client(baseURL!, "staff@sidewise.test"), admin: await client(baseURL!, "admin@sidewise.test") };
   const catalog = await (await clients.anonymous.get("/api/v1/catalog?limit=1")).json();
   sample.sku = catalog.items[0].sku;
+  contractProblem = await contractOf(clients.anonymous);
 });
 
 test.afterAll(async () => {

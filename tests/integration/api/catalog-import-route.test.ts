@@ -8,6 +8,7 @@ import { POST as importCatalog } from "@/app/api/v1/catalog/import/route";
 import { getDatabaseHandle, getDb } from "@/lib/database/app-database";
 import { auditEvent } from "@/db/schema";
 import { APP_ORIGIN, callRoute, signIn } from "../helpers/auth-session";
+import { checkContract } from "../helpers/contract";
 
 vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typeof import("next/server")>()), connection: async () => undefined }));
 
@@ -20,7 +21,7 @@ async function upload(fields: Record<string, string | File>, headers: Record<str
   const form = new FormData();
   for (const [name, value] of Object.entries(fields)) form.append(name, value);
   const request = new NextRequest(`${APP_ORIGIN}/api/v1/catalog/import`, { method: "POST", headers: { origin: APP_ORIGIN, cookie, ...headers }, body: form });
-  const response = await importCatalog(request, { params: Promise.resolve({}) });
+  const response = await checkContract(request, await importCatalog(request, { params: Promise.resolve({}) }));
   return { status: response.status, body: await response.json() };
 }
 const csvFile = (content: BlobPart, name = "stock.csv", type = "text/csv") => new File([content], name, { type });

@@ -1,9 +1,11 @@
 import { NextRequest } from "next/server";
 import { describe, expect, it } from "vitest";
 import { GET } from "@/app/api/v1/compare/route";
+import { checkContract } from "../helpers/contract";
 
 async function compare(query: string) {
-  const response = GET(new NextRequest(`http://localhost/api/v1/compare${query}`));
+  const request = new NextRequest(`http://localhost/api/v1/compare${query}`);
+  const response = await checkContract(request, GET(request));
   return { status: response.status, body: await response.json() };
 }
 

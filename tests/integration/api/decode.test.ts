@@ -1,9 +1,11 @@
 import { NextRequest } from "next/server";
 import { describe, expect, it } from "vitest";
 import { GET } from "@/app/api/v1/decode/route";
+import { checkContract } from "../helpers/contract";
 
 async function decode(query: string) {
-  const response = GET(new NextRequest(`http://localhost/api/v1/decode${query}`));
+  const request = new NextRequest(`http://localhost/api/v1/decode${query}`);
+  const response = await checkContract(request, GET(request));
   return { status: response.status, headers: response.headers, body: await response.json() };
 }
 

@@ -10,6 +10,7 @@ import { createFitCard } from "@/lib/fit-cards/create-card";
 import { revokeFitCard } from "@/lib/fit-cards/revoke-card";
 import { type FakeResend, startFakeResend } from "@/scripts/fake-resend.mjs";
 import { APP_ORIGIN, signIn } from "../helpers/auth-session";
+import { checkContract } from "../helpers/contract";
 
 vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typeof import("next/server")>()), connection: async () => undefined }));
 
@@ -21,7 +22,7 @@ async function send(slug: string, body: unknown, { cookie = staffCookie, key }: 
   const headers: Record<string, string> = { origin: APP_ORIGIN, cookie, "content-type": "application/json" };
   if (key) headers["idempotency-key"] = key;
   const request = new NextRequest(`${APP_ORIGIN}/api/v1/fit-cards/${slug}/email`, { method: "POST", headers, body: JSON.stringify(body) });
-  const response = await emailCard(request, { params: Promise.resolve({ slug }) });
+  const response = await checkContract(request, await emailCard(request, { params: Promise.resolve({ slug }) }));
   return { status: response.status, headers: response.headers, body: await response.json() };
 }
 

@@ -8,6 +8,7 @@ import { POST as createCard } from "@/app/api/v1/fit-cards/route";
 import { GET as getPlus } from "@/app/api/v1/plus/route";
 import { getDatabaseHandle, getDb } from "@/lib/database/app-database";
 import { callRoute, signIn } from "../helpers/auth-session";
+import { checkContract } from "../helpers/contract";
 
 vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typeof import("next/server")>()), connection: async () => undefined }));
 
@@ -15,7 +16,8 @@ vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typ
 // aspect ratio, and so no overall diameter from the marking alone; 1 in = 25.4 mm exactly.
 
 async function get(handler: (request: NextRequest) => Response | Promise<Response>, path: string) {
-  const response = await handler(new NextRequest(`http://localhost:3000${path}`));
+  const request = new NextRequest(`http://localhost:3000${path}`);
+  const response = await checkContract(request, await handler(request));
   return { status: response.status, body: await response.json() };
 }
 

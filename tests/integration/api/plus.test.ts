@@ -4,12 +4,14 @@ import { GET } from "@/app/api/v1/plus/route";
 import { getDatabaseHandle, getDb } from "@/lib/database/app-database";
 import { stockItem } from "@/db/schema";
 import { speedSymbolRank } from "@/lib/tire";
+import { checkContract } from "../helpers/contract";
 
 // Outside a Next.js request `connection()` throws; here every call is a request of its own.
 vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typeof import("next/server")>()), connection: async () => undefined }));
 
 async function plus(query: string) {
-  const response = await GET(new NextRequest(`http://localhost/api/v1/plus?${query}`));
+  const request = new NextRequest(`http://localhost/api/v1/plus?${query}`);
+  const response = await checkContract(request, await GET(request));
   return { status: response.status, body: await response.json() };
 }
 

@@ -4,6 +4,7 @@ import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { GET as getAlternatives } from "@/app/api/v1/alternatives/route";
 import { GET as getCatalog } from "@/app/api/v1/catalog/route";
 import { getDatabaseHandle, getDb } from "@/lib/database/app-database";
+import { checkContract } from "../helpers/contract";
 
 // Outside a Next.js request `connection()` throws; here every call is a request of its own.
 vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typeof import("next/server")>()), connection: async () => undefined }));
@@ -14,7 +15,8 @@ const TIRE_KEYS = [
 ].sort();
 
 async function call(handler: (request: NextRequest) => Promise<Response>, path: string) {
-  const response = await handler(new NextRequest(`http://localhost${path}`));
+  const request = new NextRequest(`http://localhost${path}`);
+  const response = await checkContract(request, await handler(request));
   return { status: response.status, body: await response.json() };
 }
 const alternatives = (query: string) => call(getAlternatives, `/api/v1/alternatives?${query}`);

@@ -1,5 +1,6 @@
 import { NextRequest } from "next/server";
 import { POST as authPost } from "@/app/api/auth/[...all]/route";
+import { checkContract } from "./contract";
 
 export const APP_ORIGIN = "http://localhost:3000";
 
@@ -20,7 +21,10 @@ export async function signIn(email: string, password: string): Promise<string> {
 
 type Handler = (request: NextRequest, context: { params: Promise<Record<string, string>> }) => Promise<Response>;
 
-/** Calls a route handler as a browser at the app's address would, with an optional session cookie and JSON body. */
+/**
+ * Calls a route handler as a browser at the app's address would, with an optional session cookie and
+ * JSON body; the answer is checked against the API description.
+ */
 export async function callRoute(
   handler: Handler,
   method: string,
@@ -31,5 +35,6 @@ export async function callRoute(
   if (options.cookie) headers.set("cookie", options.cookie);
   if (options.body !== undefined) headers.set("content-type", "application/json");
   const body = options.body === undefined ? undefined : typeof options.body === "string" ? options.body : JSON.stringify(options.body);
-  return handler(new NextRequest(`${APP_ORIGIN}${path}`, { method, headers, body }), { params: Promise.resolve(options.params ?? {}) });
+  const request = new NextRequest(`${APP_ORIGIN}${path}`, { method, headers, body });
+  return checkContract(request, await handler(request, { params: Promise.resolve(options.params ?? {}) }));
 }

@@ -1,11 +1,13 @@
 import { NextRequest } from "next/server";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+import { GET as getFormToken } from "@/app/api/v1/quote-requests/form-token/route";
 import { GET, POST } from "@/app/api/v1/quote-requests/route";
 import { getDatabaseHandle, getDb } from "@/lib/database/app-database";
 import { quoteRequest } from "@/db/schema";
-import { signFormToken } from "@/lib/quotes/form-token";
+import { checkFormToken, signFormToken } from "@/lib/quotes/form-token";
 import { type FakeResend, startFakeResend } from "@/scripts/fake-resend.mjs";
 import { APP_ORIGIN, callRoute, signIn } from "../helpers/auth-session";
+import { checkContract } from "../helpers/contract";
 
 vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typeof import("next/server")>()), connection: async () => undefined }));
 
@@ -26,13 +28,12 @@ let addressCount = 0;
 
 /** Each call comes from its own address unless one is given, so that the per-address limit stays out of the way. */
 async function ask(body: unknown, address = `198.51.100.${++addressCount}`) {
-  const response = await POST(
-    new NextRequest(`${APP_ORIGIN}/api/v1/quote-requests`, {
-      method: "POST",
-      headers: { origin: APP_ORIGIN, "content-type": "application/json", "x-forwarded-for": address },
-      body: JSON.stringify(body),
-    }),
-  );
+  const request = new NextRequest(`${APP_ORIGIN}/api/v1/quote-requests`, {
+    method: "POST",
+    headers: { origin: APP_ORIGIN, "content-type": "application/json", "x-forwarded-for": address },
+    body: JSON.stringify(body),
+  });
+  const response = await checkContract(request, await POST(request));
   return { status: response.status, headers: response.headers, body: await response.json() };
 }
 
@@ -138,5 +139,15 @@ describe("GET /api/v1/quote-requests", () => {
   it("is not for customers", async () => {
     const cookie = await signIn("customer@sidewise.test", "sidewise-demo");
     expect((await callRoute(GET, "GET", "/api/v1/quote-requests", { cookie })).status).toBe(403);
+  });
+});
+
+describe("GET /api/v1/quote-requests/form-token", () => {
+  it("hands out a token this server signed, too fresh to send a request with yet", async () => {
+    const request = new NextRequest(`${APP_ORIGIN}/api/v1/quote-requests/form-token`);
+    const response = await checkContract(request, await getFormToken());
+    expect(response.headers.get("cache-control")).toBe("no-store");
+    const { renderedAt } = await response.json();
+    expect(checkFormToken(renderedAt)).toEqual({ ok: false, reason: "too_young" });
   });
 });

@@ -1,14 +1,12 @@
 import { NextResponse, type NextRequest } from "next/server";
-import { z } from "zod";
 import { apiError } from "@/lib/api/errors";
 import { parseQuery } from "@/lib/api/query";
+import { compareQuerySchema } from "@/lib/compare/compare-api";
 import { readSizeList } from "@/lib/compare/read-sizes";
 import { compareSizes } from "@/lib/tire";
 
-const compareQuery = z.object({ sizes: z.string().trim().min(1, "list two to four sizes") });
-
 export function GET(request: NextRequest) {
-  const query = parseQuery(request.nextUrl, compareQuery);
+  const query = parseQuery(request.nextUrl, compareQuerySchema);
   if (!query.ok) return query.response;
   const list = readSizeList(query.value.sizes, 2);
   if (!list.ok) return apiError(list.code, list.message);

@@ -2,7 +2,7 @@ import { NextResponse } from "next/server";
 import { apiError } from "@/lib/api/errors";
 import { withRoute } from "@/lib/auth/guard";
 import { siteUrl } from "@/lib/env/site-url";
-import { newFitCardSchema } from "@/lib/fit-cards/card-input";
+import { newFitCardSchema, type SavedFitCard } from "@/lib/fit-cards/card-input";
 import { createFitCard } from "@/lib/fit-cards/create-card";
 
 /** Anyone signed in saves a comparison as a Fit card → 201 { slug, url }. */
@@ -10,5 +10,6 @@ export const POST = withRoute({ role: "customer", body: newFitCardSchema }, asyn
   const result = await createFitCard(db, user.id, body);
   if (!result.ok) return apiError(result.code, result.message);
   const url = new URL(`/s/${result.slug}`, siteUrl()).toString();
-  return NextResponse.json({ slug: result.slug, url }, { status: 201, headers: { Location: url } });
+  const saved: SavedFitCard = { slug: result.slug, url };
+  return NextResponse.json(saved, { status: 201, headers: { Location: url } });
 });

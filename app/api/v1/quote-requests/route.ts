@@ -3,8 +3,8 @@ import { apiError } from "@/lib/api/errors";
 import { withRoute } from "@/lib/auth/guard";
 import { createQuoteRequest } from "@/lib/quotes/create-request";
 import { spamVerdict } from "@/lib/quotes/form-token";
-import { listQuoteRequests, requestListApiQuerySchema } from "@/lib/quotes/queries";
-import { HONEYPOT_FIELD, quoteRequestSchema, SPAM_REFUSAL_MESSAGE } from "@/lib/quotes/quote-input";
+import { listQuoteRequests, requestListApiQuerySchema, type QuoteRequestList } from "@/lib/quotes/queries";
+import { HONEYPOT_FIELD, quoteRequestSchema, SPAM_REFUSAL_MESSAGE, type QuoteRequestCreated } from "@/lib/quotes/quote-input";
 import { hitAddressLimit, hitEmailLimit } from "@/lib/quotes/request-limits";
 
 function tooMany(retryAfterSeconds: number) {
@@ -38,7 +38,8 @@ export const POST = withRoute(
     if (!byEmail.allowed) return tooMany(byEmail.retryAfterSeconds);
 
     const created = await createQuoteRequest(db, input);
-    return NextResponse.json({ id: created.id, status: created.status }, { status: 201 });
+    const answer: QuoteRequestCreated = { id: created.id, status: created.status };
+    return NextResponse.json(answer, { status: 201 });
   },
 );
 
@@ -48,8 +49,6 @@ export const POST = withRoute(
  */
 export const GET = withRoute({ role: "staff", query: requestListApiQuerySchema }, async ({ db, query }) => {
   const listing = await listQuoteRequests(db, query);
-  return NextResponse.json({
-    ...listing,
-    requests: listing.requests.map((row) => ({ ...row, createdAt: row.createdAt.toISOString() })),
-  });
+  const answer: QuoteRequestList = { ...listing, requests: listing.requests.map((row) => ({ ...row, createdAt: row.createdAt.toISOString() })) };
+  return NextResponse.json(answer);
 });

@@ -1,7 +1,7 @@
 import { NextResponse } from "next/server";
 import { apiError } from "@/lib/api/errors";
 import { withRoute } from "@/lib/auth/guard";
-import { fitCardEmailBodySchema, idempotencyHeaderSchema } from "@/lib/email/fit-card-email-input";
+import { fitCardEmailBodySchema, idempotencyHeaderSchema, type FitCardEmailAnswer } from "@/lib/email/fit-card-email-input";
 import { emailFitCard } from "@/lib/email/fit-card-email-request";
 import { siteUrl } from "@/lib/env/site-url";
 import { fitCardParamsSchema } from "@/lib/fit-cards/card-input";
@@ -35,7 +35,9 @@ export const POST = withRoute({ role: "staff", params: fitCardParamsSchema, body
       });
     case "attempted": {
       const { result } = outcome;
-      const answer = result.ok ? { id: result.id, status: "sent", providerId: result.providerId } : { id: result.id, status: "failed", message: result.message };
+      const answer: FitCardEmailAnswer = result.ok
+        ? { id: result.id, status: "sent", providerId: result.providerId }
+        : { id: result.id, status: "failed", message: result.message };
       return NextResponse.json(answer, { status: 202 });
     }
   }

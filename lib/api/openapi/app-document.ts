@@ -1,0 +1,16 @@
+import { buildOpenApiDocument, type OpenApiDocument } from "./document";
+import type { ApiOperation } from "./operation";
+import { CARD_ROUTES } from "./routes-cards";
+import { CATALOG_ROUTES } from "./routes-catalog";
+import { PUBLIC_ROUTES } from "./routes-public";
+import { QUOTE_ROUTES } from "./routes-quotes";
+
+/** Every route of the API: a new route file needs its entry here (the document's test lists the files). */
+export const API_OPERATIONS: readonly ApiOperation[] = [...PUBLIC_ROUTES, ...CATALOG_ROUTES, ...CARD_ROUTES, ...QUOTE_ROUTES];
+
+let built: OpenApiDocument | undefined;
+
+/** The app's OpenAPI document, built once: it depends on no request. */
+export function openApiDocument(): OpenApiDocument {
+  return (built ??= buildOpenApiDocument(API_OPERATIONS));
+}
