@@ -1,6 +1,9 @@
 import Papa from "papaparse";
+import type { ImportMode } from "@/lib/catalog-csv/import-report";
 import type { CsvRefusal } from "@/lib/catalog-csv/columns";
-import { readCatalogHeader, readCatalogRows } from "@/lib/catalog-csv/read-file";
+import { normalizeCsvText } from "@/lib/catalog-csv/line-endings";
+import { isSkippedRow, readCatalogHeader, readCatalogRows } from "@/lib/catalog-csv/read-file";
+import { formatInteger } from "@/lib/tire";
 import { EXPORT_AS_CSV, MAX_IMPORT_BYTES, MAX_IMPORT_SIZE_TEXT, notCsvFileMessage } from "@/lib/catalog-csv/upload";
 
 export const PREVIEW_ROW_COUNT = 10;
@@ -60,7 +63,7 @@ function checkBatch(check: CsvCheck, columns: readonly string[], cells: string[]
  * Line numbers are those a spreadsheet shows, the header being line 1.
  */
 export async function checkCsvFile(file: File, onProgress: (check: CsvCheck) => void, signal?: AbortSignal): Promise<CsvCheck> {
-  const text = await file.text();
+  const text = normalizeCsvText(await file.text());
   const check: CsvCheck = {
     fields: [], previewRows: [], rowsRead: 0, validRows: 0, problemRows: 0, problems: [], problemCount: 0,
     unreadable: null, headerRefused: false, fraction: 0, done: false,
@@ -73,6 +76,7 @@ export async function checkCsvFile(file: File, onProgress: (check: CsvCheck) => 
   return new Promise((resolve) => {
     Papa.parse<string[]>(text, {
       delimiter: ",",
+      newline: "\n",
       chunkSize: CHUNK_CHARACTERS,
       chunk(results: Papa.ParseResult<string[]>, parser: Papa.Parser) {
         let cells = results.data;
@@ -96,7 +100,7 @@ export async function checkCsvFile(file: File, onProgress: (check: CsvCheck) => 
         nextLine += cells.length;
         for (const row of cells) {
           if (check.previewRows.length >= PREVIEW_ROW_COUNT) break;
-          if (row.some((cell) => cell.trim() !== "")) check.previewRows.push(row);
+          if (!isSkippedRow(row)) check.previewRows.push(row);
         }
         check.fraction = Math.min(1, results.meta.cursor / Math.max(1, text.length));
         snapshot();
@@ -112,4 +116,18 @@ export async function checkCsvFile(file: File, onProgress: (check: CsvCheck) => 
       },
     });
   });
+}
+
+const rowCount = (count: number) => `${formatInteger(count)} ${count === 1 ? "row" : "rows"}`;
+
+/**
+ * What the Import button will do, said on the button itself: how many rows it writes, or, when all
+ * or nothing is chosen and some rows are refused, that nothing will be written. Sending such a file
+ * anyway brings the server's own report of the refusals.
+ */
+export function importButtonText(check: Pick<CsvCheck, "rowsRead" | "validRows" | "problemRows">, mode: ImportMode): string {
+  if (check.problemRows === 0) return `Import ${rowCount(check.rowsRead)}`;
+  if (mode === "valid-rows") return `Import ${rowCount(check.validRows)}, skip ${formatInteger(check.problemRows)} refused`;
+  const refused = check.problemRows === 1 ? "1 row is refused — fix it" : `${formatInteger(check.problemRows)} rows are refused — fix them`;
+  return `Nothing will be written: ${refused} or choose 'import the valid rows'`;
 }

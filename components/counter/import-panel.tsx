@@ -3,7 +3,7 @@
 import { useEffect, useRef, useState } from "react";
 import type { ImportMode } from "@/lib/catalog-csv/import-report";
 import { formatInteger } from "@/lib/tire";
-import { checkCsvFile, fileRefusal, type CsvCheck } from "./import-csv-check";
+import { checkCsvFile, fileRefusal, importButtonText, type CsvCheck } from "./import-csv-check";
 import { ImportDropZone } from "./import-drop-zone";
 import { ImportModeChoice } from "./import-mode-choice";
 import { ImportPreview } from "./import-preview";
@@ -31,15 +31,6 @@ function blocker(check: CsvCheck): string | null {
   if (check.headerRefused) return "The header row is not right, so no row can be read. Fix the header (see the columns beside), then choose the file again.";
   if (check.rowsRead === 0) return "The file has no rows under its header. Add the stock items, one per row, then choose the file again.";
   return null;
-}
-
-/** What the chosen mode will do with the rows found wrong here, before anything is sent. */
-function modeNote(check: CsvCheck, mode: ImportMode): string | null {
-  if (check.problemRows === 0) return null;
-  const rows = `${formatInteger(check.problemRows)} ${check.problemRows === 1 ? "row has" : "rows have"} problems`;
-  return mode === "all-or-nothing"
-    ? `${rows}, so this import will write nothing. Fix them first, or choose “Import the valid rows only”.`
-    : `${rows}; they will be left out and the other rows written.`;
 }
 
 /** Choose a CSV, see it read and checked in the browser, import it, and read the server's report. */
@@ -119,7 +110,6 @@ export function ImportPanel() {
             Import
           </h2>
           <ImportModeChoice mode={mode} disabled={sending} onChange={setMode} />
-          {modeNote(check, mode) ? <p className="rounded border-l-4 border-caution bg-caution-soft p-3">{modeNote(check, mode)}</p> : null}
           {sending ? <ImportProgress id="upload-progress" label="Uploading" value={upload.fraction} text={uploadText(upload.fraction)} /> : null}
           <div role="alert" className="text-danger">
             {upload.state === "failed" ? upload.message : ""}
@@ -128,9 +118,9 @@ export function ImportPanel() {
             type="button"
             onClick={send}
             disabled={sending}
-            className="min-h-11 self-start rounded bg-accent px-6 font-semibold text-sheet disabled:opacity-60"
+            className="min-h-11 self-start rounded bg-accent px-6 py-2 text-left font-semibold text-sheet disabled:opacity-60"
           >
-            {sending ? "Importing…" : `Import ${formatInteger(check.rowsRead)} ${check.rowsRead === 1 ? "row" : "rows"}`}
+            {sending ? "Importing…" : importButtonText(check, mode)}
           </button>
         </section>
       ) : null}

@@ -8,6 +8,7 @@ import {
   type CatalogCsvRecord,
   type CsvRefusal,
 } from "./columns";
+import { normalizeCsvText } from "./line-endings";
 import { readCsvRow, type CatalogCsvRow } from "./read-row";
 import { EXPORT_AS_CSV } from "./upload";
 
@@ -31,17 +32,23 @@ function looksBinary(text: string): boolean {
 
 const isBlank = (cells: readonly string[]) => cells.every((cell) => cell.trim() === "");
 
+/** A row whose first cell starts with # is a note to whoever edits the file (the template has one); no SKU can start so. */
+export const CSV_COMMENT_MARK = "#";
+const isComment = (cells: readonly string[]) => cells[0]?.trimStart().startsWith(CSV_COMMENT_MARK) ?? false;
+/** Rows the import passes over without counting: blank ones and comments. */
+export const isSkippedRow = (cells: readonly string[]) => isBlank(cells) || isComment(cells);
+
 /**
  * Reads a whole catalog CSV: the header, then every row through readCsvRow. A SKU that appears twice
  * is refused on its later line. Line numbers are the row numbers a spreadsheet shows (header = 1).
  * Pure, so the upload screen previews exactly what the server will do.
  */
 export function readCatalogCsv(fileText: string): CatalogCsvFile {
-  const text = fileText.replace(/^\uFEFF/, "");
+  const text = normalizeCsvText(fileText);
   if (text.trim() === "") return unreadable("This file is empty");
   if (looksBinary(text)) return unreadable("This file is not a CSV (it looks like a picture, a workbook or another binary file)");
 
-  const parsed = Papa.parse<string[]>(text, { delimiter: ",", skipEmptyLines: false });
+  const parsed = Papa.parse<string[]>(text, { delimiter: ",", newline: "\n", skipEmptyLines: false });
   const unclosedQuote = parsed.errors.find((error) => error.type === "Quotes");
   if (unclosedQuote) {
     return unreadable(`This file is not a CSV that can be read to the end (a quote opened on line ${(unclosedQuote.row ?? 0) + 1} never closes)`);
@@ -50,7 +57,7 @@ export function readCatalogCsv(fileText: string): CatalogCsvFile {
   const header = readCatalogHeader(headerCells);
   if (!header.ok) return unreadable(header.problem);
   if (header.refusals.length > 0) {
-    return { ok: true, rows: [], refusals: header.refusals, headerRefused: true, rowCount: dataRows.filter((cells) => !isBlank(cells)).length };
+    return { ok: true, rows: [], refusals: header.refusals, headerRefused: true, rowCount: dataRows.filter((cells) => !isSkippedRow(cells)).length };
   }
   return { ok: true, ...readCatalogRows(header.columns, dataRows, 2, new Map()), headerRefused: false };
 }
@@ -73,7 +80,7 @@ export function readCatalogHeader(headerCells: readonly string[]): CatalogCsvHea
 }
 
 /**
- * Reads rows under a header that reads: each through readCsvRow, blank rows skipped. `firstLine` is
+ * Reads rows under a header that reads: each through readCsvRow, blank rows and comment rows skipped. `firstLine` is
  * the file line of the first of them; `lineOfSku` remembers SKUs across calls, so that a file read in
  * batches refuses a repeated SKU on its later line exactly as a file read whole does.
  */
@@ -82,7 +89,7 @@ export function readCatalogRows(columns: readonly string[], dataRows: readonly s
   const refusals: CsvRefusal[] = [];
   let rowCount = 0;
   dataRows.forEach((cells, index) => {
-    if (isBlank(cells)) return;
+    if (isSkippedRow(cells)) return;
     rowCount += 1;
     const line = firstLine + index;
     const extra = cells.slice(columns.length);

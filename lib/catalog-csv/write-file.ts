@@ -1,6 +1,7 @@
 import Papa from "papaparse";
 import { CATALOG_CSV_COLUMN_NAMES, CATALOG_CSV_COLUMNS, type CatalogCsvColumnName } from "./columns";
 import { centsToDollarsText } from "@/lib/money/money";
+import { CSV_COMMENT_MARK } from "./read-file";
 
 /** A catalog item as the CSV writes it. */
 export interface CatalogCsvItem {
@@ -43,6 +44,18 @@ export function writeCatalogCsv(items: readonly CatalogCsvItem[]): string {
     { fields: [...CATALOG_CSV_COLUMN_NAMES], data: items.map((item) => CATALOG_CSV_COLUMN_NAMES.map((column) => cells(item)[column])) },
     { escapeFormulae: /^[=+\-@]/, newline: "\r\n" },
   );
+}
+
+const TEMPLATE_NOTE =
+  `${CSV_COMMENT_MARK} Put one stock item per row below this line (rows starting with ${CSV_COMMENT_MARK} are skipped). ` +
+  "What each column holds and an example of each: the column guide.";
+
+/**
+ * The template to download: the header and one comment row, and no example items, so nobody imports
+ * invented tires by adding their own below them. The examples live in the column guide.
+ */
+export function writeCatalogTemplateCsv(): string {
+  return Papa.unparse({ fields: [...CATALOG_CSV_COLUMN_NAMES], data: [[TEMPLATE_NOTE]] }, { newline: "\r\n" });
 }
 
 /** The column guide as a CSV to download beside the template: each column, whether required, its meaning and an example. */

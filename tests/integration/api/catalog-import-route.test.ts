@@ -13,6 +13,8 @@ import { checkContract } from "../helpers/contract";
 vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typeof import("next/server")>()), connection: async () => undefined }));
 
 const template = readFileSync(path.join(process.cwd(), "public", "downloads", "sidewise-catalog-template.csv"));
+// Three invented items in lines the demo catalog has, written by a spreadsheet (CRLF).
+const sample = readFileSync(path.join(process.cwd(), "tests", "fixtures", "catalog-sample.csv"));
 // The first bytes of every PNG file (PNG specification, section 5.2), then a chunk header.
 const PNG_BYTES = new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13, 0x49, 0x48, 0x44, 0x52]);
 let cookie = "";
@@ -39,21 +41,37 @@ afterAll(async () => {
 });
 
 describe("POST /api/v1/catalog/import", () => {
-  it("imports the template's rows into the demo catalog, then finds them unchanged", async () => {
+  it("imports the template as it is downloaded without writing anything: it holds no items", async () => {
     expect(await upload({ file: csvFile(template, "template.csv") })).toEqual({
+      status: 200,
+      body: { added: 0, updated: 0, unchanged: 0, refused: [], written: false },
+    });
+  });
+
+  it("imports rows into the demo catalog, then finds them unchanged", async () => {
+    expect(await upload({ file: csvFile(sample, "sample.csv") })).toEqual({
       status: 200,
       body: { added: 3, updated: 0, unchanged: 0, refused: [], written: true },
     });
-    expect(await upload({ file: csvFile(template, "template.csv"), mode: "valid-rows" })).toEqual({
+    expect(await upload({ file: csvFile(sample, "sample.csv"), mode: "valid-rows" })).toEqual({
       status: 200,
       body: { added: 0, updated: 0, unchanged: 3, refused: [], written: false },
     });
     const audits = await (await getDb()).select().from(auditEvent).where(eq(auditEvent.action, "catalog_import"));
-    expect(audits.map((audit) => [audit.subject, audit.actorEmail])).toEqual([["template.csv", "staff@sidewise.test"]]);
+    expect(audits.map((audit) => [audit.subject, audit.actorEmail])).toEqual([["sample.csv", "staff@sidewise.test"]]);
+  });
+
+  it("reads a file whose lines end in LF and CRLF alike, behind a byte-order mark, as the same rows", async () => {
+    const lines = sample.toString("utf8").trimEnd().split("\r\n");
+    const mixed = `\uFEFF${lines[0]}\n${lines[1]}\r\n${lines[2]}\n${lines[3]}\r\n`;
+    expect(await upload({ file: csvFile(mixed, "mixed.csv"), mode: "valid-rows" })).toEqual({
+      status: 200,
+      body: { added: 0, updated: 0, unchanged: 3, refused: [], written: false },
+    });
   });
 
   it("answers refused rows with their line, column and reason, writing nothing by default", async () => {
-    const text = template.toString("utf8").replace("QNS-T0001", "QNS-T0101").replace(",102,", ",999,");
+    const text = sample.toString("utf8").replace("QNS-T0001", "QNS-T0101").replace(",102,", ",999,");
     const { status, body } = await upload({ file: csvFile(text) });
     expect(status).toBe(200);
     expect(body).toEqual({

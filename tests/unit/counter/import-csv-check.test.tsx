@@ -30,6 +30,18 @@ describe("checking a catalog CSV in the browser", () => {
     expect(check.problems[0]!.reason).toMatch(/999/);
   });
 
+  it("reads rows ending in LF and CRLF behind a byte-order mark as the server does, and skips comment rows", async () => {
+    const [header, ...rows] = catalogCsv(4, { badLines: [4] }).trimEnd().split(/\r?\n/);
+    const mixed = `\uFEFF${header}\r\n# edited by hand\n${rows[0]}\n${rows[1]}\r\n${rows[2]}\n${rows[3]}\r\n`;
+    const check = await checkCsvFile(csvFile(mixed), () => {});
+    expect(check).toMatchObject({ done: true, unreadable: null, rowsRead: 4, validRows: 3, problemRows: 1 });
+    expect(check.fields[0]).toBe("sku");
+    expect(check.previewRows).toHaveLength(4);
+    expect(check.previewRows.flat().some((cell) => /[\r\n]/.test(cell))).toBe(false);
+    // Line 4 of the original file is line 5 here: the comment row counts as a line, as in a spreadsheet.
+    expect(check.problems.map((problem) => problem.line)).toEqual([5]);
+  });
+
   it("lists at most the first problems but counts them all", async () => {
     const badLines = Array.from({ length: 30 }, (_, index) => index + 2);
     const check = await checkCsvFile(csvFile(catalogCsv(40, { badLines })), () => {});

@@ -93,8 +93,7 @@ describe("the import panel", () => {
   it("says plainly that nothing was written when rows were refused, and starts over on request", async () => {
     render(<ImportPanel />);
     choose(csvFile(catalogCsv(5, { badLines: [4] })));
-    const importButton = await screen.findByRole("button", { name: "Import 5 rows" });
-    expect(screen.getByText("1 row has problems, so this import will write nothing. Fix them first, or choose “Import the valid rows only”.")).toBeTruthy();
+    const importButton = await screen.findByRole("button", { name: "Nothing will be written: 1 row is refused — fix it or choose 'import the valid rows'" });
     fireEvent.click(importButton);
     act(() =>
       request().answer(200, { added: 4, updated: 0, refused: [{ line: 4, column: "load_index", reason: "load index 999 is outside the published table" }], written: false }),
@@ -107,6 +106,14 @@ describe("the import panel", () => {
     fireEvent.click(screen.getByRole("button", { name: "Upload another file" }));
     await waitFor(() => expect(document.activeElement).toBe(screen.getByLabelText(/choose a file/)));
     expect(screen.queryByRole("heading", { name: "Import report" })).toBeNull();
+  });
+
+  it("says on the Import button what the chosen mode will write", async () => {
+    render(<ImportPanel />);
+    choose(csvFile(catalogCsv(6, { badLines: [3, 5] })));
+    await screen.findByRole("button", { name: "Nothing will be written: 2 rows are refused — fix them or choose 'import the valid rows'" });
+    fireEvent.click(screen.getByLabelText(/Import the valid rows only/));
+    expect(screen.getByRole("button", { name: "Import 4 rows, skip 2 refused" })).toBeTruthy();
   });
 
   it("shows the server's own message when it refuses the file", async () => {
