@@ -35,6 +35,9 @@ export default defineConfig({
   retries: process.env.CI ? 1 : 0,
   reporter: process.env.CI ? [["list"]] : [["list"]],
   timeout: 30_000,
+  // A wait, not a measure: on a shared, busy machine a sign-in and the page after it can take
+  // longer than Playwright's default 5 s, and each expect still returns as soon as it holds.
+  expect: { timeout: 10_000 },
   use: {
     baseURL,
     trace: "retain-on-failure",
