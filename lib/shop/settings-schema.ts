@@ -1,12 +1,10 @@
 import { z } from "zod";
 import { WEEKDAYS, type Weekday } from "@/lib/tire";
 import { lineText } from "@/lib/validation/text";
+import { MAX_CHARGE_CENTS } from "./limits";
 import { MAX_TAX_RATE_BP } from "./tax-percent";
 import { isTimeZoneName, TIME_ZONE_RULE } from "./time-zone";
 import { CLOCK_PATTERN, CLOCK_RULE, closedDatesProblem, dayHoursProblem, MAX_CLOSED_DATES } from "./week-rules";
-
-/** The most a per-tire charge may be: $1,000.00 a tire is a typing mistake, not a price. */
-export const MAX_CHARGE_CENTS = 100_000;
 
 const SETTINGS_FIELDS = [
   "name", "address", "phone", "email", "timeZone", "hours", "closedDates", "tolerancePct",

@@ -2,6 +2,7 @@ import { asc, eq, sql } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { shop, type AuditChanges } from "@/db/schema";
 import { recordAudit, type Actor } from "@/lib/audit/record";
+import { WEEKDAYS, type WeeklyHours } from "@/lib/tire";
 import { applySettingsChanges, describeSettingChanges, settingChanges, type SettingChange } from "./settings-changes";
 import type { ShopSettings, ShopSettingsChanges } from "./settings-schema";
 
@@ -30,8 +31,10 @@ type SettingsRow = { [K in keyof typeof settingsColumns]: (typeof settingsColumn
 function settingsOf(row: SettingsRow): ShopSettings {
   const { name, streetAddress, town, region, postalCode, phone, email, timeZone, hours, closedDates, tolerancePct } = row;
   const { fittingPerTireCents, disposalPerTireCents, tireFeePerTireCents, taxRateBp, taxServices } = row;
+  // jsonb keeps an object's keys in its own order: answer the week Monday first.
+  const week = Object.fromEntries(WEEKDAYS.map((day) => [day, hours[day] ?? []])) as WeeklyHours;
   return {
-    name, address: { streetAddress, town, region, postalCode }, phone, email, timeZone, hours, closedDates, tolerancePct,
+    name, address: { streetAddress, town, region, postalCode }, phone, email, timeZone, hours: week, closedDates, tolerancePct,
     fittingPerTireCents, disposalPerTireCents, tireFeePerTireCents, taxRateBp, taxServices,
   };
 }
