@@ -5,12 +5,14 @@ import { PageIntro } from "@/components/ui/page-intro";
 import { getDb } from "@/lib/database/app-database";
 import { requirePageUser } from "@/lib/auth/page-user";
 import { listOwnCards } from "@/lib/fit-cards/queries";
+import { readShopTimeZone } from "@/lib/shop/queries";
 
 export const metadata: Metadata = { title: "Your account", robots: { index: false } };
 
 export default async function AccountPage() {
   const { user } = await requirePageUser("/account", "customer");
-  const cards = await listOwnCards(await getDb(), user.id);
+  const db = await getDb();
+  const [cards, timeZone] = await Promise.all([listOwnCards(db, user.id), readShopTimeZone(db)]);
   return (
     <section className="flex flex-col gap-8">
       <div>
@@ -30,6 +32,7 @@ export default async function AccountPage() {
         </h2>
         <CardList
           cards={cards}
+          timeZone={timeZone}
           emptyText="No Fit cards yet. Compare sizes in Side-by-side or pick tires in the Replacement finder, then choose “Save as Fit card”."
         />
         <p className="text-sm text-ink-soft">

@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { AUDIT_ACTIONS, type AuditAction } from "@/lib/tire";
 import { AUDIT_PAGE_SIZE, type AuditListing, type AuditQuery } from "@/lib/audit/queries";
-import { formatCount, formatDateTime } from "@/lib/format/format";
+import { formatCount, formatDateTime, shopTimesCaption } from "@/lib/format/format";
 
 const actionLabels: Record<AuditAction, string> = {
   item_added: "Item added",
@@ -27,7 +27,7 @@ function pageHref(query: AuditQuery, page: number): string {
 }
 
 /** The log as a table (scrolling sideways on a phone), a filter by kind of change, and pages. */
-export function AuditLog({ listing, query }: { listing: AuditListing; query: AuditQuery }) {
+export function AuditLog({ listing, query, timeZone }: { listing: AuditListing; query: AuditQuery; timeZone: string }) {
   const pages = Math.max(1, Math.ceil(listing.total / AUDIT_PAGE_SIZE));
   return (
     <div>
@@ -50,7 +50,7 @@ export function AuditLog({ listing, query }: { listing: AuditListing; query: Aud
         </button>
       </form>
       <p role="status" className="mb-3 text-ink-soft">
-        {listing.total === 0 ? "Nothing has been recorded yet." : `${formatCount(listing.total)} entries · page ${query.page} of ${pages} · times in UTC`}
+        {listing.total === 0 ? "Nothing has been recorded yet." : `${formatCount(listing.total)} entries · page ${query.page} of ${pages} · ${shopTimesCaption(timeZone)}`}
       </p>
       {listing.events.length > 0 ? (
         <div role="region" aria-label="Audit entries" tabIndex={0} className="overflow-x-auto rounded border border-rule bg-sheet">
@@ -67,7 +67,9 @@ export function AuditLog({ listing, query }: { listing: AuditListing; query: Aud
             <tbody className="divide-y divide-rule">
               {listing.events.map((event) => (
                 <tr key={event.id} className="align-top">
-                  <td className="p-3 whitespace-nowrap">{formatDateTime(event.at)}</td>
+                  <td className="p-3 whitespace-nowrap">
+                    <time dateTime={event.at.toISOString()}>{formatDateTime(event.at, { timeZone })}</time>
+                  </td>
                   <td className="p-3 break-all">{event.actorEmail}</td>
                   <td className="p-3 whitespace-nowrap">{actionLabels[event.action]}</td>
                   <td className="p-3 font-mono text-sm break-all">{event.subject}</td>

@@ -11,6 +11,7 @@ const sections = [
   { href: "/counter/outbox", label: "Outbox", adminOnly: false },
   { href: "/counter/team", label: "Team", adminOnly: true },
   { href: "/counter/audit", label: "Audit log", adminOnly: true },
+  { href: "/counter/shop", label: "Shop", adminOnly: true },
 ];
 
 function isCurrent(pathname: string, href: string): boolean {
@@ -18,7 +19,7 @@ function isCurrent(pathname: string, href: string): boolean {
   return pathname.startsWith(href);
 }
 
-/** The Counter's own sections; admins also see Team and Audit log. */
+/** The Counter's own sections; admins also see Team, Audit log and Shop. */
 export function CounterNav({ isAdmin }: { isAdmin: boolean }) {
   const pathname = usePathname();
   return (

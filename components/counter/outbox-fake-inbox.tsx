@@ -2,7 +2,7 @@ import type { DevOutbox } from "@/lib/email/dev-outbox";
 import { formatDateTime } from "@/lib/format/format";
 
 /** What the local fake e-mail service received, newest first, with each e-mail's text and links. */
-export function OutboxFakeInbox({ outbox }: { outbox: DevOutbox }) {
+export function OutboxFakeInbox({ outbox, timeZone }: { outbox: DevOutbox; timeZone: string }) {
   if (outbox.status === "not_local") {
     return (
       <p className="rounded border-l-4 border-caution bg-caution-soft p-4">
@@ -28,7 +28,7 @@ export function OutboxFakeInbox({ outbox }: { outbox: DevOutbox }) {
           <li key={email.id} className="rounded border border-rule bg-sheet p-4">
             <p className="font-semibold break-words">{email.subject}</p>
             <p className="text-sm text-ink-soft">
-              To <span className="break-all">{email.to}</span> · <time dateTime={email.receivedAt.toISOString()}>{formatDateTime(email.receivedAt, { seconds: true })} UTC</time>
+              To <span className="break-all">{email.to}</span> · <time dateTime={email.receivedAt.toISOString()}>{formatDateTime(email.receivedAt, { timeZone, seconds: true })}</time>
             </p>
             {email.links.length > 0 ? (
               <ul className="mt-2 flex flex-col">

@@ -1,17 +1,17 @@
 import { statusLabel } from "@/components/fit-card/email-history";
 import type { EmailSendRow } from "@/lib/email/queries";
-import { formatDateTime } from "@/lib/format/format";
+import { formatDateTime, shopTimesCaption } from "@/lib/format/format";
 
 const kindLabel = { fit_card: "Fit card", quote_to_shop: "Request to the shop", quote_confirmation: "Request confirmation", quote_reply: "Reply to a request" } as const;
 
 /** The last e-mails the product sent or tried to send, with how many tries and what went wrong. */
-export function OutboxSendTable({ sends }: { sends: EmailSendRow[] }) {
+export function OutboxSendTable({ sends, timeZone }: { sends: EmailSendRow[]; timeZone: string }) {
   if (sends.length === 0) return <p className="text-ink-soft">Nothing has been sent yet.</p>;
   return (
     <div className="overflow-x-auto" role="region" aria-labelledby="outbox-sends-caption" tabIndex={0}>
       <table className="w-full border-collapse text-left text-sm">
         <caption id="outbox-sends-caption" className="mb-2 text-left font-semibold">
-          {sends.length === 1 ? "The only e-mail so far" : `The last ${sends.length} e-mails, newest first`} (times in UTC)
+          {sends.length === 1 ? "The only e-mail so far" : `The last ${sends.length} e-mails, newest first`} ({shopTimesCaption(timeZone)})
         </caption>
         <thead>
           <tr className="border-b border-rule">
@@ -23,7 +23,7 @@ export function OutboxSendTable({ sends }: { sends: EmailSendRow[] }) {
         <tbody>
           {sends.map((send) => (
             <tr key={send.id} className="border-b border-rule align-top">
-              <td className="py-2 pr-3">{formatDateTime(send.createdAt)}</td>
+              <td className="py-2 pr-3">{formatDateTime(send.createdAt, { timeZone })}</td>
               <td className="py-2 pr-3">
                 <span className="font-semibold">{kindLabel[send.kind]}</span> to <span className="wrap-anywhere">{send.toAddress}</span>
                 <span className="block text-ink-soft break-words">{send.subject}</span>

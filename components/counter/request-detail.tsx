@@ -8,10 +8,10 @@ import { formatDateTime } from "@/lib/format/format";
 const emailWords: Record<EmailStatus, string> = { sent: "e-mailed", sending: "e-mail being sent", failed: "e-mail failed" };
 
 /** Everything the driver sent, as a list of labelled values. */
-export function RequestFields({ request }: { request: QuoteRequestDetail }) {
+export function RequestFields({ request, timeZone }: { request: QuoteRequestDetail; timeZone: string }) {
   const from = sourceHref(request.source, request.reference);
   const rows: [string, ReactNode][] = [
-    ["Received", <time key="t" dateTime={request.createdAt.toISOString()}>{formatDateTime(request.createdAt)} UTC</time>],
+    ["Received", <time key="t" dateTime={request.createdAt.toISOString()}>{formatDateTime(request.createdAt, { timeZone })}</time>],
     ["E-mail", <a key="e" href={`mailto:${request.email}`} className="break-all text-accent underline underline-offset-4">{request.email}</a>],
     ["Phone", request.phone ? <a key="p" href={`tel:${request.phone.replace(/[^\d+]/g, "")}`} className="text-accent underline underline-offset-4">{request.phone}</a> : "not given"],
     ["Vehicle", request.vehicle],
@@ -43,14 +43,14 @@ export function RequestFields({ request }: { request: QuoteRequestDetail }) {
 }
 
 /** The shop's replies so far, oldest first, with who wrote each and how its e-mail went. */
-export function RequestReplies({ replies }: { replies: QuoteRequestDetail["replies"] }) {
+export function RequestReplies({ replies, timeZone }: { replies: QuoteRequestDetail["replies"]; timeZone: string }) {
   if (replies.length === 0) return <p className="text-ink-soft">No reply yet.</p>;
   return (
     <ol className="flex flex-col gap-3">
       {replies.map((reply) => (
         <li key={reply.id} className="rounded border border-rule bg-sheet p-4">
           <p className="text-sm text-ink-soft">
-            {reply.authorName} · <time dateTime={reply.createdAt.toISOString()}>{formatDateTime(reply.createdAt)} UTC</time> ·{" "}
+            {reply.authorName} · <time dateTime={reply.createdAt.toISOString()}>{formatDateTime(reply.createdAt, { timeZone })}</time> ·{" "}
             <span className={reply.emailStatus === "failed" ? "font-semibold text-danger" : undefined}>{reply.emailStatus ? emailWords[reply.emailStatus] : "not e-mailed"}</span>
           </p>
           <p className="mt-2 break-words whitespace-pre-line">{reply.body}</p>

@@ -2,7 +2,7 @@ import Link from "next/link";
 import { QUOTE_STATUSES, type QuoteStatus } from "@/lib/tire";
 import { sourceLabels, statusLabels } from "@/lib/quotes/labels";
 import type { QuoteRequestListing, RequestListQuery } from "@/lib/quotes/queries";
-import { formatCount, formatDateTime } from "@/lib/format/format";
+import { formatCount, formatDateTime, shopTimesCaption } from "@/lib/format/format";
 
 const linkClass = "inline-flex min-h-11 items-center font-semibold text-accent underline underline-offset-4";
 
@@ -25,7 +25,7 @@ export function RequestStatusBadge({ status }: { status: QuoteStatus }) {
 }
 
 /** The inbox: a filter per status with its count (kept in the address), then the requests, newest first. */
-export function RequestList({ listing, query }: { listing: QuoteRequestListing; query: RequestListQuery }) {
+export function RequestList({ listing, query, timeZone }: { listing: QuoteRequestListing; query: RequestListQuery; timeZone: string }) {
   const all = QUOTE_STATUSES.reduce((sum, status) => sum + listing.counts[status], 0);
   const filters: { status: QuoteStatus | undefined; label: string; count: number }[] = [
     { status: undefined, label: "All", count: all },
@@ -55,7 +55,7 @@ export function RequestList({ listing, query }: { listing: QuoteRequestListing; 
       <p role="status" className="mb-3 text-ink-soft">
         {listing.total === 0
           ? query.status ? `No ${statusLabels[query.status].toLowerCase()} requests.` : "No requests yet. They arrive here from “Ask the shop” on the Size sheet, the finder and Fit cards."
-          : `${formatCount(listing.total)} ${listing.total === 1 ? "request" : "requests"} · page ${listing.page} of ${listing.pageCount} · newest first · times in UTC`}
+          : `${formatCount(listing.total)} ${listing.total === 1 ? "request" : "requests"} · page ${listing.page} of ${listing.pageCount} · newest first · ${shopTimesCaption(timeZone)}`}
       </p>
       {listing.requests.length > 0 ? (
         <ul className="flex flex-col gap-2">
@@ -71,7 +71,7 @@ export function RequestList({ listing, query }: { listing: QuoteRequestListing; 
                 {request.quantity} × {request.tires}
               </p>
               <p className="text-sm text-ink-soft">
-                {request.vehicle} · {sourceLabels[request.source]} · <time dateTime={request.createdAt.toISOString()}>{formatDateTime(request.createdAt)}</time>
+                {request.vehicle} · {sourceLabels[request.source]} · <time dateTime={request.createdAt.toISOString()}>{formatDateTime(request.createdAt, { timeZone })}</time>
                 {request.preferredDay ? ` · would like ${request.preferredDay}` : ""}
               </p>
             </li>

@@ -3,7 +3,7 @@ import { TeamRoleForm } from "./team-role-form";
 import { formatDay } from "@/lib/format/format";
 
 /** The accounts, each with its role form; a search narrows the list when it is long. */
-export function TeamTable({ accounts, total, search, currentUserId }: { accounts: TeamMember[]; total: number; search?: string; currentUserId: string }) {
+export function TeamTable({ accounts, total, search, currentUserId, timeZone }: { accounts: TeamMember[]; total: number; search?: string; currentUserId: string; timeZone: string }) {
   return (
     <div>
       <form role="search" method="get" className="mb-4 flex max-w-xl flex-wrap items-end gap-2">
@@ -34,7 +34,7 @@ export function TeamTable({ accounts, total, search, currentUserId }: { accounts
                   {account.id === currentUserId ? <span className="ml-2 text-sm font-normal text-ink-soft">(you)</span> : null}
                 </p>
                 <p className="break-all text-ink-soft">{account.email}</p>
-                <p className="text-sm text-ink-soft">Joined {formatDay(account.createdAt)}</p>
+                <p className="text-sm text-ink-soft">Joined {formatDay(account.createdAt, { timeZone })}</p>
               </div>
               <TeamRoleForm userId={account.id} email={account.email} role={account.role} />
             </li>

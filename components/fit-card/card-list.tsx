@@ -8,7 +8,7 @@ const stateText: Record<CardState, string> = { active: "Active", withdrawn: "Wit
 type ListedCard = CardSummary & { authorEmail?: string | null };
 
 /** Saved Fit cards, newest first, each with its link and, while active, a way to withdraw it. */
-export function CardList({ cards, emptyText }: { cards: ListedCard[]; emptyText: string }) {
+export function CardList({ cards, emptyText, timeZone }: { cards: ListedCard[]; emptyText: string; timeZone: string }) {
   if (cards.length === 0) return <p className="rounded border border-dashed border-rule p-6 text-ink-soft">{emptyText}</p>;
   return (
     <ul className="divide-y divide-rule rounded border border-rule bg-sheet">
@@ -19,9 +19,9 @@ export function CardList({ cards, emptyText }: { cards: ListedCard[]; emptyText:
             <div className="min-w-0">
               <p className="font-mono font-semibold break-words">{label}</p>
               <p className="text-sm text-ink-soft">
-                Saved {formatDay(card.createdAt)} · {card.tireCount} {card.tireCount === 1 ? "tire" : "tires"} ·{" "}
+                Saved {formatDay(card.createdAt, { timeZone })} · {card.tireCount} {card.tireCount === 1 ? "tire" : "tires"} ·{" "}
                 <span className={card.state === "active" ? "font-semibold text-ink" : ""}>{stateText[card.state]}</span>
-                {card.state === "active" && card.expiresAt ? ` until ${formatDay(card.expiresAt)}` : ""}
+                {card.state === "active" && card.expiresAt ? ` until ${formatDay(card.expiresAt, { timeZone })}` : ""}
                 {card.authorEmail !== undefined ? ` · by ${card.authorEmail ?? "a removed account"}` : ""}
               </p>
               {card.note ? <p className="mt-1 line-clamp-2 text-sm">{card.note}</p> : null}

@@ -3,7 +3,7 @@ import { EmailCardForm } from "./email-card-form";
 import { EmailHistory } from "./email-history";
 
 /** The Counter's tools under a Fit card: e-mail its link, and see who has. Rendered for staff only. */
-export function EmailCardPanel({ slug, sends }: { slug: string; sends: EmailSendRow[] }) {
+export function EmailCardPanel({ slug, sends, timeZone }: { slug: string; sends: EmailSendRow[]; timeZone: string }) {
   return (
     <section aria-labelledby="email-card-heading" className="mt-8 flex flex-col gap-4 rounded border border-rule bg-sheet p-4 print:hidden">
       <div>
@@ -14,7 +14,7 @@ export function EmailCardPanel({ slug, sends }: { slug: string; sends: EmailSend
         <p className="text-ink-soft">The customer gets the card&apos;s link, its sizes and prices, your message and the shop&apos;s contact.</p>
       </div>
       <EmailCardForm slug={slug} />
-      <EmailHistory sends={sends} />
+      <EmailHistory sends={sends} timeZone={timeZone} />
     </section>
   );
 }

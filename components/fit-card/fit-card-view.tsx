@@ -13,7 +13,7 @@ import { ShopCard } from "./shop-card";
 import { formatDay } from "@/lib/format/format";
 
 /** A Fit card as anyone with its link sees it: on screen, and on one printed page. */
-export function FitCardView({ card, shop, url }: { card: PublicFitCard; shop: ShopContact | null; url: string }) {
+export function FitCardView({ card, shop, url, timeZone }: { card: PublicFitCard; shop: ShopContact | null; url: string; timeZone: string }) {
   const { original } = card;
   const service = originalServiceWords(original);
   const placard = placardMinimumWords(original);
@@ -24,8 +24,8 @@ export function FitCardView({ card, shop, url }: { card: PublicFitCard; shop: Sh
       <PageIntro eyebrow="Fit card" title={title}>
         <p>
           The tire on the car: <span className="font-mono">{original.designation}</span>, load index and speed symbol{" "}
-          <span className="font-mono">{service}</span>. Diameter tolerance ±{card.tolerancePct} %. Saved {formatDay(new Date(card.createdAt), { long: true })}
-          {card.expiresAt ? `, shown until ${formatDay(new Date(card.expiresAt), { long: true })}` : ""}.
+          <span className="font-mono">{service}</span>. Diameter tolerance ±{card.tolerancePct} %. Saved {formatDay(new Date(card.createdAt), { timeZone, long: true })}
+          {card.expiresAt ? `, shown until ${formatDay(new Date(card.expiresAt), { timeZone, long: true })}` : ""}.
           {placard ? ` ${placard}` : ""}
           {original.season ? ` The tire on the car now is ${seasonTireWords(original.season)}.` : ""}
         </p>

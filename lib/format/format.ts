@@ -1,7 +1,7 @@
 /**
- * Dates, times and counts as the Counter and the public pages show them: one language and one place
- * to say which time zone (UTC until the shop's settings hold one). Prices are lib/money's; tire figures
- * are lib/tire's.
+ * Dates, times and counts as the Counter and the public pages show them: one language, and the time
+ * zone as a parameter (the pages pass the shop's, read through lib/shop; UTC when there is none).
+ * Prices are lib/money's; tire figures are lib/tire's.
  */
 export const LOCALE = "en-US";
 export const DEFAULT_TIME_ZONE = "UTC";
@@ -23,10 +23,17 @@ export function formatDay(date: Date | string, { timeZone = DEFAULT_TIME_ZONE, l
   return dateFormat({ dateStyle: long ? "long" : "medium", timeZone }).format(new Date(date));
 }
 
-/** "Dec 4, 2026, 3:05 PM" (with `seconds`, "3:05:09 PM"). */
+/**
+ * "Dec 4, 2026, 3:05 PM EST": a time that says which zone it is in, by the zone's short name
+ * ("HST", or "GMT+1" where English has no abbreviation); with `seconds`, "3:05:09 PM EST".
+ */
 export function formatDateTime(date: Date | string, { timeZone = DEFAULT_TIME_ZONE, seconds = false } = {}): string {
-  return dateFormat({ dateStyle: "medium", timeStyle: seconds ? "medium" : "short", timeZone }).format(new Date(date));
+  const second = seconds ? "2-digit" : undefined;
+  return dateFormat({ year: "numeric", month: "short", day: "numeric", hour: "numeric", minute: "2-digit", second, timeZoneName: "short", timeZone }).format(new Date(date));
 }
+
+/** "times in America/New_York (the shop's time)": the caption of a list of times in the shop's zone. */
+export const shopTimesCaption = (timeZone: string): string => `times in ${timeZone} (the shop's time)`;
 
 /** 12,345 */
 export function formatCount(count: number): string {

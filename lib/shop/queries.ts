@@ -1,6 +1,7 @@
 import type { Database } from "@/db/client";
 import { shop } from "@/db/schema";
 import { getDb } from "@/lib/database/app-database";
+import { DEFAULT_TIME_ZONE, LOCALE } from "@/lib/format/format";
 import { describeOpeningHours } from "./hours";
 
 /** The shop's public face: what a customer may see in the footer, a Fit card or an e-mail. */
@@ -42,5 +43,23 @@ export async function readShopContact(): Promise<ShopContact | null> {
     return await getShopContact(await getDb());
   } catch {
     return null;
+  }
+}
+
+/**
+ * The shop's time zone, which every date and time the Counter shows is written in; UTC before the
+ * shop is set up, or if this runtime cannot format in the stored zone (a page never fails for it).
+ */
+export async function readShopTimeZone(db: Database): Promise<string> {
+  const [row] = await db.select({ timeZone: shop.timeZone }).from(shop).orderBy(shop.id).limit(1);
+  return row && canFormatIn(row.timeZone) ? row.timeZone : DEFAULT_TIME_ZONE;
+}
+
+function canFormatIn(timeZone: string): boolean {
+  try {
+    new Intl.DateTimeFormat(LOCALE, { timeZone });
+    return true;
+  } catch {
+    return false;
   }
 }

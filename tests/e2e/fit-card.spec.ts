@@ -92,7 +92,7 @@ test.describe("Fit card", () => {
     await page.getByRole("button", { name: "Sign in" }).click();
     await expect(page.getByRole("heading", { level: 1, name: "Outbox" })).toBeVisible();
     await expect(page.getByRole("heading", { name: "Received by the local e-mail service" })).toBeVisible();
-    await expect(page.getByRole("table", { name: /e-mail.*\(times in UTC\)/ })).toBeVisible();
+    await expect(page.getByRole("table", { name: /e-mail.*\(times in America\/New_York \(the shop.s time\)\)/ })).toBeVisible();
     // The first test of this project sent a card just before.
     await expect(page.getByText(new RegExp(`card\\.${testInfo.project.name}\\.\\d+@example\\.test`)).first()).toBeVisible();
     await expectNoAxeViolations(page);

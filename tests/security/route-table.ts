@@ -20,6 +20,7 @@ export const PUBLIC_HANDLERS = [
   "v1/plus/route.ts#GET",
   "v1/quote-requests/form-token/route.ts#GET",
   "v1/quote-requests/route.ts#POST",
+  "v1/shop/route.ts#GET",
 ];
 
 /** Every method a route file can answer; Next.js answers 405 for one the file does not export. */
@@ -51,6 +52,8 @@ export const MATRIX: { file: string; method: string; path: string; body?: unknow
   { file: "v1/catalog/import/route.ts", method: "POST", path: "/api/v1/catalog/import", expected: { anonymous: 401, customer: 403, staff: 400, admin: 400 } },
   { file: "v1/catalog/export/route.ts", method: "GET", path: "/api/v1/catalog/export", expected: { anonymous: 401, customer: 403, staff: 200, admin: 200 } },
   { file: "v1/quote-requests/route.ts", method: "GET", path: "/api/v1/quote-requests", expected: { anonymous: 401, customer: 403, staff: 200, admin: 200 } },
+  // A tolerance outside 1–5 % is refused after the guard, so nothing changes.
+  { file: "v1/shop/route.ts", method: "PATCH", path: "/api/v1/shop", body: { tolerancePct: 9 }, expected: { anonymous: 401, customer: 403, staff: 403, admin: 400 } },
 ];
 
 /**
@@ -82,5 +85,6 @@ export const COUNTER_PAGES: { file: string; path: string; role: "staff" | "admin
   { file: "outbox/page.tsx", path: "/counter/outbox", role: "staff" },
   { file: "requests/(inbox)/page.tsx", path: "/counter/requests", role: "staff" },
   { file: "requests/[id]/page.tsx", path: "/counter/requests/1", role: "staff" },
+  { file: "shop/page.tsx", path: "/counter/shop", role: "admin" },
   { file: "team/page.tsx", path: "/counter/team", role: "admin" },
 ];

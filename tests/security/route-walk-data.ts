@@ -78,6 +78,19 @@ export const API_WALKS: Record<string, ApiWalk[]> = {
     { method: "GET", path: "/api/v1/quote-requests", as: "staff", query: { base: "", names: ["status", "page"] } },
   ],
   "v1/quote-requests/form-token/route.ts": [{ method: "GET", path: "/api/v1/quote-requests/form-token" }],
+  "v1/shop/route.ts": [
+    { method: "GET", path: "/api/v1/shop" },
+    // tolerancePct 9 is out of range, and no spoiled value is in range, so no probe can change the shop.
+    {
+      method: "PATCH",
+      path: "/api/v1/shop",
+      as: "admin",
+      body: {
+        tolerancePct: 9, name: "Walk", address: { town: "Walk" }, phone: "(555) 010-0000", email: "walk@example.test", timeZone: "UTC",
+        hours: { sat: [["08:00", "12:00"]] }, closedDates: ["2026-12-24"], fittingPerTireCents: 1, disposalPerTireCents: 1, tireFeePerTireCents: 1, taxRateBp: 1, taxServices: false,
+      },
+    },
+  ],
 };
 
 /** Every page by its file under app/, with its address and the parameters it reads. */
@@ -94,6 +107,7 @@ export const PAGE_WALKS: Record<string, { path: string; as?: Caller; names?: str
   "counter/outbox/page.tsx": { path: "/counter/outbox", as: "staff" },
   "counter/requests/(inbox)/page.tsx": { path: "/counter/requests", as: "staff", names: ["status", "page"] },
   "counter/requests/[id]/page.tsx": { path: "/counter/requests/{id}", as: "staff" },
+  "counter/shop/page.tsx": { path: "/counter/shop", as: "admin" },
   "counter/team/page.tsx": { path: "/counter/team", as: "admin", names: ["q"] },
   "forgot-password/page.tsx": { path: "/forgot-password" },
   "learn/[topic]/page.tsx": { path: "/learn/{topic}" },

@@ -7,6 +7,7 @@ import { getDb } from "@/lib/database/app-database";
 import { requirePageUser } from "@/lib/auth/page-user";
 import { CARD_LIST_PAGE_SIZE, cardListQuerySchema, listAllCards } from "@/lib/fit-cards/queries";
 import { formatCount } from "@/lib/format/format";
+import { readShopTimeZone } from "@/lib/shop/queries";
 
 export const metadata: Metadata = { title: "Fit cards · Counter", robots: { index: false } };
 
@@ -14,7 +15,8 @@ export default async function CounterCardsPage({ searchParams }: { searchParams:
   const access = await requirePageUser("/counter/cards", "staff");
   if (!access.allowed) return <CounterRefusal user={access.user} needed="staff" />;
   const query = cardListQuerySchema.parse(await searchParams);
-  const { cards, total } = await listAllCards(await getDb(), query);
+  const db = await getDb();
+  const [{ cards, total }, timeZone] = await Promise.all([listAllCards(db, query), readShopTimeZone(db)]);
   const pages = Math.max(1, Math.ceil(total / CARD_LIST_PAGE_SIZE));
   const pageHref = (page: number) => `/counter/cards?${new URLSearchParams({ ...(query.q ? { q: query.q } : {}), page: String(page) })}`;
   return (
@@ -34,9 +36,9 @@ export default async function CounterCardsPage({ searchParams }: { searchParams:
         </button>
       </form>
       <p role="status" className="text-ink-soft">
-        {total === 0 ? "" : `${formatCount(total)} ${total === 1 ? "card" : "cards"} · page ${query.page} of ${pages}`}
+        {total === 0 ? "" : `${formatCount(total)} ${total === 1 ? "card" : "cards"} · page ${query.page} of ${pages} · days in ${timeZone} (the shop's time)`}
       </p>
-      <CardList cards={cards} emptyText={query.q ? "No card matches that search." : "No Fit cards have been saved yet."} />
+      <CardList cards={cards} emptyText={query.q ? "No card matches that search." : "No Fit cards have been saved yet."} timeZone={timeZone} />
       {pages > 1 ? (
         <nav aria-label="Card pages" className="flex gap-4">
           {query.page > 1 ? (

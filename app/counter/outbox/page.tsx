@@ -7,13 +7,15 @@ import { getDb } from "@/lib/database/app-database";
 import { requirePageUser } from "@/lib/auth/page-user";
 import { readDevOutbox } from "@/lib/email/dev-outbox";
 import { listRecentSends } from "@/lib/email/queries";
+import { readShopTimeZone } from "@/lib/shop/queries";
 
 export const metadata: Metadata = { title: "Outbox · Counter", robots: { index: false } };
 
 export default async function CounterOutboxPage() {
   const access = await requirePageUser("/counter/outbox", "staff");
   if (!access.allowed) return <CounterRefusal user={access.user} needed="staff" />;
-  const [outbox, sends] = await Promise.all([readDevOutbox(), getDb().then((db) => listRecentSends(db, 50))]);
+  const db = await getDb();
+  const [outbox, sends, timeZone] = await Promise.all([readDevOutbox(), listRecentSends(db, 50), readShopTimeZone(db)]);
   return (
     <section className="flex flex-col gap-8">
       <PageIntro eyebrow="Counter" title="Outbox">
@@ -23,13 +25,13 @@ export default async function CounterOutboxPage() {
         <h2 id="fake-inbox-heading" className="text-xl font-semibold">
           Received by the local e-mail service
         </h2>
-        <OutboxFakeInbox outbox={outbox} />
+        <OutboxFakeInbox outbox={outbox} timeZone={timeZone} />
       </section>
       <section aria-labelledby="sends-heading" className="flex flex-col gap-3">
         <h2 id="sends-heading" className="text-xl font-semibold">
           Sends and retries
         </h2>
-        <OutboxSendTable sends={sends} />
+        <OutboxSendTable sends={sends} timeZone={timeZone} />
       </section>
     </section>
   );

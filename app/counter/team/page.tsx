@@ -5,6 +5,7 @@ import { PageIntro } from "@/components/ui/page-intro";
 import { getDb } from "@/lib/database/app-database";
 import { requirePageUser } from "@/lib/auth/page-user";
 import { listTeam, teamQuerySchema } from "@/lib/team/queries";
+import { readShopTimeZone } from "@/lib/shop/queries";
 
 export const metadata: Metadata = { title: "Team · Counter", robots: { index: false } };
 
@@ -12,7 +13,8 @@ export default async function TeamPage({ searchParams }: { searchParams: Promise
   const access = await requirePageUser("/counter/team", "admin");
   if (!access.allowed) return <CounterRefusal user={access.user} needed="admin" />;
   const { q } = teamQuerySchema.parse(await searchParams);
-  const team = await listTeam(await getDb(), q);
+  const db = await getDb();
+  const [team, timeZone] = await Promise.all([listTeam(db, q), readShopTimeZone(db)]);
   return (
     <section>
       <PageIntro eyebrow="Counter · Admin" title="Team">
@@ -21,7 +23,7 @@ export default async function TeamPage({ searchParams }: { searchParams: Promise
           keeps at least one admin.
         </p>
       </PageIntro>
-      <TeamTable accounts={team.accounts} total={team.total} search={q} currentUserId={access.user.id} />
+      <TeamTable accounts={team.accounts} total={team.total} search={q} currentUserId={access.user.id} timeZone={timeZone} />
     </section>
   );
 }

@@ -11,7 +11,7 @@ import { listFitCardSends } from "@/lib/email/queries";
 import { siteUrl } from "@/lib/env/site-url";
 import { FIT_CARD_SLUG_PATTERN } from "@/lib/fit-cards/card-input";
 import { readFitCard } from "@/lib/fit-cards/read-card";
-import { getShopContact } from "@/lib/shop/queries";
+import { getShopContact, readShopTimeZone } from "@/lib/shop/queries";
 
 type Params = Promise<{ slug: string }>;
 
@@ -24,13 +24,13 @@ export default async function FitCardPage({ params }: { params: Params }) {
   const lookup = await readFitCard(db, slug);
   if (lookup.status === "missing") notFound();
   if (lookup.status === "withdrawn") return <FitCardWithdrawn why={lookup.why} />;
-  const shop = await getShopContact(db);
+  const [shop, timeZone] = await Promise.all([getShopContact(db), readShopTimeZone(db)]);
   const viewer = await getSessionUser(await headers());
   // The public card never carries staff data: the staff panel is a separate section, rendered only for them.
-  const staffPanel = viewer && hasRole(viewer.role, "staff") ? <EmailCardPanel slug={slug} sends={await listFitCardSends(db, slug)} /> : null;
+  const staffPanel = viewer && hasRole(viewer.role, "staff") ? <EmailCardPanel slug={slug} sends={await listFitCardSends(db, slug)} timeZone={timeZone} /> : null;
   return (
     <>
-      <FitCardView card={lookup.card} shop={shop} url={new URL(`/s/${slug}`, siteUrl()).toString()} />
+      <FitCardView card={lookup.card} shop={shop} url={new URL(`/s/${slug}`, siteUrl()).toString()} timeZone={timeZone} />
       {staffPanel}
     </>
   );

@@ -6,6 +6,7 @@ import { PageIntro } from "@/components/ui/page-intro";
 import { getDb } from "@/lib/database/app-database";
 import { requirePageUser } from "@/lib/auth/page-user";
 import { listQuoteRequests, requestListQuerySchema } from "@/lib/quotes/queries";
+import { readShopTimeZone } from "@/lib/shop/queries";
 
 export const metadata: Metadata = { title: "Requests · Counter", robots: { index: false } };
 
@@ -14,13 +15,14 @@ export default async function RequestsPage({ searchParams }: { searchParams: Pro
   if (!access.allowed) return <CounterRefusal user={access.user} needed="staff" />;
   const query = requestListQuerySchema.parse(await searchParams);
   await connection();
-  const listing = await listQuoteRequests(await getDb(), query);
+  const db = await getDb();
+  const [listing, timeZone] = await Promise.all([listQuoteRequests(db, query), readShopTimeZone(db)]);
   return (
     <section>
       <PageIntro eyebrow="Counter · Staff" title="Price requests">
         <p>What drivers asked through “Ask the shop”. Open one to reply by e-mail; the reply is kept with it.</p>
       </PageIntro>
-      <RequestList listing={listing} query={query} />
+      <RequestList listing={listing} query={query} timeZone={timeZone} />
     </section>
   );
 }

@@ -11,6 +11,7 @@ import { PageIntro } from "@/components/ui/page-intro";
 import { getDb } from "@/lib/database/app-database";
 import { requirePageUser } from "@/lib/auth/page-user";
 import { getQuoteRequest, requestIdSchema } from "@/lib/quotes/queries";
+import { readShopTimeZone } from "@/lib/shop/queries";
 
 export const metadata: Metadata = { title: "Request · Counter", robots: { index: false } };
 
@@ -21,7 +22,8 @@ export default async function RequestPage({ params }: { params: Promise<{ id: st
   const id = requestIdSchema.safeParse(rawId);
   if (!id.success || !/^\d+$/.test(rawId)) notFound();
   await connection();
-  const request = await getQuoteRequest(await getDb(), id.data);
+  const db = await getDb();
+  const [request, timeZone] = await Promise.all([getQuoteRequest(db, id.data), readShopTimeZone(db)]);
   if (!request) notFound();
   return (
     <section className="flex flex-col gap-6">
@@ -38,12 +40,12 @@ export default async function RequestPage({ params }: { params: Promise<{ id: st
         <RequestStatusBadge status={request.status} />
       </div>
       <RequestStatusButtons requestId={request.id} status={request.status} />
-      <RequestFields request={request} />
+      <RequestFields request={request} timeZone={timeZone} />
       <section aria-labelledby="replies-heading" className="flex flex-col gap-3">
         <h2 id="replies-heading" className="text-xl font-semibold">
           Replies
         </h2>
-        <RequestReplies replies={request.replies} />
+        <RequestReplies replies={request.replies} timeZone={timeZone} />
         <RequestReplyForm requestId={request.id} customerEmail={request.email} />
       </section>
     </section>

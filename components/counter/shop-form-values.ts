@@ -1,0 +1,133 @@
+import { centsToDollarsText, parseDollars } from "@/lib/money/money";
+import { applySettingsChanges, settingChanges, type SettingChange } from "@/lib/shop/settings-changes";
+import type { ShopSettings, ShopSettingsChanges } from "@/lib/shop/settings-schema";
+import { MAX_CHARGE_CENTS } from "@/lib/shop/limits";
+import { parseTaxPercent, taxPercentText } from "@/lib/shop/tax-percent";
+import { closedDatesProblem, dayHoursProblem } from "@/lib/shop/week-rules";
+import { WEEKDAYS, type Weekday } from "@/lib/tire";
+
+/** The settings as the form holds them: text as typed, charges in dollars, the tax rate in percent. */
+export interface ShopFormValues {
+  name: string;
+  streetAddress: string;
+  town: string;
+  region: string;
+  postalCode: string;
+  phone: string;
+  email: string;
+  timeZone: string;
+  hours: Record<Weekday, [string, string][]>;
+  closedDates: string[];
+  tolerancePct: string;
+  fittingPerTire: string;
+  disposalPerTire: string;
+  tireFeePerTire: string;
+  taxPercent: string;
+  taxServices: boolean;
+}
+
+/** Errors by the API's field names ("address.town", "hours.sat", "taxRateBp"), and "form" for the rest. */
+export type ShopFormErrors = Partial<Record<string, string>>;
+
+export const CHARGE_FIELDS = [
+  { value: "fittingPerTire", field: "fittingPerTireCents", label: "Fitting per tire", what: "fitting" },
+  { value: "disposalPerTire", field: "disposalPerTireCents", label: "Disposal per old tire", what: "disposal" },
+  { value: "tireFeePerTire", field: "tireFeePerTireCents", label: "Tire fee per new tire (never taxed)", what: "the tire fee" },
+] as const;
+
+export function formValuesOf(settings: ShopSettings): ShopFormValues {
+  return {
+    name: settings.name,
+    ...settings.address,
+    phone: settings.phone,
+    email: settings.email,
+    timeZone: settings.timeZone,
+    hours: settings.hours,
+    closedDates: settings.closedDates,
+    tolerancePct: String(settings.tolerancePct),
+    fittingPerTire: centsToDollarsText(settings.fittingPerTireCents),
+    disposalPerTire: centsToDollarsText(settings.disposalPerTireCents),
+    tireFeePerTire: centsToDollarsText(settings.tireFeePerTireCents),
+    taxPercent: taxPercentText(settings.taxRateBp),
+    taxServices: settings.taxServices,
+  };
+}
+
+const sentence = (text: string) => `${text.charAt(0).toUpperCase()}${text.slice(1)}.`;
+
+/** Where a refusal from the API goes in the form: "hours.sat.1.0" → "hours.sat", "closedDates.2" → "closedDates". */
+export function formFieldOf(apiField: string | null | undefined): string {
+  if (!apiField || apiField === "body") return "form";
+  const [head, part] = apiField.split(".");
+  if (head === "hours" || head === "address") return part ? `${head}.${part}` : head;
+  return head ?? "form";
+}
+
+export type ShopFormCheck =
+  | { ok: true; body: ShopSettingsChanges | null; changes: SettingChange[] }
+  | { ok: false; errors: ShopFormErrors };
+
+/**
+ * Reads the form as the API will and finds what differs from the settings it started from: the
+ * PATCH body names only those (null when nothing changed), so a colleague's change to another
+ * setting in the meantime is kept.
+ */
+export function checkShopForm(values: ShopFormValues, initial: ShopSettings): ShopFormCheck {
+  const errors: ShopFormErrors = {};
+  const required = (field: string, value: string, what: string) => {
+    if (value.trim() === "") errors[field] = `Enter ${what}.`;
+  };
+  required("name", values.name, "the shop's name");
+  required("address.streetAddress", values.streetAddress, "the street address");
+  required("address.town", values.town, "the town");
+  required("address.region", values.region, "the region (state)");
+  required("address.postalCode", values.postalCode, "the postal code");
+  required("phone", values.phone, "the phone number");
+  required("email", values.email, "the shop's e-mail address");
+  required("timeZone", values.timeZone, "the time zone, such as America/New_York");
+  for (const day of WEEKDAYS) {
+    const problem = dayHoursProblem(values.hours[day]);
+    if (problem) errors[`hours.${day}`] = sentence(problem.message);
+  }
+  const datesProblem = closedDatesProblem(values.closedDates);
+  if (datesProblem) errors.closedDates = sentence(datesProblem.message);
+  const tolerance = /^\d(?:\.\d+)?$/.test(values.tolerancePct.trim()) ? Number(values.tolerancePct.trim()) : NaN;
+  if (!(tolerance >= 1 && tolerance <= 5)) errors.tolerancePct = "Enter a tolerance from 1 to 5 %, like 3 or 2.5.";
+  const cents: Partial<Record<(typeof CHARGE_FIELDS)[number]["field"], number>> = {};
+  for (const charge of CHARGE_FIELDS) {
+    const parsed = parseDollars(values[charge.value]);
+    if (parsed === null || parsed > MAX_CHARGE_CENTS) errors[charge.field] = `Enter ${charge.what} in dollars, like 25.00, at most $1,000.00.`;
+    else cents[charge.field] = parsed;
+  }
+  const taxRateBp = parseTaxPercent(values.taxPercent);
+  if (taxRateBp === null) errors.taxRateBp = "Enter the tax rate in percent from 0 to 100, with at most two decimals, like 7.25.";
+  if (Object.keys(errors).length > 0 || taxRateBp === null) return { ok: false, errors };
+
+  const trimmed = (text: string) => text.trim();
+  const after = applySettingsChanges(initial, {
+    name: trimmed(values.name),
+    address: { streetAddress: trimmed(values.streetAddress), town: trimmed(values.town), region: trimmed(values.region), postalCode: trimmed(values.postalCode) },
+    phone: trimmed(values.phone),
+    email: trimmed(values.email),
+    timeZone: trimmed(values.timeZone),
+    hours: values.hours,
+    closedDates: values.closedDates,
+    tolerancePct: tolerance,
+    ...cents,
+    taxRateBp,
+    taxServices: values.taxServices,
+  });
+  const changes = settingChanges(initial, after);
+  return { ok: true, body: changes.length === 0 ? null : changedSettingsOf(after, changes), changes };
+}
+
+/** The PATCH body for the changed settings: whole values, a part of the address or a day of the week. */
+function changedSettingsOf(after: ShopSettings, changes: readonly SettingChange[]): ShopSettingsChanges {
+  const body: Record<string, unknown> = {};
+  for (const { field } of changes) {
+    const [head, part] = field.split(".") as [keyof ShopSettings, string | undefined];
+    if (part === undefined) body[head] = after[head];
+    else body[head] = { ...(body[head] as object | undefined), [part]: (after[head] as Record<string, unknown>)[part] };
+  }
+  return body as ShopSettingsChanges;
+}

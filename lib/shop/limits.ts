@@ -1,0 +1,8 @@
+/** The most a per-tire charge may be: $1,000.00 a tire is a typing mistake, not a price. */
+export const MAX_CHARGE_CENTS = 100_000;
+
+/**
+ * Above this the Counter asks the admin to check the tax rate (15 %): combined US state and local
+ * sales taxes stay below it everywhere (common practice; rates change, so it is a warning only).
+ */
+export const HIGH_TAX_RATE_BP = 1_500;

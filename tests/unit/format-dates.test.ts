@@ -1,0 +1,27 @@
+import { describe, expect, it } from "vitest";
+import { formatDateTime, formatDay, shopTimesCaption } from "@/lib/format/format";
+
+// 2026-12-05 14:14 UTC is 09:14 in New York (EST, UTC−5) and 04:14 in Honolulu (HST, UTC−10, no daylight saving);
+// 2026-07-05 14:14 UTC is 10:14 EDT (UTC−4). Offsets from the IANA time zone database.
+const winter = new Date("2026-12-05T14:14:00Z");
+const summer = new Date("2026-07-05T14:14:00Z");
+
+describe("dates and times in the shop's time zone", () => {
+  it("say which zone a time is in, daylight saving included", () => {
+    expect(formatDateTime(winter, { timeZone: "America/New_York" })).toBe("Dec 5, 2026, 9:14 AM EST");
+    expect(formatDateTime(summer, { timeZone: "America/New_York" })).toBe("Jul 5, 2026, 10:14 AM EDT");
+    expect(formatDateTime(winter, { timeZone: "Pacific/Honolulu" })).toBe("Dec 5, 2026, 4:14 AM HST");
+    expect(formatDateTime(winter, { timeZone: "Pacific/Honolulu", seconds: true })).toBe("Dec 5, 2026, 4:14:00 AM HST");
+    expect(formatDateTime(winter)).toBe("Dec 5, 2026, 2:14 PM UTC");
+  });
+
+  it("put a day on the shop's calendar, which may differ from UTC's", () => {
+    const lateEvening = new Date("2026-12-05T03:30:00Z");
+    expect(formatDay(lateEvening, { timeZone: "America/New_York" })).toBe("Dec 4, 2026");
+    expect(formatDay(lateEvening)).toBe("Dec 5, 2026");
+  });
+
+  it("name the zone in a list's caption", () => {
+    expect(shopTimesCaption("Pacific/Honolulu")).toBe("times in Pacific/Honolulu (the shop's time)");
+  });
+});
