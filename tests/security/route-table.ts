@@ -12,6 +12,7 @@ export const PUBLIC_HANDLERS = [
   "auth/[...all]/route.ts#POST",
   "health/route.ts#GET",
   "v1/alternatives/route.ts#GET",
+  "v1/brands/route.ts#GET",
   "v1/catalog/route.ts#GET",
   "v1/compare/route.ts#GET",
   "v1/decode/route.ts#GET",
@@ -24,6 +25,9 @@ export const PUBLIC_HANDLERS = [
 
 /** Every method a route file can answer; Next.js answers 405 for one the file does not export. */
 export const HTTP_METHODS = ["GET", "HEAD", "POST", "PUT", "PATCH", "DELETE", "OPTIONS"] as const;
+
+/** A brand or line id no row has (the largest PostgreSQL integer). */
+const NO_SUCH_ID = "2147483647";
 
 /**
  * Every protected handler, called so that nothing changes once authorization passes (an invalid
@@ -51,6 +55,19 @@ export const MATRIX: { file: string; method: string; path: string; body?: unknow
   { file: "v1/catalog/import/route.ts", method: "POST", path: "/api/v1/catalog/import", expected: { anonymous: 401, customer: 403, staff: 400, admin: 400 } },
   { file: "v1/catalog/export/route.ts", method: "GET", path: "/api/v1/catalog/export", expected: { anonymous: 401, customer: 403, staff: 200, admin: 200 } },
   { file: "v1/quote-requests/route.ts", method: "GET", path: "/api/v1/quote-requests", expected: { anonymous: 401, customer: 403, staff: 200, admin: 200 } },
+  { file: "v1/brands/route.ts", method: "POST", path: "/api/v1/brands", body: {}, expected: { anonymous: 401, customer: 403, staff: 400, admin: 400 } },
+  {
+    file: "v1/brands/[id]/route.ts", method: "PATCH", path: `/api/v1/brands/${NO_SUCH_ID}`, params: { id: NO_SUCH_ID }, body: { name: "Nobody" },
+    expected: { anonymous: 401, customer: 403, staff: 404, admin: 404 },
+  },
+  {
+    file: "v1/brands/[id]/lines/route.ts", method: "POST", path: `/api/v1/brands/${NO_SUCH_ID}/lines`, params: { id: NO_SUCH_ID }, body: {},
+    expected: { anonymous: 401, customer: 403, staff: 400, admin: 400 },
+  },
+  {
+    file: "v1/lines/[id]/route.ts", method: "PATCH", path: `/api/v1/lines/${NO_SUCH_ID}`, params: { id: NO_SUCH_ID }, body: { retired: false },
+    expected: { anonymous: 401, customer: 403, staff: 404, admin: 404 },
+  },
 ];
 
 /**
