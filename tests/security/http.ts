@@ -53,8 +53,8 @@ export async function errorShapeProblem(url: string, response: APIResponse): Pro
 
 /**
  * What the OpenAPI document the server serves says is wrong with each API answer over HTTP
- * (proxy.ts included), or null. A 405 for a method a route does not export comes from Next.js
- * itself, not from the API.
+ * (proxy.ts included), or null. A 405 for a method a route does not export, and the 204 with its
+ * Allow header to an OPTIONS request, come from Next.js itself, not from the API.
  */
 export async function contractOf(context: APIRequestContext) {
   const served = await context.get("/api/v1/openapi.json");
@@ -62,7 +62,7 @@ export async function contractOf(context: APIRequestContext) {
   const { checkContract } = contractChecker((await served.json()) as DescribedApi);
   return async (method: string, url: string, response: APIResponse): Promise<string | null> => {
     const address = new URL(url, "http://localhost");
-    if (!address.pathname.startsWith("/api/") || response.status() === 405) return null;
+    if (!address.pathname.startsWith("/api/") || response.status() === 405 || method === "OPTIONS") return null;
     const answer = new Response(response.status() === 204 ? null : new Uint8Array(await response.body()), { status: response.status(), headers: response.headers() });
     try {
       await checkContract(new Request(address, { method }), answer);
