@@ -96,6 +96,7 @@ export const COUNTER_PAGES: { file: string; path: string; role: "staff" | "admin
   { file: "import/page.tsx", path: "/counter/import", role: "staff" },
   { file: "items/[sku]/page.tsx", path: "/counter/items/{sku}", role: "staff" },
   { file: "items/new/page.tsx", path: "/counter/items/new", role: "staff" },
+  { file: "lines/page.tsx", path: "/counter/lines", role: "staff" },
   { file: "outbox/page.tsx", path: "/counter/outbox", role: "staff" },
   { file: "requests/(inbox)/page.tsx", path: "/counter/requests", role: "staff" },
   { file: "requests/[id]/page.tsx", path: "/counter/requests/1", role: "staff" },

@@ -108,6 +108,7 @@ export const PAGE_WALKS: Record<string, { path: string; as?: Caller; names?: str
   "counter/import/page.tsx": { path: "/counter/import", as: "staff" },
   "counter/items/[sku]/page.tsx": { path: "/counter/items/{sku}", as: "staff" },
   "counter/items/new/page.tsx": { path: "/counter/items/new", as: "staff" },
+  "counter/lines/page.tsx": { path: "/counter/lines", as: "staff" },
   "counter/outbox/page.tsx": { path: "/counter/outbox", as: "staff" },
   "counter/requests/(inbox)/page.tsx": { path: "/counter/requests", as: "staff", names: ["status", "page"] },
   "counter/requests/[id]/page.tsx": { path: "/counter/requests/{id}", as: "staff" },
