@@ -74,7 +74,7 @@ export function LinesBrandName({ id, name, headingId }: { id: number; name: stri
         </h2>
         {editing ? null : (
           <button ref={renameRef} type="button" onClick={open} disabled={!hydrated} className={buttonClass}>
-            Rename<span className="sr-only"> {name}</span>
+            Rename <span className="sr-only">{name}</span>
           </button>
         )}
       </div>

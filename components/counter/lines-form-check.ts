@@ -25,6 +25,10 @@ export const lineFormValues = (line: ListedLine): LineFormValues => ({
   treadDepth32: line.treadDepth32 === null ? "" : String(line.treadDepth32),
 });
 
+/** A refusal from the API placed on the field it names, or on the whole form. */
+export const refusalErrors = (refusal: { field: string | null; message: string }): Partial<Record<LineField | "form", string>> =>
+  refusal.field !== null && refusal.field in EMPTY_LINE ? { [refusal.field]: refusal.message } : { form: refusal.message };
+
 const sentence = (text: string) => `${text.charAt(0).toUpperCase()}${text.slice(1)}.`;
 
 /** Checks a body with the API's own schema; each field's first problem, as a sentence. */

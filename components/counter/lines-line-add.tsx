@@ -4,7 +4,7 @@ import { useRouter } from "next/navigation";
 import { useRef, useState } from "react";
 import { useHydrated } from "./item-controls";
 import { sendCatalogWrite } from "./item-form-values";
-import { checkNewLine, EMPTY_LINE, type LineFormValues } from "./lines-form-check";
+import { checkNewLine, EMPTY_LINE, refusalErrors, type LineFormValues } from "./lines-form-check";
 import { LinesLineForm, type LineFormErrors } from "./lines-line-form";
 
 /** "Add a line" under a brand: opens the line form, posts it, and says what was added. */
@@ -24,7 +24,7 @@ export function LinesLineAdd({ brandId, brandName }: { brandId: number; brandNam
     const checked = checkNewLine(values);
     if (!checked.ok) return checked.errors;
     const result = await sendCatalogWrite("POST", `/api/v1/brands/${brandId}/lines`, checked.body);
-    if (!result.ok) return result.field && result.field in EMPTY_LINE ? { [result.field]: result.message } : { form: result.message };
+    if (!result.ok) return refusalErrors(result);
     setStatus(`Added the line ${brandName} ${checked.body.name}.`);
     close();
     router.refresh();
@@ -46,7 +46,7 @@ export function LinesLineAdd({ brandId, brandName }: { brandId: number; brandNam
           disabled={!hydrated}
           className="min-h-11 self-start rounded border border-accent px-4 font-semibold text-accent disabled:opacity-60"
         >
-          Add a line<span className="sr-only"> to {brandName}</span>
+          Add a line <span className="sr-only">to {brandName}</span>
         </button>
       )}
       <p role="status" className="text-sm text-ink-soft">

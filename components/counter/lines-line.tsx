@@ -5,7 +5,7 @@ import { useRef, useState } from "react";
 import type { ListedLine } from "@/lib/brands/brand-bodies";
 import { useHydrated } from "./item-controls";
 import { sendCatalogWrite } from "./item-form-values";
-import { checkLineChanges, EMPTY_LINE, lineFormValues, type LineFormValues } from "./lines-form-check";
+import { checkLineChanges, lineFormValues, refusalErrors, type LineFormValues } from "./lines-form-check";
 import { LinesLineForm, type LineFormErrors } from "./lines-line-form";
 
 const buttonClass = "min-h-11 rounded border border-rule px-3 font-semibold disabled:opacity-60";
@@ -36,7 +36,7 @@ export function LinesLine({ line, brandName }: { line: ListedLine; brandName: st
     if (!checked.ok) return checked.errors;
     if (checked.body) {
       const result = await sendCatalogWrite("PATCH", `/api/v1/lines/${line.id}`, checked.body);
-      if (!result.ok) return result.field && result.field in EMPTY_LINE ? { [result.field]: result.message } : { form: result.message };
+      if (!result.ok) return refusalErrors(result);
       setStatus({ text: `Saved the line ${brandName} ${checked.body.name ?? line.name}.` });
       router.refresh();
     }
@@ -69,11 +69,10 @@ export function LinesLine({ line, brandName }: { line: ListedLine; brandName: st
         </div>
         <div className="flex shrink-0 flex-wrap gap-2">
           <button ref={changeRef} type="button" onClick={() => setEditing(true)} disabled={!hydrated || editing} className={buttonClass}>
-            Change<span className="sr-only"> {label}</span>
+            Change <span className="sr-only">{label}</span>
           </button>
           <button type="button" onClick={() => void setRetired(!line.retired)} disabled={!hydrated || busy} className={buttonClass}>
-            {line.retired ? "Un-retire" : "Retire"}
-            <span className="sr-only"> {label}</span>
+            {line.retired ? "Un-retire" : "Retire"} <span className="sr-only">{label}</span>
           </button>
         </div>
       </div>
