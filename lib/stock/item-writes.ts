@@ -72,7 +72,7 @@ async function findLine(db: Database, brandName: string, lineName: string): Prom
 /** A current (not retired) item as a Tire, with what an edit starts from. */
 async function findCurrent(db: Database, sku: string) {
   const [row] = await db
-    .select({ ...tireColumns, lineId: stockItem.lineId, lineRunFlat: tireLine.runFlat, ownTreadDepth32: stockItem.treadDepth32 })
+    .select({ ...tireColumns, lineId: stockItem.lineId, lineRunFlat: tireLine.runFlat, lineRetired: tireLine.retired, ownTreadDepth32: stockItem.treadDepth32 })
     .from(stockItem)
     .innerJoin(tireLine, ofLine)
     .innerJoin(brand, ofBrand)
@@ -114,7 +114,7 @@ export async function updateStockItem(db: Database, sku: string, changes: StockI
     const brandName = changes.brand ?? current.brand;
     const lineName = changes.line ?? current.line;
     const currentLabel = `${current.brand} ${current.line}`;
-    const line = changes.brand || changes.line ? await findLine(tx, brandName, lineName) : { id: current.lineId, runFlat: current.lineRunFlat, label: currentLabel, retired: false };
+    const line = changes.brand || changes.line ? await findLine(tx, brandName, lineName) : { id: current.lineId, runFlat: current.lineRunFlat, label: currentLabel, retired: current.lineRetired };
     if (!line) return unknownLine(tx, brandName, lineName);
     if (line.id !== current.lineId && line.retired) return retiredLine(line);
     const input: StockItemInput = {
