@@ -6,17 +6,10 @@ import { ofBrand } from "@/lib/catalog/columns";
 import { isUniqueViolation } from "@/lib/database/unique-violation";
 import type { LineAnswer, LineChanges, NewLineBody } from "./brand-bodies";
 import { refuse, type CatalogNameWrite } from "./brand-writes";
+import { listedLineColumns } from "./queries";
 
-const lineColumns = {
-  id: tireLine.id,
-  brandId: tireLine.brandId,
-  name: tireLine.name,
-  season: tireLine.season,
-  terrain: tireLine.terrain,
-  threePeak: tireLine.threePeak,
-  treadDepth32: tireLine.treadDepth32,
-  retired: tireLine.retired,
-};
+/** A line as the API answers a write: as listed, with its brand's id. */
+const lineColumns = { ...listedLineColumns, brandId: tireLine.brandId };
 
 const LINE_FIELDS = ["name", "season", "terrain", "threePeak", "treadDepth32", "retired"] as const;
 const FIELD_WORDS: Record<(typeof LINE_FIELDS)[number], string> = {

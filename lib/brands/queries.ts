@@ -7,7 +7,8 @@ import type { BrandList, ListedBrand } from "./brand-bodies";
 // Names without case, in plain character order, so that PGlite and PostgreSQL list them alike.
 const byName = (column: AnyColumn) => sql`lower(${column}) collate "C"`;
 
-const listedLineColumns = {
+/** A line as GET /api/v1/brands lists it under its brand. */
+export const listedLineColumns = {
   id: tireLine.id,
   name: tireLine.name,
   season: tireLine.season,
