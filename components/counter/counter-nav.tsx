@@ -5,6 +5,7 @@ import { usePathname } from "next/navigation";
 
 const sections = [
   { href: "/counter", label: "Catalog", adminOnly: false },
+  { href: "/counter/lines", label: "Lines", adminOnly: false },
   { href: "/counter/import", label: "Import & export", adminOnly: false },
   { href: "/counter/cards", label: "Fit cards", adminOnly: false },
   { href: "/counter/requests", label: "Requests", adminOnly: false },

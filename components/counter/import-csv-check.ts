@@ -1,6 +1,7 @@
 import Papa from "papaparse";
 import type { ImportMode } from "@/lib/catalog-csv/import-report";
 import type { CsvRefusal } from "@/lib/catalog-csv/columns";
+import { judgeRowLines, lineJudge, type CatalogLines, type LineJudge } from "@/lib/catalog-csv/judge-lines";
 import { normalizeCsvText } from "@/lib/catalog-csv/line-endings";
 import { isSkippedRow, readCatalogHeader, readCatalogRows } from "@/lib/catalog-csv/read-file";
 import { formatInteger } from "@/lib/tire";
@@ -48,27 +49,33 @@ function noteProblems(check: CsvCheck, refusals: readonly CsvRefusal[]) {
   if (room > 0) check.problems.push(...refusals.slice(0, room));
 }
 
-/** Checks one batch of rows with the server's own row reader; `firstLine` is the file line of its first row. */
-function checkBatch(check: CsvCheck, columns: readonly string[], cells: string[][], firstLine: number, lineOfSku: Map<string, number>) {
+/**
+ * Checks one batch of rows with the server's own row reader and judge of brands and lines;
+ * `firstLine` is the file line of its first row.
+ */
+function checkBatch(check: CsvCheck, columns: readonly string[], cells: string[][], firstLine: number, lineOfSku: Map<string, number>, judge: LineJudge) {
   const read = readCatalogRows(columns, cells, firstLine, lineOfSku);
-  const refusedRows = new Set(read.refusals.map((refusal) => refusal.line)).size;
+  const refusals = [...read.refusals, ...judgeRowLines(read.rows, judge).refusals].sort((a, b) => a.line - b.line);
+  const refusedRows = new Set(refusals.map((refusal) => refusal.line)).size;
   check.rowsRead += read.rowCount;
   check.problemRows += refusedRows;
   check.validRows += read.rowCount - refusedRows;
-  noteProblems(check, read.refusals);
+  noteProblems(check, refusals);
 }
 
 /**
  * Reads a CSV in chunks, reporting after each one and giving the page a turn to repaint in between.
- * Line numbers are those a spreadsheet shows, the header being line 1.
+ * Rows are judged against `lines`, the brands and lines the server judges them against. Line
+ * numbers are those a spreadsheet shows, the header being line 1.
  */
-export async function checkCsvFile(file: File, onProgress: (check: CsvCheck) => void, signal?: AbortSignal): Promise<CsvCheck> {
+export async function checkCsvFile(file: File, lines: CatalogLines, onProgress: (check: CsvCheck) => void, signal?: AbortSignal): Promise<CsvCheck> {
   const text = normalizeCsvText(await file.text());
   const check: CsvCheck = {
     fields: [], previewRows: [], rowsRead: 0, validRows: 0, problemRows: 0, problems: [], problemCount: 0,
     unreadable: null, headerRefused: false, fraction: 0, done: false,
   };
   const lineOfSku = new Map<string, number>();
+  const judge = lineJudge(lines);
   let columns: string[] = [];
   let nextLine = 1;
   const snapshot = () => onProgress({ ...check, problems: [...check.problems], previewRows: [...check.previewRows] });
@@ -96,7 +103,7 @@ export async function checkCsvFile(file: File, onProgress: (check: CsvCheck) => 
           check.unreadable = `A double quote (") opens a cell after line ${nextLine - 1} and never closes, so the file cannot be read to the end. Close the quote, or export the file again from the spreadsheet as CSV.`;
           return parser.abort();
         }
-        checkBatch(check, columns, cells, nextLine, lineOfSku);
+        checkBatch(check, columns, cells, nextLine, lineOfSku, judge);
         nextLine += cells.length;
         for (const row of cells) {
           if (check.previewRows.length >= PREVIEW_ROW_COUNT) break;

@@ -2,6 +2,7 @@
 
 import { useEffect, useRef, useState } from "react";
 import type { ImportMode } from "@/lib/catalog-csv/import-report";
+import type { CatalogLines } from "@/lib/catalog-csv/judge-lines";
 import { formatInteger } from "@/lib/tire";
 import { checkCsvFile, fileRefusal, importButtonText, type CsvCheck } from "./import-csv-check";
 import { ImportDropZone } from "./import-drop-zone";
@@ -33,8 +34,11 @@ function blocker(check: CsvCheck): string | null {
   return null;
 }
 
-/** Choose a CSV, see it read and checked in the browser, import it, and read the server's report. */
-export function ImportPanel() {
+/**
+ * Choose a CSV, see it read and checked in the browser, import it, and read the server's report.
+ * `lines` are the brands and lines the server judges the rows against, read when the page was.
+ */
+export function ImportPanel({ lines }: { lines: CatalogLines }) {
   const [refusal, setRefusal] = useState<string | null>(null);
   const [file, setFile] = useState<File | null>(null);
   const [check, setCheck] = useState<CsvCheck | null>(null);
@@ -60,7 +64,7 @@ export function ImportPanel() {
     reading.current = controller;
     setFile(chosen);
     setCheck(null);
-    void checkCsvFile(chosen, (progress) => {
+    void checkCsvFile(chosen, lines, (progress) => {
       if (!controller.signal.aborted) setCheck(progress);
     }, controller.signal);
   }

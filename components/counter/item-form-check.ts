@@ -1,6 +1,7 @@
 import type { NewStockItemBody } from "@/lib/stock/item-bodies";
 import { buildStockRow } from "@/lib/stock/build-stock-row";
 import { parseDollars } from "@/lib/money/money";
+import { treadDepth32Schema } from "@/lib/validation/tread-depth";
 import { parseWholeNumber, type ItemField, type ItemFormErrors, type ItemFormValues } from "./item-form-values";
 
 export type ItemFormCheck = { ok: true; body: NewStockItemBody } | { ok: false; errors: ItemFormErrors };
@@ -34,6 +35,9 @@ export function checkItemForm(values: ItemFormValues, { isNew }: { isNew: boolea
   if (priceCents === null) errors.priceCents = "Enter the price in dollars, like 189.99.";
   const quantity = parseWholeNumber(values.quantity);
   if (quantity === null) errors.quantity = "Enter how many are on hand, 0 or more.";
+  const depthText = values.treadDepth32.trim();
+  const depth = depthText === "" ? null : treadDepth32Schema.safeParse(parseWholeNumber(depthText));
+  if (depth && !depth.success) errors.treadDepth32 = sentence(depth.error.issues[0]?.message ?? "give the tread depth in 32nds of an inch");
   if (Object.keys(errors).length > 0 || loadIndex === null || priceCents === null || quantity === null) return { ok: false, errors };
 
   const body: NewStockItemBody = {
@@ -48,6 +52,7 @@ export function checkItemForm(values: ItemFormValues, { isNew }: { isNew: boolea
     extraLoad: values.extraLoad,
     priceCents,
     quantity,
+    treadDepth32: depth?.data ?? null,
   };
   const built = buildStockRow({ ...body, sku: isNew ? body.sku : PLACEHOLDER_SKU }, PLACEHOLDER_LINE);
   if (!built.ok) return { ok: false, errors: { [built.problem.field]: sentence(built.problem.reason) } };

@@ -26,7 +26,9 @@ export async function sendCatalogWrite(method: "POST" | "PATCH" | "DELETE", path
 }
 
 /** The item form's fields, named as the catalog API names them (the price is typed in dollars). */
-export const ITEM_FIELDS = ["sku", "brand", "line", "designation", "loadIndex", "loadIndexDual", "speedSymbol", "loadRange", "extraLoad", "priceCents", "quantity"] as const;
+export const ITEM_FIELDS = [
+  "sku", "brand", "line", "designation", "loadIndex", "loadIndexDual", "speedSymbol", "loadRange", "extraLoad", "priceCents", "quantity", "treadDepth32",
+] as const;
 export type ItemField = (typeof ITEM_FIELDS)[number];
 
 export type ItemFormValues = Record<Exclude<ItemField, "extraLoad">, string> & { extraLoad: boolean };

@@ -1,8 +1,10 @@
 "use client";
 
+import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useEffect, useRef, useState, type FormEvent } from "react";
-import type { BrandWithLines } from "@/lib/counter/queries";
+import type { ListedBrand } from "@/lib/brands/brand-bodies";
+import { LINES_PAGE_PATH } from "@/lib/brands/line-words";
 import { FormField } from "@/components/ui/form-field";
 import { itemInputClass, useHydrated } from "./item-controls";
 import { checkItemForm } from "./item-form-check";
@@ -10,13 +12,13 @@ import { ITEM_FIELDS, sendCatalogWrite, type ItemField as Field, type ItemFormEr
 import { ItemSizePreview } from "./item-size-preview";
 
 interface ItemFormProps {
-  brands: BrandWithLines[];
+  brands: readonly ListedBrand[];
   initial: ItemFormValues;
   /** The SKU being edited; absent for a new item. */
   sku?: string;
 }
 
-const TEXT_FIELDS: { name: Exclude<Field, "sku" | "brand" | "line" | "designation" | "extraLoad">; label: string; inputMode: "numeric" | "decimal" | "text" }[] = [
+const TEXT_FIELDS: { name: Exclude<Field, "sku" | "brand" | "line" | "designation" | "extraLoad" | "treadDepth32">; label: string; inputMode: "numeric" | "decimal" | "text" }[] = [
   { name: "loadIndex", label: "Load index", inputMode: "numeric" },
   { name: "loadIndexDual", label: "Dual load index (optional)", inputMode: "numeric" },
   { name: "speedSymbol", label: "Speed symbol", inputMode: "text" },
@@ -36,6 +38,9 @@ export function ItemForm({ brands, initial, sku }: ItemFormProps) {
   const hydrated = useHydrated();
   const isNew = sku === undefined;
   const lines = brands.find((brand) => brand.name === values.brand)?.lines ?? [];
+  const lineDepth = lines.find((line) => line.name === values.line)?.treadDepth32 ?? null;
+  // A retired line takes no new items; an item already on one may stay there.
+  const offered = (line: ListedBrand["lines"][number]) => !line.retired || (!isNew && values.brand === initial.brand && line.name === initial.line);
 
   useEffect(() => {
     if (focusRequest === 0) return;
@@ -78,7 +83,18 @@ export function ItemForm({ brands, initial, sku }: ItemFormProps) {
             {(control) => <input {...control} name="sku" value={values.sku} onChange={(e) => set("sku", e.target.value)} autoComplete="off" className={`${itemInputClass} font-mono`} />}
           </FormField>
         ) : null}
-        <FormField {...field("brand")} label="Brand">
+        <FormField
+          {...field("brand")}
+          label="Brand"
+          hint={
+            <>
+              A brand or line missing, or retired?{" "}
+              <Link href={LINES_PAGE_PATH} prefetch={false} className="font-semibold text-accent underline underline-offset-2">
+                Add it on the Lines page
+              </Link>
+            </>
+          }
+        >
           {(control) => (
             <select {...control} name="brand" value={values.brand} onChange={(e) => setValues((current) => ({ ...current, brand: e.target.value, line: "" }))} className={itemInputClass}>
               <option value="">Choose a brand</option>
@@ -93,7 +109,9 @@ export function ItemForm({ brands, initial, sku }: ItemFormProps) {
             <select {...control} name="line" value={values.line} onChange={(e) => set("line", e.target.value)} className={itemInputClass}>
               <option value="">{values.brand ? "Choose a line" : "Choose a brand first"}</option>
               {lines.map((line) => (
-                <option key={line}>{line}</option>
+                <option key={line.id} value={line.name} disabled={!offered(line)}>
+                  {line.retired ? `${line.name} (retired)` : line.name}
+                </option>
               ))}
             </select>
           )}
@@ -110,6 +128,15 @@ export function ItemForm({ brands, initial, sku }: ItemFormProps) {
             {(control) => <input {...control} name={name} value={values[name]} inputMode={inputMode} autoComplete="off" onChange={(e) => set(name, e.target.value)} className={`${itemInputClass} font-mono`} />}
           </FormField>
         ))}
+        <FormField
+          {...field("treadDepth32")}
+          label="Tread depth, new (32nds, optional)"
+          hint={lineDepth === null ? "Leave empty unless this size differs from its line." : `Leave empty to use the line's ${lineDepth}/32 in.`}
+        >
+          {(control) => (
+            <input {...control} name="treadDepth32" value={values.treadDepth32} inputMode="numeric" autoComplete="off" onChange={(e) => set("treadDepth32", e.target.value)} className={`${itemInputClass} font-mono`} />
+          )}
+        </FormField>
         <div className="flex flex-col gap-1 sm:col-span-2">
           <label className="flex min-h-11 items-center gap-3 font-semibold">
             <input type="checkbox" name="extraLoad" checked={values.extraLoad} onChange={(e) => set("extraLoad", e.target.checked)}

@@ -16,6 +16,7 @@ const candidateRowSchema = z.object({
   season: z.enum(SEASONS),
   terrain: z.enum(TERRAINS),
   threePeak: z.boolean(),
+  treadDepth32: z.number().int().nullable(),
   overallDiameterMm: z.number(),
   priceCents: z.number().int(),
   quantityOnHand: z.number().int(),

@@ -17,6 +17,7 @@ export const apiErrorStatus = {
   unknown_load_index: 422,
   unknown_speed_symbol: 422,
   unknown_line: 422,
+  line_retired: 422,
   rate_limited: 429,
 } as const;
 

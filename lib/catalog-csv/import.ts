@@ -3,7 +3,8 @@ import type { Database } from "@/db/client";
 import { stockItem, type NewStockItem } from "@/db/schema";
 import { recordAudit, type Actor } from "@/lib/audit/record";
 import type { CsvRefusal } from "./columns";
-import { planImport } from "./import-plan";
+import { planImport, readCatalogLines } from "./import-plan";
+import { judgeRowLines, lineJudge } from "./judge-lines";
 import type { CatalogImportReport, ImportMode } from "./import-report";
 import { readCatalogCsv } from "./read-file";
 import { formatCount } from "@/lib/format/format";
@@ -62,8 +63,9 @@ export async function importCatalogCsv(
   if (read.headerRefused) return { ok: true, report: { added: 0, updated: 0, unchanged: 0, refused: read.refusals, written: false } };
 
   const report = await db.transaction(async (tx): Promise<CatalogImportReport> => {
-    const plan = await planImport(tx, read.rows);
-    const refused = [...read.refusals, ...plan.refusals].sort(byLine);
+    const lines = judgeRowLines(read.rows, lineJudge(await readCatalogLines(tx)));
+    const plan = await planImport(tx, lines.lined);
+    const refused = [...read.refusals, ...lines.refusals, ...plan.refusals].sort(byLine);
     const changes = [...plan.added, ...plan.updated];
     const written = changes.length > 0 && (refused.length === 0 || mode === "valid-rows");
     if (written) {

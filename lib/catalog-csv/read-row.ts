@@ -51,7 +51,7 @@ function cellText(record: CatalogCsvRecord, column: CatalogCsvColumnName): strin
  * Reads one CSV record into a stock item, or says what is wrong with it, cell by cell: every cell
  * whose format is wrong is named, then the tire itself is checked by the catalog's own write path
  * (buildStockRow), so the upload preview and the server refuse the same rows for the same reasons.
- * Brand, line and SKU are only checked against the catalog by the import.
+ * Brand and line are judged against the catalog's by lineJudge (judge-lines.ts), SKUs by the import.
  */
 export function readCsvRow(record: CatalogCsvRecord, line: number): CsvRowResult {
   const refusals: CsvRefusal[] = [];

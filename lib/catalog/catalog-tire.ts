@@ -1,3 +1,4 @@
+import { sql } from "drizzle-orm";
 import type { SelectResultFields } from "drizzle-orm/query-builders/select.types";
 import { z } from "zod";
 import { brand, stockItem, tireLine } from "@/db/schema";
@@ -18,6 +19,7 @@ export const tireSchema = z.object({
   season: z.enum(SEASONS),
   terrain: z.enum(TERRAINS),
   threePeak: z.boolean().describe("Marked with the three-peak mountain snowflake (3PMSF)."),
+  treadDepth32: z.number().int().nullable().describe("New tread depth in 32nds of an inch: the item's own, else its line's; null when neither is known."),
   overallDiameterMm: z.number().describe("Nominal overall diameter, unrounded."),
   priceCents: z.number().int().describe("Price of one tire in US cents."),
   inStock: z.boolean(),
@@ -40,13 +42,14 @@ export const tireStockColumns = {
   quantityOnHand: stockItem.quantityOnHand,
 };
 
-/** A Tire's columns from its line and brand. */
+/** A Tire's columns from its line and brand; the tread depth is the item's own, else its line's. */
 export const tireLineColumns = {
   brand: brand.name,
   line: tireLine.name,
   season: tireLine.season,
   terrain: tireLine.terrain,
   threePeak: tireLine.threePeak,
+  treadDepth32: sql<number | null>`coalesce(${stockItem.treadDepth32}, ${tireLine.treadDepth32})`,
 };
 
 /** Every column a Tire is built from; select them from stock_item joined to tire_line and brand. */
@@ -69,6 +72,7 @@ export function toTire(row: TireRow): Tire {
     season: row.season,
     terrain: row.terrain,
     threePeak: row.threePeak,
+    treadDepth32: row.treadDepth32,
     overallDiameterMm: row.overallDiameterMm,
     priceCents: row.priceCents,
     inStock: row.quantityOnHand > 0,

@@ -2,6 +2,7 @@ import { and, eq, sql } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { brand, stockItem, tireLine } from "@/db/schema";
 import type { ApiErrorCode } from "@/lib/api/errors";
+import { asSentence, retiredLineReason, unknownBrandReason, unknownLineReason } from "@/lib/brands/line-words";
 import { formatPrice } from "@/lib/money/money";
 import { changedFields, recordAudit, type Actor } from "@/lib/audit/record";
 import { ofBrand, ofLine } from "@/lib/catalog/columns";
@@ -17,10 +18,19 @@ const refusedRow = (problem: StockRowProblem) =>
   problem.unmeasurable
     ? refuse("unreadable", `${problem.reason}.`, problem.field)
     : refuse("invalid_parameter", `The field "${problem.field}" is invalid: ${problem.reason}.`, problem.field);
-const unknownLine = (brandName: string, lineName: string) =>
-  refuse("unknown_line", `The catalog has no line "${lineName}" from the brand "${brandName}"; add the line first.`, "line");
+const retiredLine = (line: FoundLine) => refuse("line_retired", asSentence(retiredLineReason(line.label)), "line");
 
-const AUDITED_FIELDS = ["priceCents", "quantityOnHand", "designation", "loadIndex", "loadIndexDual", "speedSymbol", "loadRange", "extraLoad", "lineId"] as const;
+/** Names the brand when the catalog has none by that name, else the line. */
+async function unknownLine(db: Database, brandName: string, lineName: string): Promise<StockWriteResult> {
+  const [known] = await db.select({ name: brand.name }).from(brand).where(sql`lower(${brand.name}) = lower(${brandName})`);
+  return known
+    ? refuse("unknown_line", asSentence(unknownLineReason(known.name, lineName)), "line")
+    : refuse("unknown_line", asSentence(unknownBrandReason(brandName)), "brand");
+}
+
+const AUDITED_FIELDS = [
+  "priceCents", "quantityOnHand", "designation", "loadIndex", "loadIndexDual", "speedSymbol", "loadRange", "extraLoad", "lineId", "treadDepth32",
+] as const;
 
 const fieldLabels: Record<(typeof AUDITED_FIELDS)[number], string> = {
   priceCents: "price",
@@ -32,6 +42,7 @@ const fieldLabels: Record<(typeof AUDITED_FIELDS)[number], string> = {
   loadRange: "load range",
   extraLoad: "extra load",
   lineId: "line",
+  treadDepth32: "tread depth (32nds)",
 };
 
 const shown = (field: string, value: unknown) => (value === null ? "none" : field === "priceCents" ? formatPrice(Number(value)) : String(value));
@@ -45,10 +56,12 @@ function describeChanges(changes: ReturnType<typeof changedFields>, lines: { fro
     .join("; ");
 }
 
+type FoundLine = StockLine & { label: string; retired: boolean };
+
 /** A brand's line by name, in any letter case, with its names as the catalog spells them. */
-async function findLine(db: Database, brandName: string, lineName: string): Promise<(StockLine & { label: string }) | null> {
+async function findLine(db: Database, brandName: string, lineName: string): Promise<FoundLine | null> {
   const [line] = await db
-    .select({ id: tireLine.id, runFlat: tireLine.runFlat, label: sql<string>`${brand.name} || ' ' || ${tireLine.name}` })
+    .select({ id: tireLine.id, runFlat: tireLine.runFlat, retired: tireLine.retired, label: sql<string>`${brand.name} || ' ' || ${tireLine.name}` })
     .from(tireLine)
     .innerJoin(brand, ofBrand)
     .where(and(sql`lower(${brand.name}) = lower(${brandName})`, sql`lower(${tireLine.name}) = lower(${lineName})`))
@@ -59,7 +72,7 @@ async function findLine(db: Database, brandName: string, lineName: string): Prom
 /** A current (not retired) item as a Tire, with what an edit starts from. */
 async function findCurrent(db: Database, sku: string) {
   const [row] = await db
-    .select({ ...tireColumns, lineId: stockItem.lineId, lineRunFlat: tireLine.runFlat })
+    .select({ ...tireColumns, lineId: stockItem.lineId, lineRunFlat: tireLine.runFlat, lineRetired: tireLine.retired, ownTreadDepth32: stockItem.treadDepth32 })
     .from(stockItem)
     .innerJoin(tireLine, ofLine)
     .innerJoin(brand, ofBrand)
@@ -72,15 +85,16 @@ async function currentTire(db: Database, sku: string): Promise<StockWriteResult>
   return row ? { ok: true, tire: toTire(row) } : refuse("not_found", `No current catalog item has the SKU "${sku}".`);
 }
 
-/** Adds an item to a line the catalog has, through the same write path as the demo seed. */
+/** Adds an item to a line the catalog has and has not retired, through the same write path as the demo seed. */
 export async function createStockItem(db: Database, body: NewStockItemBody, actor: Actor): Promise<StockWriteResult> {
-  const { brand: brandName, line: lineName, ...input } = body;
+  const { brand: brandName, line: lineName, treadDepth32 = null, ...input } = body;
   return db.transaction(async (tx) => {
     const line = await findLine(tx, brandName, lineName);
-    if (!line) return unknownLine(brandName, lineName);
+    if (!line) return unknownLine(tx, brandName, lineName);
+    if (line.retired) return retiredLine(line);
     const built = buildStockRow(input, line);
     if (!built.ok) return refusedRow(built.problem);
-    const { row } = built;
+    const row = { ...built.row, treadDepth32 };
     const inserted = await tx.insert(stockItem).values(row).onConflictDoNothing({ target: stockItem.sku }).returning({ id: stockItem.id });
     if (inserted.length === 0) return refuse("already_exists", `The SKU "${row.sku}" is taken (retired items keep theirs).`, "sku");
     const summary = `Added ${row.designation} (${brandName} ${lineName}) at ${formatPrice(row.priceCents)}, ${row.quantityOnHand} on hand`;
@@ -89,7 +103,10 @@ export async function createStockItem(db: Database, body: NewStockItemBody, acto
   });
 }
 
-/** Changes a current item; the row is rebuilt and checked as a whole, as if it were new. */
+/**
+ * Changes a current item; the row is rebuilt and checked as a whole, as if it were new. An item may
+ * stay on a retired line (its stock is still sold) but not move onto one.
+ */
 export async function updateStockItem(db: Database, sku: string, changes: StockItemChanges, actor: Actor): Promise<StockWriteResult> {
   return db.transaction(async (tx) => {
     const current = await findCurrent(tx, sku);
@@ -97,8 +114,9 @@ export async function updateStockItem(db: Database, sku: string, changes: StockI
     const brandName = changes.brand ?? current.brand;
     const lineName = changes.line ?? current.line;
     const currentLabel = `${current.brand} ${current.line}`;
-    const line = changes.brand || changes.line ? await findLine(tx, brandName, lineName) : { id: current.lineId, runFlat: current.lineRunFlat, label: currentLabel };
-    if (!line) return unknownLine(brandName, lineName);
+    const line = changes.brand || changes.line ? await findLine(tx, brandName, lineName) : { id: current.lineId, runFlat: current.lineRunFlat, label: currentLabel, retired: current.lineRetired };
+    if (!line) return unknownLine(tx, brandName, lineName);
+    if (line.id !== current.lineId && line.retired) return retiredLine(line);
     const input: StockItemInput = {
       sku,
       designation: changes.designation ?? current.designation,
@@ -112,8 +130,10 @@ export async function updateStockItem(db: Database, sku: string, changes: StockI
     };
     const built = buildStockRow(input, line);
     if (!built.ok) return refusedRow(built.problem);
-    await tx.update(stockItem).set({ ...built.row, updatedAt: new Date() }).where(eq(stockItem.sku, sku));
-    const audited = changedFields(current, { ...current, ...built.row }, AUDITED_FIELDS);
+    const row = { ...built.row, treadDepth32: changes.treadDepth32 === undefined ? current.ownTreadDepth32 : changes.treadDepth32 };
+    await tx.update(stockItem).set({ ...row, updatedAt: new Date() }).where(eq(stockItem.sku, sku));
+    const before = { ...current, treadDepth32: current.ownTreadDepth32 };
+    const audited = changedFields(before, { ...before, ...row }, AUDITED_FIELDS);
     if (Object.keys(audited).length > 0) {
       await recordAudit(tx, actor, [{ action: "item_changed", subject: sku, summary: describeChanges(audited, { from: currentLabel, to: line.label }), changes: audited }]);
     }

@@ -15,6 +15,17 @@ export type Season = (typeof SEASONS)[number];
 export const TERRAINS = ["highway", "all-terrain", "mud-terrain"] as const;
 export type Terrain = (typeof TERRAINS)[number];
 
+/**
+ * A new tire's tread depth, in whole 32nds of an inch, as a line or an item states it. New passenger
+ * tires are commonly about 10/32 to 12/32 in deep, light-truck, all-terrain and mud-terrain tires
+ * deeper (about 15/32 to 20/32), and a temporary spare shallower (about 6/32) (common practice). The
+ * range is wide on purpose: 2/32 is where most US states call a tire worn out, so no new tire is
+ * shallower, and 40/32 (1¼ in, also the database's upper bound) leaves room for specialty off-road
+ * tread while still catching a depth typed in millimetres or 64ths.
+ */
+export const TREAD_DEPTH32_MIN = 2;
+export const TREAD_DEPTH32_MAX = 40;
+
 /** The Replacement finder's orders: nearest diameter, lowest price, most load capacity to spare. */
 export const FINDER_SORTS = ["diameter", "price", "loadMargin"] as const;
 export type FinderSort = (typeof FINDER_SORTS)[number];

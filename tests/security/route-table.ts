@@ -12,6 +12,7 @@ export const PUBLIC_HANDLERS = [
   "auth/[...all]/route.ts#POST",
   "health/route.ts#GET",
   "v1/alternatives/route.ts#GET",
+  "v1/brands/route.ts#GET",
   "v1/catalog/route.ts#GET",
   "v1/compare/route.ts#GET",
   "v1/decode/route.ts#GET",
@@ -25,6 +26,9 @@ export const PUBLIC_HANDLERS = [
 
 /** Every method a route file can answer; Next.js answers 405 for one the file does not export. */
 export const HTTP_METHODS = ["GET", "HEAD", "POST", "PUT", "PATCH", "DELETE", "OPTIONS"] as const;
+
+/** A brand or line id no row has (the largest PostgreSQL integer). */
+const NO_SUCH_ID = "2147483647";
 
 /**
  * Every protected handler, called so that nothing changes once authorization passes (an invalid
@@ -54,6 +58,19 @@ export const MATRIX: { file: string; method: string; path: string; body?: unknow
   { file: "v1/quote-requests/route.ts", method: "GET", path: "/api/v1/quote-requests", expected: { anonymous: 401, customer: 403, staff: 200, admin: 200 } },
   // A tolerance outside 1–5 % is refused after the guard, so nothing changes.
   { file: "v1/shop/route.ts", method: "PATCH", path: "/api/v1/shop", body: { tolerancePct: 9 }, expected: { anonymous: 401, customer: 403, staff: 403, admin: 400 } },
+  { file: "v1/brands/route.ts", method: "POST", path: "/api/v1/brands", body: {}, expected: { anonymous: 401, customer: 403, staff: 400, admin: 400 } },
+  {
+    file: "v1/brands/[id]/route.ts", method: "PATCH", path: `/api/v1/brands/${NO_SUCH_ID}`, params: { id: NO_SUCH_ID }, body: { name: "Nobody" },
+    expected: { anonymous: 401, customer: 403, staff: 404, admin: 404 },
+  },
+  {
+    file: "v1/brands/[id]/lines/route.ts", method: "POST", path: `/api/v1/brands/${NO_SUCH_ID}/lines`, params: { id: NO_SUCH_ID }, body: {},
+    expected: { anonymous: 401, customer: 403, staff: 400, admin: 400 },
+  },
+  {
+    file: "v1/lines/[id]/route.ts", method: "PATCH", path: `/api/v1/lines/${NO_SUCH_ID}`, params: { id: NO_SUCH_ID }, body: { retired: false },
+    expected: { anonymous: 401, customer: 403, staff: 404, admin: 404 },
+  },
 ];
 
 /**
@@ -82,6 +99,7 @@ export const COUNTER_PAGES: { file: string; path: string; role: "staff" | "admin
   { file: "import/page.tsx", path: "/counter/import", role: "staff" },
   { file: "items/[sku]/page.tsx", path: "/counter/items/{sku}", role: "staff" },
   { file: "items/new/page.tsx", path: "/counter/items/new", role: "staff" },
+  { file: "lines/page.tsx", path: "/counter/lines", role: "staff" },
   { file: "outbox/page.tsx", path: "/counter/outbox", role: "staff" },
   { file: "requests/(inbox)/page.tsx", path: "/counter/requests", role: "staff" },
   { file: "requests/[id]/page.tsx", path: "/counter/requests/1", role: "staff" },

@@ -17,6 +17,9 @@ export interface ApiWalk {
 }
 
 const SLUG = "N".repeat(24);
+/** A brand or line id no row has: a body the walk spoils into a valid one still changes nothing (404). */
+const NO_SUCH_ID = "2147483647";
+const LINE = { name: "Walk Line", season: "all-season", terrain: "highway", threePeak: false, treadDepth32: 10 };
 
 export const API_WALKS: Record<string, ApiWalk[]> = {
   "auth/[...all]/route.ts": [
@@ -39,6 +42,20 @@ export const API_WALKS: Record<string, ApiWalk[]> = {
         names: ["size", "loadIndex", "loadIndexDual", "speedSymbol", "loadRange", "runFlat", "tolerancePct", "season", "terrain", "threePeak", "brand", "minPriceCents", "maxPriceCents", "inStock", "sort", "limit", "cursor"],
       },
     },
+  ],
+  "v1/brands/route.ts": [
+    { method: "GET", path: "/api/v1/brands" },
+    // Every spoiled name is refused (too long, empty, no letter, a control or broken character), so nothing is added.
+    { method: "POST", path: "/api/v1/brands", as: "staff", body: { name: "Walk Brand" } },
+  ],
+  "v1/brands/[id]/route.ts": [{ method: "PATCH", path: "/api/v1/brands/{id}", as: "staff", body: { name: "Walk Brand" } }],
+  "v1/brands/[id]/lines/route.ts": [
+    { method: "POST", path: "/api/v1/brands/{id}/lines", as: "staff" },
+    { method: "POST", path: `/api/v1/brands/${NO_SUCH_ID}/lines`, as: "staff", body: LINE },
+  ],
+  "v1/lines/[id]/route.ts": [
+    { method: "PATCH", path: "/api/v1/lines/{id}", as: "staff" },
+    { method: "PATCH", path: `/api/v1/lines/${NO_SUCH_ID}`, as: "staff", body: { ...LINE, retired: false } },
   ],
   "v1/catalog/route.ts": [
     { method: "GET", path: "/api/v1/catalog", query: { base: "limit=5", names: ["cursor", "limit"] } },
@@ -104,6 +121,7 @@ export const PAGE_WALKS: Record<string, { path: string; as?: Caller; names?: str
   "counter/import/page.tsx": { path: "/counter/import", as: "staff" },
   "counter/items/[sku]/page.tsx": { path: "/counter/items/{sku}", as: "staff" },
   "counter/items/new/page.tsx": { path: "/counter/items/new", as: "staff" },
+  "counter/lines/page.tsx": { path: "/counter/lines", as: "staff" },
   "counter/outbox/page.tsx": { path: "/counter/outbox", as: "staff" },
   "counter/requests/(inbox)/page.tsx": { path: "/counter/requests", as: "staff", names: ["status", "page"] },
   "counter/requests/[id]/page.tsx": { path: "/counter/requests/{id}", as: "staff" },

@@ -1,5 +1,6 @@
 import { buildOpenApiDocument, type OpenApiDocument } from "./document";
 import type { ApiOperation } from "./operation";
+import { BRAND_ROUTES } from "./routes-brands";
 import { CARD_ROUTES } from "./routes-cards";
 import { CATALOG_ROUTES } from "./routes-catalog";
 import { PUBLIC_ROUTES } from "./routes-public";
@@ -7,7 +8,7 @@ import { QUOTE_ROUTES } from "./routes-quotes";
 import { SHOP_ROUTES } from "./routes-shop";
 
 /** Every route of the API: a new route file needs its entry here (the document's test lists the files). */
-export const API_OPERATIONS: readonly ApiOperation[] = [...PUBLIC_ROUTES, ...CATALOG_ROUTES, ...CARD_ROUTES, ...QUOTE_ROUTES, ...SHOP_ROUTES];
+export const API_OPERATIONS: readonly ApiOperation[] = [...PUBLIC_ROUTES, ...CATALOG_ROUTES, ...BRAND_ROUTES, ...CARD_ROUTES, ...QUOTE_ROUTES, ...SHOP_ROUTES];
 
 let built: OpenApiDocument | undefined;
 

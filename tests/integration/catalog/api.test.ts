@@ -11,7 +11,7 @@ vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typ
 
 const TIRE_KEYS = [
   "sku", "brand", "line", "designation", "loadIndex", "loadIndexDual", "speedSymbol", "loadRange", "extraLoad",
-  "runFlat", "season", "terrain", "threePeak", "overallDiameterMm", "priceCents", "inStock",
+  "runFlat", "season", "terrain", "threePeak", "treadDepth32", "overallDiameterMm", "priceCents", "inStock",
 ].sort();
 
 async function call(handler: (request: NextRequest) => Promise<Response>, path: string) {

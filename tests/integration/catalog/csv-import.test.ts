@@ -73,7 +73,11 @@ describe.each(testDatabaseKinds)("catalog CSV import on %s", (kind) => {
     });
     const expectedRefusals = () => [
       { line: 11, column: "load_index", reason: "load index 999 is outside the published table (0–279)" },
-      { line: 101, column: "line", reason: `the catalog has no line "No Such Line" from the brand "${items[99]?.brand}"; add the line first, or correct the names` },
+      {
+        line: 101,
+        column: "line",
+        reason: `the brand "${items[99]?.brand}" has no line "No Such Line"; add it on the Lines page (Counter → Lines), or correct the name`,
+      },
       { line: 5001, column: "sku", reason: `SKU "${retiredSku}" is retired; give the item a new SKU` },
       { line: 7002, column: "price", reason: 'price "12,50" is not an amount in dollars such as 129.99' },
       { line: 8002, column: "load_range", reason: expect.stringContaining('load range "Q"') },

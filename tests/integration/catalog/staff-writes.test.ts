@@ -77,7 +77,7 @@ describe("staff catalog writes", () => {
   it.each([
     [{ ...newItem, sku: undefined }, 400, "missing_parameter", "sku"],
     [{ ...newItem, sku: "has space" }, 400, "invalid_parameter", "sku"],
-    [{ ...newItem, sku: "X-1", brand: "Nobrand" }, 422, "unknown_line", "line"],
+    [{ ...newItem, sku: "X-1", brand: "Nobrand" }, 422, "unknown_line", "brand"],
     [{ ...newItem, sku: "X-1", line: "Aldermoor Nothing" }, 422, "unknown_line", "line"],
     [{ ...newItem, sku: "X-1", designation: "hello" }, 400, "invalid_parameter", "designation"],
     [{ ...newItem, sku: "X-1", loadIndex: 300 }, 400, "invalid_parameter", "loadIndex"],

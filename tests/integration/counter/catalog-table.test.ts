@@ -1,7 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { catalogFiltersSchema, type CatalogFilters } from "@/lib/counter/catalog-filters";
 import { CATALOG_TABLE_PAGE_SIZE, catalogQueryString, getCatalogTablePage, readCatalogFilters } from "@/lib/counter/catalog-table";
-import { listBrandsWithLines, getEditableItem } from "@/lib/counter/queries";
+import { listBrands } from "@/lib/brands/queries";
+import { getEditableItem } from "@/lib/counter/queries";
 import { seedFixture, skus, type FixtureItem } from "../catalog/fixtures";
 import { openTestDatabase, type TestDatabase, testDatabaseKinds } from "../helpers/test-database";
 
@@ -77,7 +78,8 @@ describe.each(testDatabaseKinds)("the Counter's catalog table on %s", (kind) => 
   });
 
   it("offers each brand with its lines, and finds current items only", async () => {
-    expect(await listBrandsWithLines(database.db)).toEqual([
+    const { brands } = await listBrands(database.db);
+    expect(brands.map((brand) => ({ name: brand.name, lines: brand.lines.map((line) => line.name) }))).toEqual([
       { name: "Testwell", lines: ["Fixture flat", "Fixture touring", "Fixture trail", "Fixture winter"] },
     ]);
     expect(await getEditableItem(database.db, "a-lower")).toMatchObject({ brand: "Testwell", loadIndexDual: 120, quantity: 4 });

@@ -1,4 +1,5 @@
 import { CATALOG_CSV_COLUMN_NAMES } from "@/lib/catalog-csv/columns";
+import type { CatalogLines } from "@/lib/catalog-csv/judge-lines";
 
 /**
  * A catalog CSV of invented stock: the header, then `rows` rows of a passenger size. A row on one of
@@ -14,3 +15,11 @@ export function catalogCsv(rows: number, { badLines = [] as number[] } = {}): st
 }
 
 export const csvFile = (text: string, name = "stock.csv") => new File([text], name, { type: "text/csv" });
+
+const line = (id: number, name: string, retired = false) => ({ id, name, season: "all-season", terrain: "highway", threePeak: false, treadDepth32: 10, retired }) as const;
+
+/** The brands and lines the fixtures' rows are judged against: Caddon MT is retired and still holds TST-KEEP. */
+export const catalogLines: CatalogLines = {
+  brands: [{ id: 1, name: "Quensal", lines: [line(1, "Aldermoor Tour"), line(2, "Caddon MT", true)] }],
+  itemsOnRetiredLines: [["TST-KEEP", 2]],
+};

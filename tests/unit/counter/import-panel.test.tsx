@@ -2,7 +2,7 @@
 import { act, cleanup, fireEvent, render, screen, waitFor, within } from "@testing-library/react";
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import { ImportPanel } from "@/components/counter/import-panel";
-import { catalogCsv, csvFile } from "./import-csv-fixtures";
+import { catalogCsv, catalogLines, csvFile } from "./import-csv-fixtures";
 
 /** Stands in for the browser's XMLHttpRequest so a test decides how the upload goes. */
 class FakeRequest {
@@ -48,7 +48,7 @@ const request = () => {
 
 describe("the import panel", () => {
   it("refuses a file that is not a CSV at once, with what to do", () => {
-    render(<ImportPanel />);
+    render(<ImportPanel lines={catalogLines} />);
     choose(new File(["a"], "stock.xlsx", { type: "application/octet-stream" }));
     expect(screen.getByRole("alert").textContent).toMatch(/"stock.xlsx" is a spreadsheet workbook, not a CSV file/);
     expect(screen.getByLabelText(/choose a file/).getAttribute("aria-invalid")).toBe("true");
@@ -56,7 +56,7 @@ describe("the import panel", () => {
   });
 
   it("shows the reading progress, then the preview with counts, first rows and problems", async () => {
-    render(<ImportPanel />);
+    render(<ImportPanel lines={catalogLines} />);
     choose(csvFile(catalogCsv(40, { badLines: [3] })));
     expect(screen.getByRole("progressbar", { name: "Reading and checking stock.csv" })).toBeTruthy();
     await screen.findByText("40 rows read and checked · 100 %");
@@ -71,7 +71,7 @@ describe("the import panel", () => {
   });
 
   it("uploads with the chosen mode, shows upload progress, blocks a second submit, then reports what was written", async () => {
-    render(<ImportPanel />);
+    render(<ImportPanel lines={catalogLines} />);
     choose(csvFile(catalogCsv(12)));
     fireEvent.click(await screen.findByLabelText(/Import the valid rows only/));
     fireEvent.click(screen.getByRole("button", { name: "Import 12 rows" }));
@@ -91,7 +91,7 @@ describe("the import panel", () => {
   });
 
   it("says plainly that nothing was written when rows were refused, and starts over on request", async () => {
-    render(<ImportPanel />);
+    render(<ImportPanel lines={catalogLines} />);
     choose(csvFile(catalogCsv(5, { badLines: [4] })));
     const importButton = await screen.findByRole("button", { name: "Nothing will be written: 1 row is refused — fix it or choose 'import the valid rows'" });
     fireEvent.click(importButton);
@@ -109,7 +109,7 @@ describe("the import panel", () => {
   });
 
   it("says on the Import button what the chosen mode will write", async () => {
-    render(<ImportPanel />);
+    render(<ImportPanel lines={catalogLines} />);
     choose(csvFile(catalogCsv(6, { badLines: [3, 5] })));
     await screen.findByRole("button", { name: "Nothing will be written: 2 rows are refused — fix them or choose 'import the valid rows'" });
     fireEvent.click(screen.getByLabelText(/Import the valid rows only/));
@@ -117,7 +117,7 @@ describe("the import panel", () => {
   });
 
   it("shows the server's own message when it refuses the file", async () => {
-    render(<ImportPanel />);
+    render(<ImportPanel lines={catalogLines} />);
     choose(csvFile(catalogCsv(2)));
     fireEvent.click(await screen.findByRole("button", { name: "Import 2 rows" }));
     act(() => request().answer(413, { error: { code: "too_large", message: "The file is over 5 MB." } }));

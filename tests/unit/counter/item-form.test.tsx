@@ -18,8 +18,12 @@ afterEach(() => {
   vi.unstubAllGlobals();
 });
 
-const brands = [{ name: "Quensal", lines: ["Aldermoor Tour", "Bexford AT"] }];
-const empty = { sku: "", brand: "", line: "", designation: "", loadIndex: "", loadIndexDual: "", speedSymbol: "", loadRange: "", extraLoad: false, priceCents: "", quantity: "0" };
+const line = (id: number, name: string, more: { retired?: boolean; treadDepth32?: number | null } = {}) =>
+  ({ id, name, season: "all-season", terrain: "highway", threePeak: false, treadDepth32: 11, retired: false, ...more }) as const;
+const brands = [{ id: 1, name: "Quensal", lines: [line(1, "Aldermoor Tour"), line(2, "Bexford AT", { treadDepth32: 15 }), line(3, "Caddon MT", { retired: true })] }];
+const empty = {
+  sku: "", brand: "", line: "", designation: "", loadIndex: "", loadIndexDual: "", speedSymbol: "", loadRange: "", extraLoad: false, priceCents: "", quantity: "0", treadDepth32: "",
+};
 
 function fill(label: string, value: string) {
   fireEvent.change(screen.getByLabelText(label), { target: { value } });
@@ -83,8 +87,38 @@ describe("the item form", () => {
     expect(path).toBe("/api/v1/catalog");
     expect(JSON.parse(init.body)).toEqual({
       sku: "QNS-NEW-1", brand: "Quensal", line: "Bexford AT", designation: "lt265/75r16", loadIndex: 123, loadIndexDual: 120,
-      speedSymbol: "r", loadRange: "E", extraLoad: false, priceCents: 21_950, quantity: 4,
+      speedSymbol: "r", loadRange: "E", extraLoad: false, priceCents: 21_950, quantity: 4, treadDepth32: null,
     });
+  });
+
+  it("offers no retired line for a new item, links to the Lines page, and names the line's tread depth", () => {
+    render(<ItemForm brands={brands} initial={empty} />);
+    fill("Brand", "Quensal");
+    const retired = screen.getByRole("option", { name: "Caddon MT (retired)" }) as HTMLOptionElement;
+    expect(retired.disabled).toBe(true);
+    expect(screen.getByRole("link", { name: "Add it on the Lines page" }).getAttribute("href")).toBe("/counter/lines");
+    fill("Line", "Bexford AT");
+    expect(screen.getByText("Leave empty to use the line's 15/32 in.")).toBeTruthy();
+  });
+
+  it("keeps an item's retired line selectable when it is edited", () => {
+    render(<ItemForm brands={brands} initial={{ ...empty, brand: "Quensal", line: "Caddon MT" }} sku="QNS-8" />);
+    expect((screen.getByRole("option", { name: "Caddon MT (retired)" }) as HTMLOptionElement).disabled).toBe(false);
+  });
+
+  it("sends the item's own tread depth, checked in the browser first", async () => {
+    fetchMock.mockResolvedValue(new Response("{}", { status: 201 }));
+    render(<ItemForm brands={brands} initial={empty} />);
+    fillValidItem();
+    fill("Tread depth, new (32nds, optional)", "90");
+    submit();
+    // New tires are a few 32nds to about 20/32 deep (common practice); 90 is a typing slip.
+    expect(screen.getByText(/Give the tread depth as a whole number of 32nds of an inch from 2 to 40/)).toBeTruthy();
+    expect(fetchMock).not.toHaveBeenCalled();
+    fill("Tread depth, new (32nds, optional)", "16");
+    submit();
+    await waitFor(() => expect(fetchMock).toHaveBeenCalled());
+    expect(JSON.parse(fetchMock.mock.calls[0]![1].body)).toMatchObject({ treadDepth32: 16 });
   });
 
   it("puts a refusal from the server next to the field it names", async () => {

@@ -21,6 +21,7 @@ const tire = (overrides: Partial<CardTire>): CardTire => ({
   season: "all-season",
   terrain: "highway",
   threePeak: false,
+  treadDepth32: 10,
   overallDiameterMm: 634.3,
   priceCents: 14_900,
   inStock: true,

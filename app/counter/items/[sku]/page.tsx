@@ -10,7 +10,8 @@ import { ItemRetire } from "@/components/counter/item-retire";
 import { PageIntro } from "@/components/ui/page-intro";
 import { requirePageUser } from "@/lib/auth/page-user";
 import { skuParamsSchema } from "@/lib/stock/item-bodies";
-import { getEditableItem, listBrandsWithLines } from "@/lib/counter/queries";
+import { listBrands } from "@/lib/brands/queries";
+import { getEditableItem } from "@/lib/counter/queries";
 
 export const metadata: Metadata = { title: "Counter · Edit item", robots: { index: false } };
 
@@ -22,7 +23,7 @@ export default async function EditItemPage({ params }: { params: Promise<{ sku: 
   if (!parsed.success) notFound();
   await connection();
   const db = await getDb();
-  const [item, brands] = await Promise.all([getEditableItem(db, parsed.data.sku), listBrandsWithLines(db)]);
+  const [item, { brands }] = await Promise.all([getEditableItem(db, parsed.data.sku), listBrands(db)]);
   if (!item) notFound();
   const initial = {
     ...item,
@@ -31,6 +32,7 @@ export default async function EditItemPage({ params }: { params: Promise<{ sku: 
     loadRange: item.loadRange ?? "",
     priceCents: centsToDollarsText(item.priceCents),
     quantity: String(item.quantity),
+    treadDepth32: item.treadDepth32 === null ? "" : String(item.treadDepth32),
   };
   return (
     <section>

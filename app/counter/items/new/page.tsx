@@ -6,24 +6,24 @@ import { CounterRefusal } from "@/components/counter/counter-refusal";
 import { ItemForm } from "@/components/counter/item-form";
 import { PageIntro } from "@/components/ui/page-intro";
 import { requirePageUser } from "@/lib/auth/page-user";
-import { listBrandsWithLines } from "@/lib/counter/queries";
+import { listBrands } from "@/lib/brands/queries";
 
 export const metadata: Metadata = { title: "Counter · New item", robots: { index: false } };
 
-const EMPTY = { sku: "", brand: "", line: "", designation: "", loadIndex: "", loadIndexDual: "", speedSymbol: "", loadRange: "", extraLoad: false, priceCents: "", quantity: "0" };
+const EMPTY = { sku: "", brand: "", line: "", designation: "", loadIndex: "", loadIndexDual: "", speedSymbol: "", loadRange: "", extraLoad: false, priceCents: "", quantity: "0", treadDepth32: "" };
 
 export default async function NewItemPage() {
   const access = await requirePageUser("/counter/items/new", "staff");
   if (!access.allowed) return <CounterRefusal user={access.user} needed="staff" />;
   await connection();
-  const brands = await listBrandsWithLines(await getDb());
+  const { brands } = await listBrands(await getDb());
   return (
     <section>
       <Link href="/counter" prefetch={false} className="inline-flex min-h-11 items-center font-semibold text-accent underline underline-offset-4">
         ← Back to the catalog
       </Link>
       <PageIntro eyebrow="Counter · catalog" title="Add an item">
-        <p>A size of a line the catalog already has. The size is read by the tire core as you type.</p>
+        <p>A size of a line the catalog already has (new brands and lines are added on the Lines page). The size is read by the tire core as you type.</p>
       </PageIntro>
       <ItemForm brands={brands} initial={EMPTY} />
     </section>
