@@ -4,19 +4,21 @@ import { getDb } from "@/lib/database/app-database";
 import { DEFAULT_TIME_ZONE, LOCALE } from "@/lib/format/format";
 import { describeOpeningHours } from "./hours";
 
+/** The columns of the shop's contact, which its settings include. */
+export const contactColumns = {
+  name: shop.name,
+  streetAddress: shop.streetAddress,
+  town: shop.town,
+  region: shop.region,
+  postalCode: shop.postalCode,
+  phone: shop.phone,
+  email: shop.email,
+};
+
 /** The shop's public face: what a customer may see in the footer, a Fit card or an e-mail. */
 export async function getShopContact(db: Database): Promise<ShopContact | null> {
   const [row] = await db
-    .select({
-      name: shop.name,
-      streetAddress: shop.streetAddress,
-      town: shop.town,
-      region: shop.region,
-      postalCode: shop.postalCode,
-      phone: shop.phone,
-      email: shop.email,
-      hours: shop.hours,
-    })
+    .select({ ...contactColumns, hours: shop.hours })
     .from(shop)
     .orderBy(shop.id)
     .limit(1);

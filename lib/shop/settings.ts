@@ -3,18 +3,13 @@ import type { Database } from "@/db/client";
 import { shop, type AuditChanges } from "@/db/schema";
 import { recordAudit, type Actor } from "@/lib/audit/record";
 import { WEEKDAYS, type WeeklyHours } from "@/lib/tire";
+import { contactColumns } from "./queries";
 import { applySettingsChanges, describeSettingChanges, settingChanges, type SettingChange } from "./settings-changes";
 import type { ShopSettings, ShopSettingsChanges } from "./settings-schema";
 
 const settingsColumns = {
   id: shop.id,
-  name: shop.name,
-  streetAddress: shop.streetAddress,
-  town: shop.town,
-  region: shop.region,
-  postalCode: shop.postalCode,
-  phone: shop.phone,
-  email: shop.email,
+  ...contactColumns,
   timeZone: shop.timeZone,
   hours: shop.hours,
   closedDates: shop.closedDates,
