@@ -6,6 +6,8 @@ import type { AlternativesQuery } from "./query-schema";
 import { decodeAlternativesCursor } from "./cursor";
 import { readOriginal } from "./original";
 import { readShopTolerance } from "@/lib/shop/tolerance";
+import { readShopCharges } from "@/lib/shop/charges";
+import { DEFAULT_SET_SIZE } from "@/lib/tire";
 
 export type AlternativesAnswer = { ok: true; body: Alternatives } | { ok: false; code: ApiErrorCode; message: string };
 
@@ -21,6 +23,8 @@ export async function answerAlternatives(db: Database, query: AlternativesQuery)
   const body = await findAlternatives(db, read.original, {
     tolerancePct: query.tolerancePct ?? (await readShopTolerance(db)),
     sort,
+    quantity: query.quantity ?? DEFAULT_SET_SIZE,
+    charges: await readShopCharges(db),
     limit: query.limit ?? DEFAULT_PAGE_SIZE,
     cursor,
     season: query.season,

@@ -18,7 +18,7 @@ const candidateRowSchema = z.object({
   threePeak: z.boolean(),
   overallDiameterMm: z.number(),
   priceCents: z.number().int(),
-  quantityOnHand: z.number().int(),
+  quantity: z.number().int(),
   rimDiameterIn: z.number(),
   construction: z.enum(CONSTRUCTIONS),
   serviceType: z.enum(SERVICE_TYPES),

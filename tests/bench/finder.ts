@@ -22,6 +22,7 @@ import { demoShop } from "../../lib/demo/shop";
 import { findAlternatives } from "../../lib/alternatives/find-alternatives";
 import { readOriginal, type Original, type OriginalInput } from "../../lib/alternatives/original";
 import { readShopTolerance } from "../../lib/shop/tolerance";
+import { readShopCharges } from "../../lib/shop/charges";
 import { hasProductionBuild, startProductionServer } from "./production-server";
 
 const SEARCHES = 500;
@@ -51,7 +52,8 @@ function randomOriginal(random: Random): OriginalInput {
 async function timeSearch(db: Database, original: Original): Promise<number> {
   const start = performance.now();
   const tolerancePct = await readShopTolerance(db);
-  await findAlternatives(db, original, { tolerancePct, sort: "diameter", limit: 50, cursor: null });
+  const charges = await readShopCharges(db);
+  await findAlternatives(db, original, { tolerancePct, quantity: 4, charges, sort: "diameter", limit: 50, cursor: null });
   return performance.now() - start;
 }
 
