@@ -48,7 +48,7 @@ export function ResultCard({ tire, original, units, needed, pick }: ResultCardPr
             {badges.filter(Boolean).map((badge) => ` · ${badge}`)}
           </p>
         </div>
-        <div className="text-right">
+        <div className="sm:text-right">
           <p className="text-lg font-semibold">
             {formatPrice(tire.priceCents)} <span className="text-sm font-normal text-ink-soft">each</span>
           </p>

@@ -23,16 +23,16 @@ export function EstimateBreakdown({ estimate, className = "" }: { estimate: Esti
       <h4 id={`${id}-title`} className="font-semibold">
         Out the door for {quantity}: {formatPrice(estimate.totalCents)}
       </h4>
-      <dl className="mt-1 grid grid-cols-[minmax(0,1fr)_auto] gap-x-4">
+      <dl className="mt-1 grid grid-cols-[minmax(0,1fr)_auto]">
         {rows.map(([label, cents]) => (
           <div key={label} className="contents">
             <dt className="text-ink-soft">{label}</dt>
-            <dd className="text-right font-mono tabular-nums">{formatPrice(cents)}</dd>
+            <dd className="pl-4 text-right font-mono tabular-nums">{formatPrice(cents)}</dd>
           </div>
         ))}
         <div className="contents font-semibold">
           <dt className="border-t border-rule">Total</dt>
-          <dd className="border-t border-rule text-right font-mono tabular-nums">{formatPrice(estimate.totalCents)}</dd>
+          <dd className="border-t border-rule pl-4 text-right font-mono tabular-nums">{formatPrice(estimate.totalCents)}</dd>
         </div>
       </dl>
       <p className="mt-1 text-xs text-ink-soft">{ESTIMATE_CAVEAT}</p>
