@@ -58,7 +58,7 @@ export function CatalogFilterForm({ filters, brands }: { filters: CatalogFilters
       <FormField id="catalog-stock" label="Stock">
         {(control) => (
           <select {...control} name="stock" defaultValue={filters.stock ?? ""} className={fieldClass}>
-            <option value="">Any count on hand</option>
+            <option value="">Any</option>
             <option value="in">Some on hand</option>
             <option value="out">None on hand</option>
           </select>

@@ -87,7 +87,7 @@ test.describe("how many are on hand, and what a set costs out the door", () => {
     await expect(results(page).first().locator("[data-estimate-total] h4")).toContainText("Out the door for 4");
   });
 
-  test("Ask the shop names the picked tires with how many are on hand for the number asked for", async ({ page }) => {
+  test("Ask the shop names the picked tires with how many are on hand for the number asked for, and the Counter prices them", async ({ page }, testInfo) => {
     await page.goto(`/replace?${SEARCH}&quantity=6`);
     await listShown(page);
     const tires = await firstPage(page, 6);
@@ -100,6 +100,32 @@ test.describe("how many are on hand, and what a set costs out the door", () => {
     await expect(form.locator("[data-stock]")).toHaveText(`${short.quantity} on hand — fewer than the 6 you need`);
     await form.getByLabel("How many tires (1–16)").fill(String(short.quantity));
     await expect(form.locator("[data-stock]")).toHaveText(`${short.quantity} on hand`);
+    await expectNoAxeViolations(page);
+
+    // Sent, the request names the tire by SKU; the Counter prices the request's quantity of it.
+    const stamp = `${testInfo.project.name}.${Date.now()}`;
+    await form.getByLabel("Your name").fill(`Ines Calloway ${stamp}`);
+    await form.getByLabel("E-mail (the answer goes here)").fill(`ines.${stamp}@example.test`);
+    await form.getByLabel("Vehicle").fill("2016 estate car");
+    const token = form.locator('input[name="renderedAt"]');
+    await expect(token).toHaveValue(/^\d+\./);
+    const openedAt = Number((await token.inputValue()).split(".")[0]);
+    await expect.poll(() => Date.now() - openedAt, { message: "the form has been open 3 s" }).toBeGreaterThanOrEqual(3000);
+    await form.getByRole("button", { name: "Send the request" }).click();
+    const number = /number (\d+)/.exec(await page.getByRole("status").filter({ hasText: "Your request is with the shop" }).innerText())?.[1];
+    expect(number).toBeDefined();
+
+    await page.goto(`/counter/requests/${number}`);
+    await page.getByLabel("E-mail").fill("staff@sidewise.test");
+    await page.getByLabel("Password").fill("sidewise-demo");
+    await page.getByRole("button", { name: "Sign in" }).click();
+    const lines = page.getByRole("region", { name: "Catalog tires in the request" });
+    const line = lines.locator(`li[data-sku="${short.sku}"]`);
+    await expect(line.locator("[data-stock]")).toHaveText(`${short.quantity} on hand`);
+    const expected = estimateSet(short.priceCents, short.quantity, demoShopCharges);
+    await expect(line.locator("[data-estimate-total]")).toHaveAttribute("data-estimate-total", String(expected.totalCents));
+    await expect(line).toContainText(`Out the door for ${short.quantity}: ${formatPrice(expected.totalCents)}`);
+    await expect(line).toContainText("Estimate — the shop confirms the price.");
     await expectNoAxeViolations(page);
   });
 
