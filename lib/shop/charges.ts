@@ -4,24 +4,38 @@ import type { Database } from "@/db/client";
 import { shop } from "@/db/schema";
 import { schemaOf } from "@/lib/api/schema-match";
 import type { Estimate, ShopCharges } from "@/lib/money/estimate";
+import { FALLBACK_TOLERANCE_PCT } from "./tolerance";
 
 /** What a shop not yet set up charges beyond the tires: nothing, and no tax. */
 export const NO_CHARGES: ShopCharges = { fittingPerTireCents: 0, disposalPerTireCents: 0, tireFeePerTireCents: 0, taxRateBp: 0, taxServices: false };
 
+const chargeColumns = {
+  fittingPerTireCents: shop.fittingPerTireCents,
+  disposalPerTireCents: shop.disposalPerTireCents,
+  tireFeePerTireCents: shop.tireFeePerTireCents,
+  taxRateBp: shop.taxRateBp,
+  taxServices: shop.taxServices,
+};
+
 /** The shop's charges per tire and its sales tax, in one query; nothing charged before the shop has been set up. */
 export async function readShopCharges(db: Database): Promise<ShopCharges> {
+  const [row] = await db.select(chargeColumns).from(shop).orderBy(asc(shop.id)).limit(1);
+  return row ?? NO_CHARGES;
+}
+
+/**
+ * What a finder search reads of the shop, in one query (a search runs in a few milliseconds, and a
+ * round trip is a good part of one): its default tolerance and its charges.
+ */
+export async function readFinderShopSettings(db: Database): Promise<{ tolerancePct: number; charges: ShopCharges }> {
   const [row] = await db
-    .select({
-      fittingPerTireCents: shop.fittingPerTireCents,
-      disposalPerTireCents: shop.disposalPerTireCents,
-      tireFeePerTireCents: shop.tireFeePerTireCents,
-      taxRateBp: shop.taxRateBp,
-      taxServices: shop.taxServices,
-    })
+    .select({ tolerancePct: shop.defaultTolerancePct, ...chargeColumns })
     .from(shop)
     .orderBy(asc(shop.id))
     .limit(1);
-  return row ?? NO_CHARGES;
+  if (!row) return { tolerancePct: FALLBACK_TOLERANCE_PCT, charges: NO_CHARGES };
+  const { tolerancePct, ...charges } = row;
+  return { tolerancePct, charges };
 }
 
 const cents = (what: string) => z.number().int().min(0).describe(what);

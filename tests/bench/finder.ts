@@ -23,8 +23,7 @@ import { seededRandom, type Random } from "../../lib/demo/random";
 import { demoShop } from "../../lib/demo/shop";
 import { findAlternatives } from "../../lib/alternatives/find-alternatives";
 import { readOriginal, type Original, type OriginalInput } from "../../lib/alternatives/original";
-import { readShopTolerance } from "../../lib/shop/tolerance";
-import { readShopCharges } from "../../lib/shop/charges";
+import { readFinderShopSettings } from "../../lib/shop/charges";
 import { hasProductionBuild, startProductionServer } from "./production-server";
 
 const SEARCHES = 500;
@@ -51,11 +50,10 @@ function randomOriginal(random: Random): OriginalInput {
   };
 }
 
-/** A search as the API runs it: the shop's tolerance and charges read, then one page with its total and near misses. */
+/** A search as the API runs it: the shop's tolerance and charges read (one query), then one page with its total and near misses. */
 async function timeSearch(db: Database, original: Original, inStock?: boolean): Promise<number> {
   const start = performance.now();
-  const tolerancePct = await readShopTolerance(db);
-  const charges = await readShopCharges(db);
+  const { tolerancePct, charges } = await readFinderShopSettings(db);
   await findAlternatives(db, original, { tolerancePct, quantity: 4, charges, inStock, sort: "diameter", limit: 50, cursor: null });
   return performance.now() - start;
 }
