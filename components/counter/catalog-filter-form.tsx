@@ -58,9 +58,9 @@ export function CatalogFilterForm({ filters, brands }: { filters: CatalogFilters
       <FormField id="catalog-stock" label="Stock">
         {(control) => (
           <select {...control} name="stock" defaultValue={filters.stock ?? ""} className={fieldClass}>
-            <option value="">In or out of stock</option>
-            <option value="in">In stock</option>
-            <option value="out">Out of stock</option>
+            <option value="">Any</option>
+            <option value="in">Some on hand</option>
+            <option value="out">None on hand</option>
           </select>
         )}
       </FormField>

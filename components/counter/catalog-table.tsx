@@ -2,6 +2,7 @@ import Link from "next/link";
 import type { CatalogFilters, CatalogTableSort } from "@/lib/counter/catalog-filters";
 import { catalogQueryString, type CatalogTableRow } from "@/lib/counter/catalog-table";
 import { CatalogInlineEdit } from "./catalog-inline-edit";
+import { StockLine } from "@/components/ui/stock-line";
 
 interface Column {
   label: string;
@@ -76,6 +77,7 @@ export function CatalogTable({ rows, filters }: { rows: CatalogTableRow[]; filte
               </td>
               <td className="px-3 py-1">
                 <CatalogInlineEdit sku={row.sku} field="quantity" value={row.quantity} label={`Quantity of ${row.sku} on hand`} />
+                <StockLine quantity={row.sellable} className="pb-2 text-right" />
               </td>
               <td className="px-3 py-3 text-right font-mono">
                 {row.loadIndex}

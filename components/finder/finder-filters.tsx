@@ -1,8 +1,15 @@
 "use client";
 
-import type { FinderQuery } from "@/lib/finder/finder-query";
+import { setSizeOf, type FinderQuery } from "@/lib/finder/finder-query";
 import { centsToDollarsText, parseDollars } from "@/lib/money/money";
-import { FINDER_SORTS, SEASONS, TERRAINS } from "@/lib/tire";
+import { DEFAULT_SET_SIZE, FINDER_SORTS, SEASONS, SET_SIZE_CHOICES, TERRAINS } from "@/lib/tire";
+
+const setSizeLabels: Record<(typeof SET_SIZE_CHOICES)[number], string> = {
+  1: "1 tire",
+  2: "2 tires (one axle)",
+  4: "4 tires (a set)",
+  6: "6 tires (rear duals)",
+};
 
 const sortLabels: Record<(typeof FINDER_SORTS)[number], string> = {
   diameter: "Closest diameter",
@@ -24,9 +31,27 @@ const typedCents = (value: string): number | undefined => parseDollars(value) ??
 /** Filters and sort; every change lands in the address so a reload or a pasted link shows the same list. */
 export function FinderFilters({ query, brands, defaultTolerancePct, onChange }: FinderFiltersProps) {
   const tolerance = query.tolerancePct ?? defaultTolerancePct;
+  const needed = setSizeOf(query);
   return (
     <fieldset className="grid grid-cols-2 gap-3 rounded border border-rule bg-sheet p-4 text-sm sm:grid-cols-3 lg:grid-cols-4">
       <legend className="px-1 font-semibold">Filter and sort</legend>
+      <label className="flex flex-col gap-1">
+        Tires needed
+        <select
+          className={select}
+          value={needed}
+          onChange={(event) => {
+            const quantity = Number(event.target.value);
+            onChange({ quantity: quantity === DEFAULT_SET_SIZE ? undefined : quantity });
+          }}
+        >
+          {SET_SIZE_CHOICES.map((count) => (
+            <option key={count} value={count}>
+              {setSizeLabels[count]}
+            </option>
+          ))}
+        </select>
+      </label>
       <label className="flex flex-col gap-1">
         Sort by
         <select className={select} value={query.sort ?? "diameter"} onChange={(event) => onChange({ sort: event.target.value as FinderQuery["sort"] })}>
@@ -55,7 +80,7 @@ export function FinderFilters({ query, brands, defaultTolerancePct, onChange }: 
       <div className="col-span-2 flex flex-wrap gap-x-5 gap-y-1 sm:col-span-1 lg:col-span-2">
         <label className="inline-flex min-h-11 items-center gap-2">
           <input type="checkbox" checked={query.inStock !== undefined} onChange={(event) => onChange({ inStock: event.target.checked ? "1" : undefined })} className="size-5 accent-[var(--color-accent)]" />
-          In stock only
+          At least {needed} on hand
         </label>
         <label className="inline-flex min-h-11 items-center gap-2">
           <input type="checkbox" checked={query.threePeak !== undefined} onChange={(event) => onChange({ threePeak: event.target.checked ? "1" : undefined })} className="size-5 accent-[var(--color-accent)]" />

@@ -54,6 +54,7 @@ export function FinderResults({ data, original, units, picked, onPick }: FinderR
               tire={tire}
               original={original}
               units={units}
+              needed={first.quantity}
               pick={{ picked: picked.includes(tire.sku), disabled: picked.length >= MAX_CARD_TIRES, onChange: (on) => onPick(tire.sku, on) }}
             />
           </li>
@@ -72,7 +73,7 @@ export function FinderResults({ data, original, units, picked, onPick }: FinderR
           <ol className="mt-3 flex flex-col gap-3">
             {nearMisses.map((tire) => (
               <li key={tire.sku}>
-                <ResultCard tire={tire} original={original} units={units} />
+                <ResultCard tire={tire} original={original} units={units} needed={first.quantity} />
               </li>
             ))}
           </ol>

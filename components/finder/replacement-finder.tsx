@@ -4,11 +4,11 @@ import { useEffect, useMemo, useState } from "react";
 import { drawnTireOf } from "@/components/reader/drawn-tire";
 import { useUnitSystem } from "@/components/units/use-unit-system";
 import { UnitsToggle } from "@/components/units/units-toggle";
-import { alternativesSearch, type FinderQuery, finderSearch } from "@/lib/finder/finder-query";
+import { alternativesSearch, type FinderQuery, finderSearch, setSizeOf } from "@/lib/finder/finder-query";
 import { placardFor, readOriginalMarking } from "@/lib/finder/original-marking";
 import { SaveFitCard } from "@/components/fit-card/save-fit-card-button";
 import { AskTheShop } from "@/components/quotes/ask-the-shop";
-import { finderQuoteTires } from "@/components/quotes/quote-tires";
+import { finderQuoteTires, quoteCatalogTires } from "@/components/quotes/quote-tires";
 import type { Candidate } from "@/lib/finder/alternatives-response";
 import { FinderFilters } from "./finder-filters";
 import { fitCardDraft } from "./fit-card-draft";
@@ -69,7 +69,9 @@ export function ReplacementFinder({ initialQuery, brands, defaultTolerancePct }:
           onPick={pick}
         />
         {data.first ? <SaveFitCard draft={fitCardDraft(data.first.original.designation, query, minimums, picked, data.first.tolerancePct)} /> : null}
-        {data.first ? <AskTheShop source="finder" tires={finderQuoteTires(data.first.original, picked)} /> : null}
+        {data.first ? (
+          <AskTheShop source="finder" tires={finderQuoteTires(data.first.original, picked)} catalogTires={quoteCatalogTires(picked)} quantity={setSizeOf(query)} />
+        ) : null}
       </div>
     </div>
   );

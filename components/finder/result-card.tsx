@@ -8,6 +8,8 @@ import type { Candidate, NearMiss } from "@/lib/finder/alternatives-response";
 import { formatPrice } from "@/lib/money/money";
 import { formatServiceDescription, formatSignedPercent, parseMarking, type UnitSystem } from "@/lib/tire";
 import { RuleNotes } from "@/components/ui/rule-notes";
+import { EstimateBreakdown } from "@/components/ui/estimate-breakdown";
+import { StockLine } from "@/components/ui/stock-line";
 
 function drawnFor(designation: string): DrawnTire | null {
   const marking = parseMarking(designation);
@@ -18,12 +20,14 @@ interface ResultCardProps {
   tire: Candidate | NearMiss;
   original: DrawnTire | null;
   units: UnitSystem;
+  /** How many tires the driver needs. */
+  needed: number;
   /** For qualifying tires: whether it is picked for a Fit card, and how to change that. */
   pick?: { picked: boolean; disabled: boolean; onChange: (picked: boolean) => void };
 }
 
 /** One catalog tire: what it is, what it costs, whether it is here, and why it qualifies (or not). */
-export function ResultCard({ tire, original, units, pick }: ResultCardProps) {
+export function ResultCard({ tire, original, units, needed, pick }: ResultCardProps) {
   const [drawing, setDrawing] = useState(false);
   const lines = "reasons" in tire ? tire.reasons : tire.failed;
   const candidate = drawing ? drawnFor(tire.designation) : null;
@@ -44,9 +48,11 @@ export function ResultCard({ tire, original, units, pick }: ResultCardProps) {
             {badges.filter(Boolean).map((badge) => ` · ${badge}`)}
           </p>
         </div>
-        <div className="text-right">
-          <p className="text-lg font-semibold">{formatPrice(tire.priceCents)}</p>
-          <p className={`text-sm ${tire.inStock ? "text-ink" : "text-ink-soft"}`}>{tire.inStock ? "In stock" : "Out of stock: ask the shop"}</p>
+        <div className="sm:text-right">
+          <p className="text-lg font-semibold">
+            {formatPrice(tire.priceCents)} <span className="text-sm font-normal text-ink-soft">each</span>
+          </p>
+          <StockLine quantity={tire.quantity} needed={needed} />
         </div>
       </div>
       <ul className={`mt-2 grid gap-x-4 text-sm sm:grid-cols-2 ${"reasons" in tire ? "" : "text-danger"}`}>
@@ -58,6 +64,7 @@ export function ResultCard({ tire, original, units, pick }: ResultCardProps) {
         ))}
       </ul>
       {"notes" in tire && tire.notes.length > 0 ? <RuleNotes notes={tire.notes} /> : null}
+      {"estimate" in tire ? <EstimateBreakdown estimate={tire.estimate} className="mt-3 sm:max-w-sm" /> : null}
       {pick ? (
         <label className="mt-2 flex min-h-11 items-center gap-2 text-sm font-semibold">
           <input type="checkbox" checked={pick.picked} disabled={pick.disabled && !pick.picked} onChange={(event) => pick.onChange(event.target.checked)} className="size-5 accent-accent" />

@@ -2,6 +2,8 @@ import type { CardTire } from "@/lib/fit-cards/read-card";
 import { formatPrice } from "@/lib/money/money";
 import { formatServiceDescription, formatSignedPercent } from "@/lib/tire";
 import { RuleNotes } from "@/components/ui/rule-notes";
+import { EstimateBreakdown } from "@/components/ui/estimate-breakdown";
+import { StockLine } from "@/components/ui/stock-line";
 
 function priceLine(tire: CardTire): string {
   if (!tire.stillStocked) return `${formatPrice(tire.priceCentsAtSave)} when saved · no longer stocked`;
@@ -9,8 +11,11 @@ function priceLine(tire: CardTire): string {
   return `${formatPrice(tire.priceCents)} each today (${formatPrice(tire.priceCentsAtSave)} when saved)`;
 }
 
-/** The tires the shop picked, each with today's price and stock and why it fits, or what it changes. */
-export function FitCardTires({ tires }: { tires: CardTire[] }) {
+/**
+ * The tires the shop picked, each with today's price and stock (read now, against the `needed` set),
+ * what the set costs out the door, and why it fits, or what it changes.
+ */
+export function FitCardTires({ tires, needed }: { tires: CardTire[]; needed: number }) {
   if (tires.length === 0) return null;
   return (
     <section aria-labelledby="card-tires-heading" className="flex flex-col gap-3">
@@ -30,7 +35,7 @@ export function FitCardTires({ tires }: { tires: CardTire[] }) {
               <span className="ml-2 text-ink-soft">({formatSignedPercent(tire.diameterDiffPct)} diameter)</span>
             </p>
             <p className="mt-1 font-semibold">{priceLine(tire)}</p>
-            <p className="text-sm text-ink-soft">{tire.stillStocked ? (tire.inStock ? "In stock" : "Out of stock today: ask the shop") : "Ask the shop for a current choice"}</p>
+            {tire.stillStocked ? <StockLine quantity={tire.quantity} needed={needed} /> : <p className="text-sm text-ink-soft">Ask the shop for a current choice</p>}
             <p className="mt-2 text-sm font-semibold">{tire.equalOrBetter ? "Equal or better than the tire on the car:" : "Differs from the tire on the car:"}</p>
             <ul className={`text-sm ${tire.equalOrBetter ? "" : "text-danger"}`}>
               {tire.reasons.map((reason) => (
@@ -41,6 +46,7 @@ export function FitCardTires({ tires }: { tires: CardTire[] }) {
               ))}
             </ul>
             {tire.notes.length > 0 ? <RuleNotes notes={tire.notes} /> : null}
+            {tire.stillStocked ? <EstimateBreakdown estimate={tire.estimate} className="mt-3 print:p-1" /> : null}
           </li>
         ))}
       </ul>

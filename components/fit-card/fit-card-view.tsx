@@ -1,5 +1,5 @@
 import { AskTheShop } from "@/components/quotes/ask-the-shop";
-import { fitCardQuoteTires } from "@/components/quotes/quote-tires";
+import { fitCardQuoteTires, quoteCatalogTires } from "@/components/quotes/quote-tires";
 import { PageIntro } from "@/components/ui/page-intro";
 import { SafetyCautions } from "@/components/ui/safety-cautions";
 import { originalServiceWords, placardMinimumWords } from "@/lib/fit-cards/original-words";
@@ -40,8 +40,14 @@ export function FitCardView({ card, shop, url, timeZone }: { card: PublicFitCard
         </section>
       ) : null}
       <FitCardComparison designations={card.sizes} />
-      <FitCardTires tires={card.tires} />
-      <AskTheShop source="fit-card" reference={card.slug} tires={fitCardQuoteTires(card)} />
+      <FitCardTires tires={card.tires} needed={card.quantity} />
+      <AskTheShop
+        source="fit-card"
+        reference={card.slug}
+        tires={fitCardQuoteTires(card)}
+        catalogTires={quoteCatalogTires(card.tires.filter((tire) => tire.stillStocked))}
+        quantity={card.quantity}
+      />
       {shop ? <ShopCard shop={shop} /> : null}
       <SafetyCautions />
     </article>

@@ -3,6 +3,7 @@
 import dynamic from "next/dynamic";
 import { useId, useRef, useState } from "react";
 import type { QuoteContext } from "./post-quote-request";
+import type { QuoteCatalogTire } from "./quote-tires";
 
 // The form and its checks load when a driver opens it, keeping the pages' first load small.
 const QuoteForm = dynamic(() => import("./quote-form"), {
@@ -14,8 +15,17 @@ const QuoteForm = dynamic(() => import("./quote-form"), {
   ),
 });
 
+interface AskTheShopProps extends Omit<QuoteContext, "skus"> {
+  /** The request's text about the tires, as the page fills it in. */
+  tires: string;
+  /** The catalog tires the page names (sent by SKU, shown with how many are on hand). */
+  catalogTires?: QuoteCatalogTire[];
+  /** How many tires the form starts with (the finder's set size); 4 when not given. */
+  quantity?: number;
+}
+
 /** "Ask the shop for a price": a disclosure with the request form, filled in from the page it sits on. */
-export function AskTheShop({ tires, ...context }: QuoteContext & { tires: string }) {
+export function AskTheShop({ tires, catalogTires = [], quantity, ...context }: AskTheShopProps) {
   const [open, setOpen] = useState(false);
   const toggle = useRef<HTMLButtonElement>(null);
   const close = () => {
@@ -43,7 +53,7 @@ export function AskTheShop({ tires, ...context }: QuoteContext & { tires: string
       </h2>
       {open ? null : <p className="text-ink-soft">Send these tires to the shop; it answers by e-mail with a price.</p>}
       <div id={panelId} hidden={!open} className="mt-3">
-        {open ? <QuoteForm context={context} tires={tires} onCancel={close} /> : null}
+        {open ? <QuoteForm context={{ ...context, skus: catalogTires.map((tire) => tire.sku) }} tires={tires} catalogTires={catalogTires} quantity={quantity} onCancel={close} /> : null}
       </div>
     </section>
   );

@@ -7,6 +7,8 @@ export type QuoteOutcome =
 export interface QuoteContext {
   source: "fit-card" | "size-sheet" | "finder";
   reference?: string;
+  /** The catalog tires the page names, by SKU. */
+  skus?: string[];
 }
 
 const text = (form: FormData, name: string) => {
@@ -40,6 +42,7 @@ export async function postQuoteRequest(context: QuoteContext, form: FormData): P
     preferredDay: text(form, "preferredDay"),
     source: context.source,
     reference: context.reference,
+    skus: context.skus && context.skus.length > 0 ? context.skus : undefined,
     [HONEYPOT_FIELD]: text(form, HONEYPOT_FIELD) ?? "",
     renderedAt: text(form, "renderedAt") || undefined,
   };

@@ -4,6 +4,8 @@ import { useEffect, useId, useRef, useState, type FormEvent } from "react";
 import { DEFAULT_QUANTITY, HONEYPOT_FIELD, MAX_QUANTITY, MIN_QUANTITY, PREFERRED_DAY_MAX_AHEAD } from "@/lib/quotes/quote-input";
 import { fetchFormToken, postQuoteRequest, type QuoteContext, type QuoteOutcome } from "./post-quote-request";
 import { fieldClass, FormField } from "@/components/ui/form-field";
+import { StockLine } from "@/components/ui/stock-line";
+import type { QuoteCatalogTire } from "./quote-tires";
 
 const FIELD_ORDER = ["name", "email", "phone", "vehicle", "tires", "quantity", "preferredDay"] as const;
 
@@ -13,9 +15,27 @@ function localDay(offsetDays = 0): string {
   return `${day.getFullYear()}-${String(day.getMonth() + 1).padStart(2, "0")}-${String(day.getDate()).padStart(2, "0")}`;
 }
 
+interface QuoteFormProps {
+  context: QuoteContext;
+  tires: string;
+  /** The catalog tires the page names, shown with how many are on hand against the number asked for. */
+  catalogTires?: QuoteCatalogTire[];
+  /** How many tires the form starts with. */
+  quantity?: number;
+  onCancel: () => void;
+}
+
+/** The number typed, while it is one the form takes; else the number the form started with. */
+function wantedCount(text: string, fallback: number): number {
+  const count = Number(text);
+  return Number.isInteger(count) && count >= MIN_QUANTITY && count <= MAX_QUANTITY ? count : fallback;
+}
+
 /** The request form itself; loaded only when a driver opens "Ask the shop for a price". */
-export default function QuoteForm({ context, tires, onCancel }: { context: QuoteContext; tires: string; onCancel: () => void }) {
+export default function QuoteForm({ context, tires, catalogTires = [], quantity = DEFAULT_QUANTITY, onCancel }: QuoteFormProps) {
   const id = useId();
+  const [countText, setCountText] = useState(String(quantity));
+  const wanted = wantedCount(countText, quantity);
   const [renderedAt, setRenderedAt] = useState("");
   const [busy, setBusy] = useState(false);
   const [outcome, setOutcome] = useState<QuoteOutcome | null>(null);
@@ -85,12 +105,39 @@ export default function QuoteForm({ context, tires, onCancel }: { context: Quote
       </FormField>
       <div className="grid gap-4 @xl:grid-cols-2">
         <FormField id={`${id}-quantity`} label={`How many tires (${MIN_QUANTITY}–${MAX_QUANTITY})`} error={error("quantity")}>
-          {(control) => <input {...control} name="quantity" type="number" inputMode="numeric" min={MIN_QUANTITY} max={MAX_QUANTITY} defaultValue={DEFAULT_QUANTITY} className={fieldClass} />}
+          {(control) => (
+            <input
+              {...control}
+              name="quantity"
+              type="number"
+              inputMode="numeric"
+              min={MIN_QUANTITY}
+              max={MAX_QUANTITY}
+              value={countText}
+              onChange={(event) => setCountText(event.target.value)}
+              className={fieldClass}
+            />
+          )}
         </FormField>
         <FormField id={`${id}-preferredDay`} label="Preferred day for fitting (optional)" hint={`Up to ${PREFERRED_DAY_MAX_AHEAD} days ahead.`} error={error("preferredDay")}>
           {(control) => <input {...control} name="preferredDay" type="date" min={localDay()} max={localDay(PREFERRED_DAY_MAX_AHEAD)} className={fieldClass} />}
         </FormField>
       </div>
+      {catalogTires.length > 0 ? (
+        <section aria-labelledby={`${id}-stock`} aria-live="polite" className="rounded border border-rule p-3">
+          <h3 id={`${id}-stock`} className="text-sm font-semibold">
+            On hand at the shop now, for {wanted} {wanted === 1 ? "tire" : "tires"}
+          </h3>
+          <ul className="mt-1 flex flex-col gap-1">
+            {catalogTires.map((tire) => (
+              <li key={tire.sku} className="text-sm">
+                <span>{tire.label}</span>
+                <StockLine quantity={tire.quantity} needed={wanted} />
+              </li>
+            ))}
+          </ul>
+        </section>
+      ) : null}
       <div className="sr-only">
         <label htmlFor={`${id}-${HONEYPOT_FIELD}`}>Leave this field empty: it is only here to catch automated spam</label>
         <input id={`${id}-${HONEYPOT_FIELD}`} name={HONEYPOT_FIELD} type="text" tabIndex={-1} autoComplete="off" defaultValue="" />

@@ -1,4 +1,5 @@
-import { date, index, integer, pgTable, serial, smallint, text, timestamp } from "drizzle-orm/pg-core";
+import { date, index, integer, pgTable, primaryKey, serial, smallint, text, timestamp } from "drizzle-orm/pg-core";
+import { stockItem } from "./catalog";
 import { QUOTE_SOURCES, QUOTE_STATUSES, type QuoteSource, type QuoteStatus } from "../../lib/tire/vocabulary";
 import { user } from "./auth";
 import { emailSend } from "./email";
@@ -26,6 +27,24 @@ export const quoteRequest = pgTable(
     status: text().$type<QuoteStatus>().notNull().default("new"),
   },
   (table) => [index("quote_request_status_created").on(table.status, table.createdAt)],
+);
+
+/**
+ * A catalog tire a request names (the tires picked in the finder, a Fit card's tires), so that the
+ * Counter can show how many are on hand and what the request's quantity costs at today's price.
+ */
+export const quoteRequestTire = pgTable(
+  "quote_request_tire",
+  {
+    requestId: integer()
+      .notNull()
+      .references(() => quoteRequest.id, { onDelete: "cascade" }),
+    position: smallint().notNull(),
+    stockItemId: integer()
+      .notNull()
+      .references(() => stockItem.id, { onDelete: "restrict" }),
+  },
+  (table) => [primaryKey({ columns: [table.requestId, table.position] })],
 );
 
 /** A staff reply to a request, sent by e-mail and kept with it. */

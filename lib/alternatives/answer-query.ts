@@ -5,11 +5,12 @@ import { DEFAULT_PAGE_SIZE } from "@/lib/catalog/query-schema";
 import type { AlternativesQuery } from "./query-schema";
 import { decodeAlternativesCursor } from "./cursor";
 import { readOriginal } from "./original";
-import { readShopTolerance } from "@/lib/shop/tolerance";
+import { readFinderShopSettings } from "@/lib/shop/charges";
+import { DEFAULT_SET_SIZE } from "@/lib/tire";
 
 export type AlternativesAnswer = { ok: true; body: Alternatives } | { ok: false; code: ApiErrorCode; message: string };
 
-/** Answers a validated GET /api/v1/alternatives query: the original read, the shop's tolerance unless one is given. */
+/** Answers a validated GET /api/v1/alternatives query: the original read, the shop's tolerance unless one is given, its charges for the estimates. */
 export async function answerAlternatives(db: Database, query: AlternativesQuery): Promise<AlternativesAnswer> {
   const read = readOriginal({ ...query, season: query.originalSeason });
   if (!read.ok) return { ok: false, code: read.code, message: read.message };
@@ -18,9 +19,12 @@ export async function answerAlternatives(db: Database, query: AlternativesQuery)
   if (query.cursor !== undefined && cursor?.sort !== sort) {
     return { ok: false, code: "invalid_parameter", message: 'The parameter "cursor" is invalid: use the nextCursor of the same search.' };
   }
+  const shop = await readFinderShopSettings(db);
   const body = await findAlternatives(db, read.original, {
-    tolerancePct: query.tolerancePct ?? (await readShopTolerance(db)),
+    tolerancePct: query.tolerancePct ?? shop.tolerancePct,
     sort,
+    quantity: query.quantity ?? DEFAULT_SET_SIZE,
+    charges: shop.charges,
     limit: query.limit ?? DEFAULT_PAGE_SIZE,
     cursor,
     season: query.season,

@@ -19,7 +19,7 @@ const candidateRowSchema = z.object({
   treadDepth32: z.number().int().nullable(),
   overallDiameterMm: z.number(),
   priceCents: z.number().int(),
-  quantityOnHand: z.number().int(),
+  quantity: z.number().int(),
   rimDiameterIn: z.number(),
   construction: z.enum(CONSTRUCTIONS),
   serviceType: z.enum(SERVICE_TYPES),

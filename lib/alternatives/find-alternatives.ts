@@ -10,9 +10,15 @@ import type { Original } from "./original";
 import { finderShape, finderValues, ruleSql, type CatalogFilters } from "./rule-sql";
 import { cachedStatement } from "./statement-cache";
 import { tireSchema, toTire } from "@/lib/catalog/catalog-tire";
+import { estimateSet, type ShopCharges } from "@/lib/money/estimate";
+import { estimateSchema } from "@/lib/shop/charges";
 
 export interface AlternativesOptions extends CatalogFilters {
   tolerancePct: number;
+  /** How many tires are needed: the stock filter's set size and each result's estimate. */
+  quantity: number;
+  /** What the shop charges beyond the tires, for the estimates. */
+  charges: ShopCharges;
   sort: FinderSort;
   limit: number;
   cursor: AlternativesCursor | null;
@@ -24,6 +30,7 @@ export const alternativeSchema = tireSchema.extend({
   diameterDiffPct,
   reasons: z.array(z.string()).describe("Why each rule of equal-or-better holds, in plain words."),
   notes: z.array(z.string()).describe("What a driver should know beyond the rules (a change of season, a different inflation)."),
+  estimate: estimateSchema.describe("What the search's quantity of this tire costs out the door, from the shop's charges: an estimate, which the shop confirms."),
 });
 export const nearMissSchema = tireSchema.extend({
   diameterDiffPct,
@@ -40,6 +47,7 @@ export const alternativesSchema = z.object({
     loadRange: z.string().nullable(),
   }),
   tolerancePct: z.number(),
+  quantity: z.number().int().describe("How many tires the search asked for: the stock filter's set size and the estimates' quantity."),
   total: z.number().int().describe("Every qualifying tire after the filters, on every page."),
   results: z.array(alternativeSchema),
   nextCursor: z.string().nullable(),
@@ -75,8 +83,8 @@ function confirmed<Row extends CandidateRow>(rows: Row[], verdictOf: (row: Row) 
  * one of rules 2–5.
  */
 export async function findAlternatives(db: Database, original: Original, options: AlternativesOptions): Promise<Alternatives> {
-  const shape = finderShape(original, options);
-  const values = finderValues(original, options.tolerancePct, options);
+  const shape = finderShape(original, options, options.quantity);
+  const values = finderValues(original, options.tolerancePct, options, options.quantity);
   const run = cachedStatement(db, `${options.sort} ${options.cursor ? "after" : "first"} ${JSON.stringify(shape)}`, () =>
     finderStatement(db, ruleSql(shape), options.sort, options.cursor !== null),
   );
@@ -96,12 +104,14 @@ export async function findAlternatives(db: Database, original: Original, options
       loadRange: original.loadRange,
     },
     tolerancePct: options.tolerancePct,
+    quantity: options.quantity,
     total,
     results: confirmed(page, verdictOf, (verdict) => verdict.qualifies).map(({ row, verdict }) => ({
       ...toTire(row),
       diameterDiffPct: row.diffPct,
       reasons: qualifyingReasonWords(verdict),
       notes: noteWords(verdict.notes),
+      estimate: estimateSet(row.priceCents, options.quantity, options.charges),
     })),
     nextCursor: hasMore ? encodeAlternativesCursor({ sort: options.sort, key: last.sortKey, priceCents: last.priceCents, sku: last.sku }) : null,
     nearMisses: confirmed(nearMisses, verdictOf, isNearMiss).map(({ row, verdict }) => ({

@@ -1,6 +1,16 @@
 import { z } from "zod";
 import { MAX_INT4, optional, originalQueryFields, wholeNumber, wholeNumberIn, yesNo } from "@/lib/api/query-fields";
-import { FINDER_SORTS, SEASONS, TERRAINS } from "@/lib/tire";
+import { FINDER_SORTS, MAX_SET_SIZE, MIN_SET_SIZE, SEASONS, TERRAINS } from "@/lib/tire";
+
+const SET_SIZE_RULE = `how many tires are needed, a whole number from ${MIN_SET_SIZE} to ${MAX_SET_SIZE}`;
+
+/** How many tires a search needs: 1–8 (a word for any other value, "2.5" and "x" included). */
+const setSize = z
+  .string()
+  .trim()
+  .regex(/^\d+$/, SET_SIZE_RULE)
+  .transform(Number)
+  .pipe(z.number().min(MIN_SET_SIZE, SET_SIZE_RULE).max(MAX_SET_SIZE, SET_SIZE_RULE));
 
 /**
  * GET /api/v1/alternatives: the original (a load index required) and the filters, sort and page.
@@ -20,6 +30,7 @@ export const alternativesQuerySchema = z
     brand: optional(z.string().trim().min(1).max(100)),
     minPriceCents: optional(wholeNumberIn(0, MAX_INT4)),
     maxPriceCents: optional(wholeNumberIn(0, MAX_INT4)),
+    quantity: optional(setSize).describe(`How many tires are needed, ${MIN_SET_SIZE}–${MAX_SET_SIZE} (default 4): inStock=true keeps tires with at least this many to sell now, inStock=false those with fewer, and each result's estimate is for this many.`),
     inStock: optional(yesNo),
     sort: optional(z.enum(FINDER_SORTS)),
     limit: optional(wholeNumberIn(1, 500)),

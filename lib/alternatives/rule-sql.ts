@@ -1,7 +1,7 @@
-import { and, eq, gt, gte, lte, sql, type SQL } from "drizzle-orm";
+import { and, eq, gt, gte, lt, lte, sql, type SQL } from "drizzle-orm";
 import { brand, stockFitment, stockItem, tireLine } from "@/db/schema";
 import { loadRequirements, type Season, type Terrain } from "@/lib/tire";
-import { ofBrand } from "@/lib/catalog/columns";
+import { ofBrand, sellableQuantity } from "@/lib/catalog/columns";
 import type { FinderSort } from "@/lib/tire";
 import type { Original } from "./original";
 
@@ -14,7 +14,10 @@ export interface CatalogFilters {
   brand?: string;
   minPriceCents?: number;
   maxPriceCents?: number;
-  /** true: only tires on hand; false: only tires out of stock. */
+  /**
+   * true: only tires of which at least the set size (`quantity` of the search) can be sold now;
+   * false: only those with fewer.
+   */
   inStock?: boolean;
 }
 
@@ -34,9 +37,16 @@ export interface FinderShape {
   minPrice: boolean;
   maxPrice: boolean;
   inStock: "any" | "yes" | "no";
+  /**
+   * Whether a fitment's own counts tell how many of its items pass the stock filter: with none, and
+   * for a set of one (in_stock_count counts the items with at least one to sell). For more, the
+   * items are counted.
+   */
+  stockCountedByFitment: boolean;
 }
 
-export function finderShape(original: Original, filters: CatalogFilters): FinderShape {
+/** `quantity`: how many tires the search needs (the stock filter's set size). */
+export function finderShape(original: Original, filters: CatalogFilters, quantity: number): FinderShape {
   return {
     hasCandidates: original.serviceType !== "T",
     runFlatOnly: original.runFlat,
@@ -46,11 +56,12 @@ export function finderShape(original: Original, filters: CatalogFilters): Finder
     minPrice: filters.minPriceCents !== undefined,
     maxPrice: filters.maxPriceCents !== undefined,
     inStock: filters.inStock === undefined ? "any" : filters.inStock ? "yes" : "no",
+    stockCountedByFitment: filters.inStock === undefined || quantity === 1,
   };
 }
 
 /** The values the placeholders of a shape's statements take for one search. */
-export function finderValues(original: Original, tolerancePct: number, filters: CatalogFilters) {
+export function finderValues(original: Original, tolerancePct: number, filters: CatalogFilters, quantity: number) {
   const load = loadRequirements(original);
   return {
     rim: original.rimDiameterIn,
@@ -68,6 +79,7 @@ export function finderValues(original: Original, tolerancePct: number, filters: 
     brand: filters.brand,
     minPriceCents: filters.minPriceCents,
     maxPriceCents: filters.maxPriceCents,
+    quantity,
   };
 }
 
@@ -122,8 +134,13 @@ const fitmentCounts = {
 };
 
 export function ruleSql(shape: FinderShape): RuleSql {
-  const stockFilter = { any: undefined, yes: gt(stockItem.quantityOnHand, 0), no: eq(stockItem.quantityOnHand, 0) }[shape.inStock];
-  const itemOnlyFilters = shape.lineFilters.length > 0 || shape.minPrice || shape.maxPrice;
+  const stockFilter = {
+    any: undefined,
+    yes: gte(sellableQuantity, placeholder("quantity")),
+    no: lt(sellableQuantity, placeholder("quantity")),
+  }[shape.inStock];
+  // The line, brand and price filters, and a stock filter for more than one tire, read the items themselves.
+  const itemsCounted = shape.lineFilters.length > 0 || shape.minPrice || shape.maxPrice || !shape.stockCountedByFitment;
   const fitment = stockFitment;
   const diffPct = sql<number>`((${fitment.overallDiameterMm} - ${float("reference")}) / ${float("reference")} * 100)`;
   return {
@@ -155,7 +172,7 @@ export function ruleSql(shape: FinderShape): RuleSql {
       shape.maxPrice ? lte(stockItem.priceCents, placeholder("maxPriceCents")) : undefined,
       stockFilter,
     ),
-    countedItems: itemOnlyFilters ? undefined : fitmentCounts[shape.inStock],
+    countedItems: itemsCounted ? undefined : fitmentCounts[shape.inStock],
   };
 }
 

@@ -3,6 +3,7 @@ import type { SelectResultFields } from "drizzle-orm/query-builders/select.types
 import { z } from "zod";
 import { brand, stockItem, tireLine } from "@/db/schema";
 import { SEASONS, TERRAINS } from "@/lib/tire";
+import { sellableQuantity } from "./columns";
 
 /** One catalog item as every endpoint returns it. */
 export const tireSchema = z.object({
@@ -22,7 +23,8 @@ export const tireSchema = z.object({
   treadDepth32: z.number().int().nullable().describe("New tread depth in 32nds of an inch: the item's own, else its line's; null when neither is known."),
   overallDiameterMm: z.number().describe("Nominal overall diameter, unrounded."),
   priceCents: z.number().int().describe("Price of one tire in US cents."),
-  inStock: z.boolean(),
+  quantity: z.number().int().min(0).describe("How many can be sold now."),
+  inStock: z.boolean().describe("quantity ≥ 1."),
 });
 
 export type Tire = z.infer<typeof tireSchema>;
@@ -39,7 +41,7 @@ export const tireStockColumns = {
   runFlat: stockItem.runFlat,
   overallDiameterMm: stockItem.overallDiameterMm,
   priceCents: stockItem.priceCents,
-  quantityOnHand: stockItem.quantityOnHand,
+  quantity: sellableQuantity,
 };
 
 /** A Tire's columns from its line and brand; the tread depth is the item's own, else its line's. */
@@ -75,6 +77,7 @@ export function toTire(row: TireRow): Tire {
     treadDepth32: row.treadDepth32,
     overallDiameterMm: row.overallDiameterMm,
     priceCents: row.priceCents,
-    inStock: row.quantityOnHand > 0,
+    quantity: row.quantity,
+    inStock: row.quantity >= 1,
   };
 }

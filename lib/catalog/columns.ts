@@ -5,6 +5,16 @@ import { brand, stockItem, tireLine } from "@/db/schema";
 export const ofLine = eq(stockItem.lineId, tireLine.id);
 export const ofBrand = eq(tireLine.brandId, brand.id);
 
+/**
+ * How many of an item can be sold now: a whole number ≥ 0, the one definition every query reads (a
+ * Tire's `quantity`, the finder's stock filter, the Counter's in/out filter, Fit cards, quote lines).
+ * Today it is the quantity on hand; when tires held for customers come off it, this is the one edit.
+ * Keep it an expression over stock_item alone, so the finder's item reads stay within its indexes.
+ * stock_fitment.in_stock_count (the triggers of migration 0007) counts the items where it is ≥ 1:
+ * change those triggers with it (tests/integration/catalog/fitments.test.ts compares the two).
+ */
+export const sellableQuantity = sql<number>`${stockItem.quantityOnHand}`.mapWith(Number);
+
 /** What the rules read from a candidate, besides what a Tire shows. */
 export const ruleFactColumns = {
   rimDiameterIn: stockItem.rimDiameterIn,

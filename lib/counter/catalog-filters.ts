@@ -1,9 +1,10 @@
-import { and, asc, desc, eq, gt, ilike, or, sql, type SQL } from "drizzle-orm";
+import { and, asc, desc, eq, gte, ilike, lt, or, sql, type SQL } from "drizzle-orm";
 import { z } from "zod";
 import { containsPattern } from "@/lib/search/contains-pattern";
 import { lineText } from "@/lib/validation/text";
 import { brand, stockItem, tireLine } from "@/db/schema";
 import { SEASONS, TERRAINS } from "@/lib/tire";
+import { sellableQuantity } from "@/lib/catalog/columns";
 
 export const CATALOG_TABLE_SORTS = ["sku", "brand", "size", "loadIndex", "speed", "price", "quantity"] as const;
 export type CatalogTableSort = (typeof CATALOG_TABLE_SORTS)[number];
@@ -44,8 +45,9 @@ export function catalogFilterWhere(filters: CatalogFilters): SQL | undefined {
   if (filters.season) conditions.push(eq(tireLine.season, filters.season));
   if (filters.terrain) conditions.push(eq(tireLine.terrain, filters.terrain));
   if (filters.rim !== undefined) conditions.push(eq(stockItem.rimDiameterIn, filters.rim));
-  if (filters.stock === "in") conditions.push(gt(stockItem.quantityOnHand, 0));
-  if (filters.stock === "out") conditions.push(eq(stockItem.quantityOnHand, 0));
+  // In stock as everywhere else: at least one to sell now.
+  if (filters.stock === "in") conditions.push(gte(sellableQuantity, 1));
+  if (filters.stock === "out") conditions.push(lt(sellableQuantity, 1));
   return and(...conditions);
 }
 

@@ -1,12 +1,13 @@
 import { count } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { brand, stockItem, tireLine } from "@/db/schema";
-import { ofBrand, ofLine, staffItemColumns } from "@/lib/catalog/columns";
+import { ofBrand, ofLine, sellableQuantity, staffItemColumns } from "@/lib/catalog/columns";
 import { catalogFilterWhere, catalogFiltersSchema, catalogOrderBy, type CatalogFilters } from "./catalog-filters";
 
 export const CATALOG_TABLE_PAGE_SIZE = 50;
 
-const tableColumns = { ...staffItemColumns, season: tireLine.season, terrain: tireLine.terrain };
+// `quantity` is the count on the shelf that staff edit; `sellable`, how many can be sold now, which the words say.
+const tableColumns = { ...staffItemColumns, sellable: sellableQuantity, season: tireLine.season, terrain: tireLine.terrain };
 
 export interface CatalogTablePage {
   rows: CatalogTableRow[];

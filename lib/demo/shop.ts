@@ -1,4 +1,14 @@
 import type { NewShop } from "@/db/schema";
+import type { ShopCharges } from "@/lib/money/estimate";
+
+/** Invented charges: fitting and balancing, disposal of the old tire, a state tire fee, sales tax on tires and services. */
+export const demoShopCharges: ShopCharges = {
+  fittingPerTireCents: 2_500,
+  disposalPerTireCents: 400,
+  tireFeePerTireCents: 100,
+  taxRateBp: 725,
+  taxServices: true,
+};
 
 /** An invented shop in an invented town; the 555-01xx number is reserved for fiction. */
 export const demoShop: NewShop = {
@@ -19,12 +29,7 @@ export const demoShop: NewShop = {
     sat: [["08:00", "14:00"]],
     sun: [],
   },
-  // Invented charges: fitting and balancing, disposal of the old tire, a state tire fee, sales tax.
   closedDates: ["2026-12-25", "2027-01-01"],
   defaultTolerancePct: 3,
-  fittingPerTireCents: 2_500,
-  disposalPerTireCents: 400,
-  tireFeePerTireCents: 100,
-  taxRateBp: 725,
-  taxServices: true,
+  ...demoShopCharges,
 };

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { FINDER_SORTS, SEASONS, TERRAINS } from "@/lib/tire";
+import { DEFAULT_SET_SIZE, FINDER_SORTS, SEASONS, SET_SIZE_CHOICES, TERRAINS } from "@/lib/tire";
 import { lineText } from "@/lib/validation/text";
 
 export const vehicleTypes = ["passenger-car", "mpv-truck-trailer"] as const;
@@ -7,6 +7,12 @@ export const vehicleTypes = ["passenger-car", "mpv-truck-trailer"] as const;
 const optionalText = lineText().trim().max(64).optional().catch(undefined);
 const optionalCount = (max: number) => z.coerce.number().int().min(0).max(max).optional().catch(undefined);
 const flag = z.enum(["1", "true"]).optional().catch(undefined);
+/** One of the set sizes the finder offers; anything else falls back to the default set. */
+const setSize = z.coerce
+  .number()
+  .refine((count) => (SET_SIZE_CHOICES as readonly number[]).includes(count))
+  .optional()
+  .catch(undefined);
 
 /**
  * The Replacement finder's state as it lives in the URL. Unknown or malformed values are dropped
@@ -27,6 +33,8 @@ export const finderQuerySchema = z.object({
   brand: optionalText,
   minPriceCents: optionalCount(10_000_000),
   maxPriceCents: optionalCount(10_000_000),
+  /** How many tires are needed; absent means the default set of four. */
+  quantity: setSize,
   inStock: flag,
   sort: z.enum(FINDER_SORTS).optional().catch(undefined),
   gawrFront: z.coerce.number().positive().max(100_000).optional().catch(undefined),
@@ -37,6 +45,9 @@ export const finderQuerySchema = z.object({
 });
 
 export type FinderQuery = z.infer<typeof finderQuerySchema>;
+
+/** How many tires the search is for: the address's choice, else a set of four. */
+export const setSizeOf = (query: FinderQuery): number => query.quantity ?? DEFAULT_SET_SIZE;
 
 export function readFinderQuery(params: Record<string, string | string[] | undefined>): FinderQuery {
   const flat = Object.fromEntries(Object.entries(params).map(([key, value]) => [key, Array.isArray(value) ? value[0] : value]));
@@ -73,6 +84,8 @@ export function alternativesSearch(query: FinderQuery, minimums: PlacardMinimums
     // The address keeps flags short ("1"); the API takes true or false.
     if (value !== undefined && value !== "") search.set(key, flagKeys.has(key) ? "true" : String(value));
   }
+  // Always named, so that each answer says for how many tires its stock filter and estimates are.
+  search.set("quantity", String(setSizeOf(query)));
   if (minimums.loadIndex !== null && minimums.loadIndex > (query.loadIndex ?? -1)) search.set("loadIndex", String(minimums.loadIndex));
   if (minimums.loadIndexDual !== null && minimums.loadIndexDual > (query.loadIndexDual ?? -1)) {
     search.set("loadIndexDual", String(minimums.loadIndexDual));

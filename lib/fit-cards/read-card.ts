@@ -5,13 +5,19 @@ import { brand, fitCard, fitCardTire, stockItem, tireLine } from "@/db/schema";
 import { ofBrand, ofLine, ruleFactColumns } from "@/lib/catalog/columns";
 import { readOriginal } from "@/lib/alternatives/original";
 import { tireColumns, tireSchema, toTire } from "@/lib/catalog/catalog-tire";
-import { SEASONS, type LoadRange } from "@/lib/tire";
+import { DEFAULT_SET_SIZE, SEASONS, type LoadRange } from "@/lib/tire";
+import { estimateSet } from "@/lib/money/estimate";
+import { estimateSchema, readShopCharges } from "@/lib/shop/charges";
 import { cardTireVerdict, tireVerdictSchema } from "./tire-verdict";
 
-/** A chosen tire as the public card shows it: live price and stock beside the price when saved. */
+/** How many tires a card's estimates are for: a card keeps no set size, so a set of four. */
+export const CARD_SET_SIZE = DEFAULT_SET_SIZE;
+
+/** A chosen tire as the public card shows it: live price, stock and estimate beside the price when saved. */
 const cardTireSchema = tireSchema.extend(tireVerdictSchema.shape).extend({
   priceCentsAtSave: z.number().int(),
-  stillStocked: z.boolean().describe("False once the item is retired (it then counts as not in stock)."),
+  stillStocked: z.boolean().describe("False once the item is retired (it then counts as not in stock, quantity 0)."),
+  estimate: estimateSchema.describe("What the card's quantity of this tire costs out the door at today's price: an estimate, which the shop confirms."),
 });
 
 /** GET /api/v1/fit-cards/{slug}: what anyone with the link may see; nothing about who made it. */
@@ -33,6 +39,7 @@ export const publicFitCardSchema = z.object({
     season: z.enum(SEASONS).nullable(),
   }),
   tolerancePct: z.number(),
+  quantity: z.number().int().describe("How many tires the estimates are for (a card keeps no set size: 4)."),
   note: z.string().nullable(),
   tires: z.array(cardTireSchema),
 });
@@ -70,6 +77,7 @@ export async function readFitCard(db: Database, slug: string, now = new Date()):
     .innerJoin(brand, ofBrand)
     .where(eq(fitCardTire.cardId, card.id))
     .orderBy(asc(fitCardTire.position));
+  const charges = rows.length > 0 ? await readShopCharges(db) : null;
 
   return {
     status: "found",
@@ -91,12 +99,14 @@ export async function readFitCard(db: Database, slug: string, now = new Date()):
         season: card.originalSeason,
       },
       tolerancePct: card.tolerancePct,
+      quantity: CARD_SET_SIZE,
       note: card.note,
       tires: rows.map((row) => ({
-        ...toTire(row),
-        inStock: !row.retired && row.quantityOnHand > 0,
+        // Read now, never frozen: a retired item has none to sell.
+        ...toTire({ ...row, quantity: row.retired ? 0 : row.quantity }),
         stillStocked: !row.retired,
         priceCentsAtSave: row.priceCentsAtSave,
+        estimate: estimateSet(row.priceCents, CARD_SET_SIZE, charges!),
         ...cardTireVerdict(original, row, card.tolerancePct),
       })),
     },

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { QUOTE_SOURCES } from "@/db/schema/quotes";
 import { lineText, multiLineText } from "@/lib/validation/text";
+import { skuSchema } from "@/lib/validation/sku";
 
 export const MIN_QUANTITY = 1;
 export const MAX_QUANTITY = 16;
@@ -14,6 +15,8 @@ export const MIN_FILL_MS = 3000;
 /** The field no person sees: anything typed into it came from a script. */
 export const HONEYPOT_FIELD = "website";
 export const MAX_REPLY_LENGTH = 5000;
+/** At most as many catalog tires as a Fit card holds. */
+export const MAX_REQUEST_SKUS = 6;
 
 const DAY_MS = 86_400_000;
 const isoDay = (date: Date) => date.toISOString().slice(0, 10);
@@ -74,6 +77,11 @@ export const quoteRequestSchema = z.object({
   ),
   source: z.enum(QUOTE_SOURCES, { error: "The page the request comes from is unknown" }),
   reference: optionalText(lineText().trim().max(100, "The reference is longer than 100 characters")),
+  skus: z
+    .array(skuSchema, { error: "The catalog tires must be a list of SKUs" })
+    .max(MAX_REQUEST_SKUS, `Name at most ${MAX_REQUEST_SKUS} catalog tires`)
+    .optional()
+    .describe("The catalog tires the request is about (as the finder or a Fit card filled it in); SKUs the catalog does not hold now are left out."),
   [HONEYPOT_FIELD]: z.string().max(500).optional(),
   /** The signed token of GET /api/v1/quote-requests/form-token, fetched when the form opened. */
   renderedAt: z.string().max(200).optional(),

@@ -69,10 +69,10 @@ async function findLine(db: Database, brandName: string, lineName: string): Prom
   return line ?? null;
 }
 
-/** A current (not retired) item as a Tire, with what an edit starts from. */
+/** A current (not retired) item as a Tire, with what an edit starts from (the count on the shelf, not what can be sold). */
 async function findCurrent(db: Database, sku: string) {
   const [row] = await db
-    .select({ ...tireColumns, lineId: stockItem.lineId, lineRunFlat: tireLine.runFlat, lineRetired: tireLine.retired, ownTreadDepth32: stockItem.treadDepth32 })
+    .select({ ...tireColumns, quantityOnHand: stockItem.quantityOnHand, lineId: stockItem.lineId, lineRunFlat: tireLine.runFlat, lineRetired: tireLine.retired, ownTreadDepth32: stockItem.treadDepth32 })
     .from(stockItem)
     .innerJoin(tireLine, ofLine)
     .innerJoin(brand, ofBrand)

@@ -22,3 +22,4 @@ export * from "./rules/judge";
 export * from "./rules/words";
 export { rimTwin, rimTwinCaution } from "./rim-twins";
 export * from "./messages";
+export * from "./stock-words";

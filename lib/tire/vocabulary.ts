@@ -31,6 +31,15 @@ export const FINDER_SORTS = ["diameter", "price", "loadMargin"] as const;
 export type FinderSort = (typeof FINDER_SORTS)[number];
 
 /**
+ * How many tires a driver needs at once: the API takes 1–8 (default 4: a set), the finder offers the
+ * usual counts (one, an axle, a set, a truck with rear duals).
+ */
+export const MIN_SET_SIZE = 1;
+export const MAX_SET_SIZE = 8;
+export const DEFAULT_SET_SIZE = 4;
+export const SET_SIZE_CHOICES = [1, 2, 4, 6] as const;
+
+/**
  * A SKU survives a URL path as it is (RFC 3986 §2.3 unreserved characters, "~" aside), so every
  * item opens at /counter/items/{sku}: 1–64 of A–Z a–z 0–9 - _ . but never "." or ".." alone (path
  * segments a URL resolver removes, RFC 3986 §5.2.4), and never "new" in any case, the address of

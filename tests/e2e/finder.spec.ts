@@ -27,12 +27,12 @@ test.describe("the Replacement finder", () => {
     await page.goto("/replace?size=285-50R20&loadIndex=119&speedSymbol=S");
     await expect(resultsHeading(page)).toBeVisible();
     const before = await totalShown(page);
-    await page.getByLabel("In stock only").check();
+    await page.getByLabel("At least 4 on hand").check();
     await expect(page).toHaveURL(/inStock=1/);
     await expect.poll(() => totalShown(page)).toBeLessThanOrEqual(before);
     const filtered = await totalShown(page);
     await page.reload();
-    await expect(page.getByLabel("In stock only")).toBeChecked();
+    await expect(page.getByLabel("At least 4 on hand")).toBeChecked();
     await expect.poll(() => totalShown(page)).toBe(filtered);
   });
 

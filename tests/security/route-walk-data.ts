@@ -39,7 +39,7 @@ export const API_WALKS: Record<string, ApiWalk[]> = {
       path: "/api/v1/alternatives",
       query: {
         base: "size=285-50R20&loadIndex=119&speedSymbol=S",
-        names: ["size", "loadIndex", "loadIndexDual", "speedSymbol", "loadRange", "runFlat", "tolerancePct", "season", "terrain", "threePeak", "brand", "minPriceCents", "maxPriceCents", "inStock", "sort", "limit", "cursor"],
+        names: ["size", "loadIndex", "loadIndexDual", "speedSymbol", "loadRange", "runFlat", "tolerancePct", "season", "terrain", "threePeak", "brand", "minPriceCents", "maxPriceCents", "inStock", "quantity", "sort", "limit", "cursor"],
       },
     },
   ],
@@ -90,7 +90,7 @@ export const API_WALKS: Record<string, ApiWalk[]> = {
     {
       method: "POST",
       path: "/api/v1/quote-requests",
-      body: { name: "Walker", email: "walker@example.test", vehicle: "2019 family SUV", tires: "235/65R17", quantity: 4, source: "size-sheet", website: "", renderedAt: "1.unsigned" },
+      body: { name: "Walker", email: "walker@example.test", vehicle: "2019 family SUV", tires: "235/65R17", quantity: 4, source: "size-sheet", skus: ["WALK-1"], website: "", renderedAt: "1.unsigned" },
     },
     { method: "GET", path: "/api/v1/quote-requests", as: "staff", query: { base: "", names: ["status", "page"] } },
   ],
@@ -131,7 +131,7 @@ export const PAGE_WALKS: Record<string, { path: string; as?: Caller; names?: str
   "learn/[topic]/page.tsx": { path: "/learn/{topic}" },
   "learn/page.tsx": { path: "/learn" },
   "plus/page.tsx": { path: "/plus", names: ["size", "loadIndex", "speedSymbol", "tolerancePct"] },
-  "replace/page.tsx": { path: "/replace", names: ["size", "loadIndex", "speedSymbol", "brand", "season", "minPriceCents", "gawrFront", "vehicle", "sort"] },
+  "replace/page.tsx": { path: "/replace", names: ["size", "loadIndex", "speedSymbol", "brand", "season", "minPriceCents", "gawrFront", "vehicle", "quantity", "sort"] },
   "reset-password/page.tsx": { path: "/reset-password", names: ["token", "error"] },
   "s/[slug]/opengraph-image.tsx": { path: "/s/{slug}/opengraph-image" },
   "s/[slug]/page.tsx": { path: "/s/{slug}" },

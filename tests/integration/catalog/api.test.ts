@@ -5,13 +5,16 @@ import { GET as getAlternatives } from "@/app/api/v1/alternatives/route";
 import { GET as getCatalog } from "@/app/api/v1/catalog/route";
 import { getDatabaseHandle, getDb } from "@/lib/database/app-database";
 import { checkContract } from "../helpers/contract";
+import { stockItem } from "@/db/schema";
+import { demoShopCharges } from "@/lib/demo/shop";
+import { estimateSet } from "@/lib/money/estimate";
 
 // Outside a Next.js request `connection()` throws; here every call is a request of its own.
 vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typeof import("next/server")>()), connection: async () => undefined }));
 
 const TIRE_KEYS = [
   "sku", "brand", "line", "designation", "loadIndex", "loadIndexDual", "speedSymbol", "loadRange", "extraLoad",
-  "runFlat", "season", "terrain", "threePeak", "treadDepth32", "overallDiameterMm", "priceCents", "inStock",
+  "runFlat", "season", "terrain", "threePeak", "treadDepth32", "overallDiameterMm", "priceCents", "quantity", "inStock",
 ].sort();
 
 async function call(handler: (request: NextRequest) => Promise<Response>, path: string) {
@@ -50,6 +53,22 @@ describe("GET /api/v1/catalog", () => {
     expect(skus.every((sku, i) => i === 0 || (skus[i - 1] as string) < sku)).toBe(true);
   });
 
+  it("says how many of each tire can be sold now, in stock meaning one or more", async () => {
+    const { body } = await catalog("limit=500");
+    const onHand = new Map(
+      (await (await getDb()).select({ sku: stockItem.sku, quantityOnHand: stockItem.quantityOnHand }).from(stockItem)).map((row) => [row.sku, row.quantityOnHand]),
+    );
+    const items = body.items as { sku: string; quantity: number; inStock: boolean }[];
+    for (const tire of items) {
+      expect(tire.quantity, tire.sku).toBe(onHand.get(tire.sku));
+      expect(tire.inStock, tire.sku).toBe(tire.quantity >= 1);
+    }
+    // The demo shelf holds empty slots, single tires and several sets.
+    expect(items.some((tire) => tire.quantity === 0)).toBe(true);
+    expect(items.some((tire) => tire.quantity > 0 && tire.quantity < 4)).toBe(true);
+    expect(items.some((tire) => tire.quantity >= 8)).toBe(true);
+  });
+
   it.each(["limit=0", "limit=501", "limit=ten", "cursor=not-a-cursor"])("refuses %s with 400 invalid_parameter", async (query) => {
     const { status, body } = await catalog(query);
     expect(status).toBe(400);
@@ -61,14 +80,14 @@ describe("GET /api/v1/alternatives", () => {
   it("answers the published shape, with the shop's tolerance and reasons for every result", async () => {
     const { status, body } = await alternatives("size=285-50R20&loadIndex=112&speedSymbol=H&limit=5");
     expect(status).toBe(200);
-    expect(Object.keys(body).sort()).toEqual(["nearMisses", "nextCursor", "original", "results", "tolerancePct", "total"]);
+    expect(Object.keys(body).sort()).toEqual(["nearMisses", "nextCursor", "original", "quantity", "results", "tolerancePct", "total"]);
     // 285/50R20: 20 × 25.4 + 2 × 285 × 0.50 = 793 mm (nominal geometry).
     expect(body.original).toEqual({ designation: "285/50R20", overallDiameterMm: 793, loadIndex: 112, speedSymbol: "H", loadRange: null });
     expect(body.tolerancePct).toBe(3);
     expect(body.results).toHaveLength(5);
     expect(body.total).toBeGreaterThan(5);
     for (const tire of body.results) {
-      expect(Object.keys(tire).sort()).toEqual([...TIRE_KEYS, "diameterDiffPct", "notes", "reasons"].sort());
+      expect(Object.keys(tire).sort()).toEqual([...TIRE_KEYS, "diameterDiffPct", "estimate", "notes", "reasons"].sort());
       expect(Math.abs(tire.diameterDiffPct)).toBeLessThanOrEqual(3);
       expect(tire.reasons).toContain("same 20-inch rim");
     }
@@ -131,6 +150,8 @@ describe("GET /api/v1/alternatives", () => {
     ["size=LT265-75R16&loadIndex=123&loadIndexDual=999&speedSymbol=R", 422, "unknown_load_index"],
     ["size=285-50R20&loadIndex=119&speedSymbol=Z", 422, "unknown_speed_symbol"],
     [`size=${"2".repeat(2001)}&loadIndex=119&speedSymbol=S`, 414, "too_long"],
+    ["size=285-50R20&loadIndex=119&speedSymbol=S&quantity=0", 400, "invalid_parameter"],
+    ["size=285-50R20&loadIndex=119&speedSymbol=S&quantity=9", 400, "invalid_parameter"],
   ])("answers %s with %i %s", async (query, status, code) => {
     const response = await alternatives(query);
     expect(response.status).toBe(status);
@@ -139,7 +160,7 @@ describe("GET /api/v1/alternatives", () => {
   });
 
   it("never answers bad input with a server error", async () => {
-    const names = ["size", "loadIndex", "loadIndexDual", "speedSymbol", "loadRange", "runFlat", "tolerancePct", "season", "terrain", "threePeak", "brand", "minPriceCents", "maxPriceCents", "inStock", "sort", "limit", "cursor"];
+    const names = ["size", "loadIndex", "loadIndexDual", "speedSymbol", "loadRange", "runFlat", "tolerancePct", "season", "terrain", "threePeak", "brand", "minPriceCents", "maxPriceCents", "inStock", "quantity", "sort", "limit", "cursor"];
     const value = fc.oneof(fc.string({ maxLength: 12 }), fc.constantFrom("285-50R20", "119", "S", "E", "true", "3", "0", "-1", "1e9", "(Y)", "%", "null"));
     await fc.assert(
       fc.asyncProperty(fc.dictionary(fc.constantFrom(...names), value, { maxKeys: 8 }), async (params) => {
@@ -148,5 +169,66 @@ describe("GET /api/v1/alternatives", () => {
       }),
       { seed: 314, numRuns: 60 },
     );
+  });
+});
+
+describe("GET /api/v1/alternatives with a quantity", () => {
+  const base = "size=225-65R17&loadIndex=102&speedSymbol=H&tolerancePct=5&limit=500";
+  type Result = { sku: string; priceCents: number; quantity: number; inStock: boolean; estimate: Record<string, number> };
+
+  it("needs a set of four unless told otherwise, and prices each result out the door from the shop's charges", async () => {
+    const { status, body } = await alternatives(base);
+    expect(status).toBe(200);
+    expect(body.quantity).toBe(4);
+    expect(body.results.length).toBeGreaterThan(5);
+    for (const tire of body.results as Result[]) {
+      expect(tire.estimate).toEqual(estimateSet(tire.priceCents, 4, demoShopCharges));
+      expect(tire.inStock).toBe(tire.quantity >= 1);
+    }
+    // Worked through for one tire, from the demo shop's invented charges ($25.00 fitting, $4.00 disposal, $1.00 fee, 7.25 % on tires and services).
+    const tire = (body.results as Result[])[0]!;
+    const taxable = 4 * tire.priceCents + 4 * 2_500 + 4 * 400;
+    expect(tire.estimate).toEqual({
+      quantity: 4,
+      tiresCents: 4 * tire.priceCents,
+      servicesCents: 10_000,
+      feesCents: 2_000,
+      taxCents: Math.floor((taxable * 725 + 5_000) / 10_000),
+      totalCents: 4 * tire.priceCents + 10_000 + 2_000 + Math.floor((taxable * 725 + 5_000) / 10_000),
+    });
+  });
+
+  it.each([1, 2, 6, 8])("prices a set of %i", async (quantity) => {
+    const { body } = await alternatives(`${base}&quantity=${quantity}`);
+    expect(body.quantity).toBe(quantity);
+    for (const tire of body.results as Result[]) expect(tire.estimate).toEqual(estimateSet(tire.priceCents, quantity, demoShopCharges));
+  });
+
+  it.each([1, 2, 4, 6, 8])("keeps tires with at least %i on hand for inStock=true, those with fewer for inStock=false", async (quantity) => {
+    const all = await alternatives(`${base}&quantity=${quantity}`);
+    const enough = await alternatives(`${base}&quantity=${quantity}&inStock=true`);
+    const short = await alternatives(`${base}&quantity=${quantity}&inStock=false`);
+    expect((enough.body.results as Result[]).every((tire) => tire.quantity >= quantity)).toBe(true);
+    expect((short.body.results as Result[]).every((tire) => tire.quantity < quantity)).toBe(true);
+    expect(enough.body.total + short.body.total).toBe(all.body.total);
+    expect(enough.body.total).toBe((all.body.results as Result[]).filter((tire) => tire.quantity >= quantity).length);
+    expect(enough.body.total).toBeGreaterThan(0);
+    if (quantity > 1) expect(short.body.results.some((tire: Result) => tire.quantity > 0)).toBe(true);
+  });
+
+  it.each(["0", "9", "x", "2.5", "-1", "4x", "1e1"])("refuses quantity=%s with a clear 400 invalid_parameter", async (quantity) => {
+    const { status, body } = await alternatives(`${base}&quantity=${quantity}`);
+    expect(status).toBe(400);
+    expect(body.error).toMatchObject({
+      code: "invalid_parameter",
+      field: "quantity",
+      message: 'The parameter "quantity" is invalid: how many tires are needed, a whole number from 1 to 8.',
+    });
+  });
+
+  it("takes an empty quantity as the default", async () => {
+    const { status, body } = await alternatives(`${base}&quantity=`);
+    expect(status).toBe(200);
+    expect(body.quantity).toBe(4);
   });
 });

@@ -53,6 +53,8 @@ export type CatalogRow = Awaited<ReturnType<typeof loadWholeCatalog>>[number];
 export interface Search {
   original: OriginalInput;
   tolerancePct: number;
+  /** How many tires are needed: the stock filter's set size. */
+  quantity: number;
   filters: CatalogFilters;
   sort: FinderSort;
   limit: number;
@@ -70,7 +72,8 @@ function facts(designation: string, runFlatMark: boolean) {
   return { size, service: serviceType(size), diameter: sizeGeometry(size).overallDiameterMm, runFlat: size.runFlat || runFlatMark };
 }
 
-export function passesFilters(row: CatalogRow, filters: CatalogFilters): boolean {
+/** `quantity`: the set size the stock filter asks for (inStock: at least that many on hand; not inStock: fewer). */
+export function passesFilters(row: CatalogRow, filters: CatalogFilters, quantity: number): boolean {
   return (
     (filters.season === undefined || row.season === filters.season) &&
     (filters.terrain === undefined || row.terrain === filters.terrain) &&
@@ -78,7 +81,7 @@ export function passesFilters(row: CatalogRow, filters: CatalogFilters): boolean
     (filters.brand === undefined || row.brand.toLowerCase() === filters.brand.toLowerCase()) &&
     (filters.minPriceCents === undefined || row.priceCents >= filters.minPriceCents) &&
     (filters.maxPriceCents === undefined || row.priceCents <= filters.maxPriceCents) &&
-    (filters.inStock === undefined || row.quantityOnHand > 0 === filters.inStock)
+    (filters.inStock === undefined || row.quantityOnHand >= quantity === filters.inStock)
   );
 }
 
@@ -93,7 +96,7 @@ export function bruteForce(catalog: readonly CatalogRow[], search: Search) {
   const results: Judged[] = [];
   const nearMisses: Judged[] = [];
   for (const row of catalog) {
-    if (row.retired || !passesFilters(row, search.filters)) continue;
+    if (row.retired || !passesFilters(row, search.filters, search.quantity)) continue;
     const candidate = facts(row.designation, row.lineRunFlat);
     const sameRimAndBuild = candidate.size.rimDiameterIn === reference.size.rimDiameterIn && candidate.size.construction === reference.size.construction;
     const sameService = reference.service !== "T" && candidate.service === reference.service;
@@ -131,6 +134,8 @@ export function arbitrarySearch(catalog: readonly CatalogRow[]): fc.Arbitrary<Se
     fc.record({ brand: fc.constantFrom(...brands, "Nobrand").map((name) => (name.length % 2 ? name.toLowerCase() : name)) }),
     fc.record({ minPriceCents: fc.constantFrom(priceAt(0.2), priceAt(0.5)), maxPriceCents: fc.constantFrom(priceAt(0.6), priceAt(0.9)) }),
     fc.record({ inStock: fc.boolean(), season: fc.constantFrom(...SEASONS) }),
+    // Alone, the stock filter for a set of one reads the fitments' own counts; for more, it counts items.
+    { weight: 3, arbitrary: fc.record({ inStock: fc.boolean() }) },
   );
   const heavy = (designation: string) => /^(LT|ST)|LT$|C$/.test(designation);
   return fc
@@ -148,6 +153,7 @@ export function arbitrarySearch(catalog: readonly CatalogRow[]): fc.Arbitrary<Se
       runFlat: fc.constantFrom(false, false, false, true),
       tolerancePct: fc.oneof(fc.constantFrom(1, 3, 5), fc.double({ min: 1, max: 5, noNaN: true })),
       filters,
+      quantity: fc.constantFrom(1, 1, 2, 4, 4, 6, 8),
       sort: fc.constantFrom<FinderSort>("diameter", "diameter", "price", "loadMargin"),
       limit: fc.constantFrom(11, 50, 500),
     })

@@ -4,6 +4,8 @@ import { findAlternatives, type AlternativesOptions } from "@/lib/alternatives/f
 import { readOriginal, type OriginalInput } from "@/lib/alternatives/original";
 import { buildStockRow, type StockItemInput } from "@/lib/stock/build-stock-row";
 import { insertStockRows } from "@/lib/stock/insert-stock-rows";
+import { NO_CHARGES } from "@/lib/shop/charges";
+import { DEFAULT_SET_SIZE } from "@/lib/tire";
 
 export interface FixtureItem extends Partial<StockItemInput> {
   sku: string;
@@ -41,7 +43,7 @@ export async function seedFixture(db: Database, items: readonly FixtureItem[]): 
 export async function search(db: Database, input: OriginalInput, options: Partial<AlternativesOptions> = {}) {
   const read = readOriginal(input);
   if (!read.ok) throw new Error(read.message);
-  return findAlternatives(db, read.original, { tolerancePct: 3, sort: "diameter", limit: 50, cursor: null, ...options });
+  return findAlternatives(db, read.original, { tolerancePct: 3, quantity: DEFAULT_SET_SIZE, charges: NO_CHARGES, sort: "diameter", limit: 50, cursor: null, ...options });
 }
 
 export const skus = (tires: readonly { sku: string }[]) => tires.map((tire) => tire.sku);

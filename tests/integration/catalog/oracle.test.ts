@@ -8,10 +8,14 @@ import { judgedCandidate } from "@/lib/alternatives/judged-candidate";
 import { readOriginal, type Original } from "@/lib/alternatives/original";
 import { cardTireVerdict } from "@/lib/fit-cards/tire-verdict";
 import { isNearMiss, judgeCandidate } from "@/lib/tire";
+import { estimateSet } from "@/lib/money/estimate";
+import { demoShopCharges } from "@/lib/demo/shop";
 import { openTestDatabase, type TestDatabase, testDatabaseKinds } from "../helpers/test-database";
 import { addSingleRatedTruckTires, arbitrarySearch, bruteForce, loadWholeCatalog, passesFilters, type CatalogRow, type Search } from "./brute-force";
 
 const responsesByKind = new Map<string, string[]>();
+
+const demoCharges = demoShopCharges;
 
 function originalOf(search: Search): Original {
   const read = readOriginal(search.original);
@@ -20,7 +24,15 @@ function originalOf(search: Search): Original {
 }
 
 async function allPages(database: TestDatabase, search: Search) {
-  const options: AlternativesOptions = { ...search.filters, tolerancePct: search.tolerancePct, sort: search.sort, limit: search.limit, cursor: null };
+  const options: AlternativesOptions = {
+    ...search.filters,
+    tolerancePct: search.tolerancePct,
+    quantity: search.quantity,
+    charges: demoCharges,
+    sort: search.sort,
+    limit: search.limit,
+    cursor: null,
+  };
   const pages = [];
   for (;;) {
     const page = await findAlternatives(database.db, originalOf(search), options);
@@ -78,7 +90,7 @@ describe.each(testDatabaseKinds)("the finder against a brute-force reading of th
       await fc.assert(
         fc.asyncProperty(arbitrarySearch(catalog), async (search) => {
           const expected = bruteForce(catalog, search);
-          const judged = judgeAll(catalog, search, (row) => passesFilters(row, search.filters));
+          const judged = judgeAll(catalog, search, (row) => passesFilters(row, search.filters, search.quantity));
           const pages = await allPages(database, search);
           responses.push(JSON.stringify(pages));
           const results = pages.flatMap((page) => page.results);
@@ -90,6 +102,13 @@ describe.each(testDatabaseKinds)("the finder against a brute-force reading of th
           expect(new Set(results.map((tire) => tire.sku))).toEqual(judged.qualifying);
           expect(results.map((tire) => tire.diameterDiffPct)).toEqual(expected.results.map((row) => row.diffPct));
           expect(results.every((tire) => tire.reasons.length >= 5)).toBe(true);
+          // Each result says how many are on hand and what the search's quantity costs.
+          const rows = new Map(catalog.map((row) => [row.sku, row]));
+          for (const tire of results) {
+            expect(tire.quantity).toBe(rows.get(tire.sku)!.quantityOnHand);
+            expect(tire.inStock).toBe(tire.quantity >= 1);
+            expect(tire.estimate).toEqual(estimateSet(tire.priceCents, search.quantity, demoCharges));
+          }
           const nearMisses = pages[0]?.nearMisses ?? [];
           expect(nearMisses.map((tire) => tire.sku)).toEqual(expected.nearMisses.map((row) => row.sku));
           expect(nearMisses.every((tire) => tire.failed.length === 1)).toBe(true);
@@ -97,7 +116,6 @@ describe.each(testDatabaseKinds)("the finder against a brute-force reading of th
           expect(expected.nearMissCount).toBe(judged.near.size);
           // A Fit card judges a tire exactly as the finder does.
           const original = originalOf(search);
-          const rows = new Map(catalog.map((row) => [row.sku, row]));
           for (const tire of [...results, ...nearMisses]) {
             const card = cardTireVerdict(original, rows.get(tire.sku)!, search.tolerancePct);
             expect(card.equalOrBetter).toBe("reasons" in tire);

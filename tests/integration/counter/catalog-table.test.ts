@@ -48,12 +48,12 @@ describe.each(testDatabaseKinds)("the Counter's catalog table on %s", (kind) => 
     expect(skus(all).slice(-2)).toEqual(["Z-upper", "a-lower"]);
   });
 
-  it("shows the columns a row needs, with the line's season and terrain", async () => {
+  it("shows the columns a row needs, with the line's season and terrain, and how many can be sold now beside the count staff edit", async () => {
     const { rows } = await getCatalogTablePage(database.db, filters({ q: "a-lower" }));
     expect(rows).toEqual([
       {
         sku: "a-lower", brand: "Testwell", line: "Fixture trail", designation: "LT265/75R16", loadIndex: 123, loadIndexDual: 120,
-        speedSymbol: "R", loadRange: "E", extraLoad: false, season: "all-season", terrain: "all-terrain", priceCents: 25_000, quantity: 4,
+        speedSymbol: "R", loadRange: "E", extraLoad: false, season: "all-season", terrain: "all-terrain", priceCents: 25_000, quantity: 4, sellable: 4,
       },
     ]);
   });

@@ -8,6 +8,7 @@ import { findAlternatives } from "@/lib/alternatives/find-alternatives";
 import { readOriginal } from "@/lib/alternatives/original";
 import { measurableSizeFromSlug, sizeGeometry, speedSymbolRank } from "@/lib/tire";
 import { migrationsBefore } from "../helpers/migrations-before";
+import { NO_CHARGES } from "@/lib/shop/charges";
 
 describe("a database that had stock before fitments", () => {
   let handle: DatabaseHandle | undefined;
@@ -38,7 +39,7 @@ describe("a database that had stock before fitments", () => {
     expect(rows).toEqual([{ item_count: 2, in_stock_count: 1 }]);
     const read = readOriginal({ size: "205/55R16", loadIndex: 91, speedSymbol: "H" });
     if (!read.ok) throw new Error(read.message);
-    const found = await findAlternatives(handle.db, read.original, { tolerancePct: 3, sort: "diameter", limit: 50, cursor: null });
+    const found = await findAlternatives(handle.db, read.original, { tolerancePct: 3, quantity: 4, charges: NO_CHARGES, sort: "diameter", limit: 50, cursor: null });
     expect(found.results.map((tire) => tire.sku)).toEqual(["OLD-2", "OLD-1"]);
     expect(found.total).toBe(2);
   });

@@ -1,6 +1,8 @@
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { fitCard, stockItem, user } from "@/db/schema";
+import { fitCard, shop, stockItem, user } from "@/db/schema";
+import { demoShop, demoShopCharges } from "@/lib/demo/shop";
+import { estimateSet } from "@/lib/money/estimate";
 import { newFitCardSchema } from "@/lib/fit-cards/card-input";
 import { search } from "../catalog/fixtures";
 import { createFitCard } from "@/lib/fit-cards/create-card";
@@ -80,6 +82,35 @@ describe.each(testDatabaseKinds)("Fit cards on %s", (kind) => {
     expect(dual?.reasons).toEqual(found?.reasons);
     expect(dual?.notes).toEqual(found?.notes);
     expect(single?.reasons).toEqual(finder.nearMisses.find((tire) => tire.sku === "FC-SINGLE")?.failed);
+  });
+
+  it("shows each tire's quantity as it is now and what a set of four costs at today's price", async () => {
+    await database.db.insert(shop).values(demoShop);
+    const saved = await createFitCard(database.db, author.id, cardInput());
+    if (!saved.ok) throw new Error(saved.message);
+    const read = async () => {
+      const lookup = await readFitCard(database.db, saved.slug);
+      if (lookup.status !== "found") throw new Error(lookup.status);
+      return lookup.card;
+    };
+    const card = await read();
+    expect(card.quantity).toBe(4);
+    expect(card.tires.map((tire) => [tire.sku, tire.quantity, tire.inStock])).toEqual([
+      ["FC-17", 4, true],
+      ["FC-18", 4, true],
+    ]);
+    for (const tire of card.tires) expect(tire.estimate).toEqual(estimateSet(tire.priceCents, 4, demoShopCharges));
+
+    // Read live, never frozen with the card: a sale, a price change, a retirement.
+    await database.db.update(stockItem).set({ quantityOnHand: 1, priceCents: 18_299 }).where(eq(stockItem.sku, "FC-18"));
+    const later = await read();
+    expect(later.tires[1]).toMatchObject({ quantity: 1, inStock: true, priceCents: 18_299, priceCentsAtSave: 17_900 });
+    // 4 × $182.99 with the demo shop's charges: 73,196 + 10,000 + 2,000 + 6,148 tax (tests/unit/money/estimate.test.ts).
+    expect(later.tires[1]?.estimate).toEqual({ quantity: 4, tiresCents: 73_196, servicesCents: 10_000, feesCents: 2_000, taxCents: 6_148, totalCents: 91_344 });
+    await database.db.update(stockItem).set({ retired: true }).where(eq(stockItem.sku, "FC-18"));
+    expect((await read()).tires[1]).toMatchObject({ quantity: 0, inStock: false, stillStocked: false });
+    await database.db.update(stockItem).set({ retired: false, quantityOnHand: 4, priceCents: 17_900 }).where(eq(stockItem.sku, "FC-18"));
+    await database.db.delete(shop);
   });
 
   it("keeps internal fields out of the public card", async () => {

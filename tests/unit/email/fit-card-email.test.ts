@@ -24,6 +24,7 @@ const tire = (overrides: Partial<CardTire>): CardTire => ({
   treadDepth32: 10,
   overallDiameterMm: 634.3,
   priceCents: 14_900,
+  quantity: 6,
   inStock: true,
   diameterDiffPct: 0,
   equalOrBetter: true,
@@ -31,6 +32,7 @@ const tire = (overrides: Partial<CardTire>): CardTire => ({
   notes: [],
   priceCentsAtSave: 15_900,
   stillStocked: true,
+  estimate: { quantity: 4, tiresCents: 59_600, servicesCents: 0, feesCents: 0, taxCents: 0, totalCents: 59_600 },
   ...overrides,
 });
 
@@ -52,6 +54,7 @@ const card: PublicFitCard = {
     season: null,
   },
   tolerancePct: 3,
+  quantity: 4,
   note: null,
   tires: [tire({}), tire({ sku: "OK-2", brand: "Okenby", line: "Ridge Sport", designation: "225/40R18", loadIndex: 92, speedSymbol: "Y", extraLoad: false, priceCents: 17_900 })],
 };

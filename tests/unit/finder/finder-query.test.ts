@@ -1,11 +1,21 @@
 import { describe, expect, it } from "vitest";
-import { alternativesSearch, finderSearch, readFinderQuery } from "@/lib/finder/finder-query";
+import { alternativesSearch, finderSearch, readFinderQuery, setSizeOf } from "@/lib/finder/finder-query";
 import { placardFor, readOriginalMarking } from "@/lib/finder/original-marking";
 
 describe("the finder's address", () => {
   it("round-trips its state through the query string", () => {
-    const query = readFinderQuery({ size: "285-50R20", loadIndex: "119", speedSymbol: "S", season: "winter", inStock: "1", tolerancePct: "2.5" });
+    const query = readFinderQuery({ size: "285-50R20", loadIndex: "119", speedSymbol: "S", season: "winter", inStock: "1", tolerancePct: "2.5", quantity: "2" });
+    expect(query.quantity).toBe(2);
     expect(readFinderQuery(Object.fromEntries(new URLSearchParams(finderSearch(query))))).toEqual(query);
+  });
+
+  it("keeps a set size the finder offers and drops any other to the default set of four", () => {
+    for (const quantity of ["1", "2", "4", "6"]) expect(setSizeOf(readFinderQuery({ quantity }))).toBe(Number(quantity));
+    for (const quantity of ["0", "3", "8", "9", "x", "2.5", "-2", "", "1e3"]) {
+      expect(readFinderQuery({ size: "285-50R20", quantity })).toEqual({ size: "285-50R20" });
+      expect(setSizeOf(readFinderQuery({ quantity }))).toBe(4);
+    }
+    expect(readFinderQuery({ quantity: ["6", "2"] }).quantity).toBe(6);
   });
 
   it("drops malformed or unknown values instead of failing the page", () => {
@@ -19,7 +29,9 @@ describe("the finder's address", () => {
       size: "285-50R20",
       loadIndex: "119",
       speedSymbol: "S",
+      quantity: "4",
     });
+    expect(alternativesSearch(readFinderQuery({ size: "285-50R20", quantity: "6" }), { loadIndex: null, loadIndexDual: null }).get("quantity")).toBe("6");
   });
 
   it("turns the address's short flags into the API's true", () => {

@@ -85,4 +85,27 @@ describe("the Ask the shop form", () => {
     expect(alert.textContent).toBe(message);
     await waitFor(() => expect(document.activeElement).toBe(alert));
   });
+
+  it("names the page's catalog tires with how many are on hand against the number asked for, and sends their SKUs", async () => {
+    const fetchMock = answer(201, { id: 18, status: "new" });
+    const catalogTires = [
+      { sku: "QX-1", label: "Quensal Aldermoor Tour 225/65R17 102H", quantity: 6 },
+      { sku: "BX-2", label: "Bexford Ridge HT 225/65R17 102H", quantity: 2 },
+      { sku: "OK-3", label: "Okenby Trail 225/65R17 106T", quantity: 0 },
+    ];
+    await act(async () => {
+      render(<QuoteForm context={{ source: "finder", skus: ["QX-1", "BX-2", "OK-3"] }} tires="Replacing 225/65R17 102H" catalogTires={catalogTires} quantity={4} onCancel={() => undefined} />);
+    });
+    const words = () => [...document.querySelectorAll("[data-stock]")].map((line) => line.textContent);
+    expect(screen.getByRole("heading", { name: "On hand at the shop now, for 4 tires" })).toBeTruthy();
+    expect(words()).toEqual(["6 on hand", "2 on hand — fewer than the 4 you need", "none on hand: ask the shop"]);
+    fireEvent.change(screen.getByLabelText("How many tires (1–16)"), { target: { value: "2" } });
+    expect(words()).toEqual(["6 on hand", "2 on hand", "none on hand: ask the shop"]);
+    fireEvent.change(screen.getByLabelText("How many tires (1–16)"), { target: { value: "8" } });
+    expect(words()[0]).toBe("6 on hand — fewer than the 8 you need");
+    fillIn();
+    await send();
+    const [, init] = sends(fetchMock)[0] as unknown as [string, RequestInit];
+    expect(JSON.parse(String(init.body))).toMatchObject({ source: "finder", quantity: 8, skus: ["QX-1", "BX-2", "OK-3"] });
+  });
 });

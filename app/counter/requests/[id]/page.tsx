@@ -12,6 +12,8 @@ import { getDb } from "@/lib/database/app-database";
 import { requirePageUser } from "@/lib/auth/page-user";
 import { getQuoteRequest, requestIdSchema } from "@/lib/quotes/queries";
 import { readShopTimeZone } from "@/lib/shop/queries";
+import { readQuoteLines } from "@/lib/quotes/quote-lines";
+import { RequestLines } from "@/components/counter/request-lines";
 
 export const metadata: Metadata = { title: "Request · Counter", robots: { index: false } };
 
@@ -25,6 +27,7 @@ export default async function RequestPage({ params }: { params: Promise<{ id: st
   const db = await getDb();
   const [request, timeZone] = await Promise.all([getQuoteRequest(db, id.data), readShopTimeZone(db)]);
   if (!request) notFound();
+  const lines = await readQuoteLines(db, request.id, request.quantity);
   return (
     <section className="flex flex-col gap-6">
       <Link href="/counter/requests" prefetch={false} className="inline-flex min-h-11 items-center self-start font-semibold text-accent underline underline-offset-4">
@@ -41,6 +44,7 @@ export default async function RequestPage({ params }: { params: Promise<{ id: st
       </div>
       <RequestStatusButtons requestId={request.id} status={request.status} />
       <RequestFields request={request} timeZone={timeZone} />
+      <RequestLines lines={lines} quantity={request.quantity} />
       <section aria-labelledby="replies-heading" className="flex flex-col gap-3">
         <h2 id="replies-heading" className="text-xl font-semibold">
           Replies
