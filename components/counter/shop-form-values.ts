@@ -2,19 +2,13 @@ import { centsToDollarsText, parseDollars } from "@/lib/money/money";
 import { applySettingsChanges, settingChanges, type SettingChange } from "@/lib/shop/settings-changes";
 import type { ShopSettings, ShopSettingsChanges } from "@/lib/shop/settings-schema";
 import { MAX_CHARGE_CENTS } from "@/lib/shop/limits";
+import type { ShopContact } from "@/lib/shop/queries";
 import { parseTaxPercent, taxPercentText } from "@/lib/shop/tax-percent";
 import { closedDatesProblem, dayHoursProblem } from "@/lib/shop/week-rules";
 import { WEEKDAYS, type Weekday } from "@/lib/tire";
 
 /** The settings as the form holds them: text as typed, charges in dollars, the tax rate in percent. */
-export interface ShopFormValues {
-  name: string;
-  streetAddress: string;
-  town: string;
-  region: string;
-  postalCode: string;
-  phone: string;
-  email: string;
+export interface ShopFormValues extends Omit<ShopContact, "openingHours"> {
   timeZone: string;
   hours: Record<Weekday, [string, string][]>;
   closedDates: string[];
