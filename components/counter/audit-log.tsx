@@ -16,6 +16,11 @@ const actionLabels: Record<AuditAction, string> = {
   line_changed: "Line changed",
   fit_card_emailed: "Fit card e-mailed",
   request_replied: "Request answered",
+  offer_sent: "Offer sent",
+  offer_withdrawn: "Offer withdrawn",
+  fitting_fitted: "Fitting done",
+  fitting_no_show: "Fitting missed",
+  fitting_cancelled: "Fitting cancelled",
 };
 
 function pageHref(query: AuditQuery, page: number): string {

@@ -17,6 +17,7 @@ function listHref(status: QuoteStatus | undefined, page = 1): string {
 const statusBadge: Record<QuoteStatus, string> = {
   new: "border-accent bg-accent-soft text-ink",
   answered: "border-rule bg-sheet text-ink",
+  offered: "border-ink bg-sheet text-ink",
   closed: "border-rule bg-paper text-ink-soft",
 };
 

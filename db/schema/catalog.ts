@@ -22,7 +22,8 @@ export const SIZE_KINDS = ["metric", "flotation"] as const;
 export const TRACTION_GRADES = ["AA", "A", "B", "C"] as const;
 export const TEMPERATURE_GRADES = ["A", "B", "C"] as const;
 
-const oneOf = (values: readonly string[]) => sql.raw(`(${values.map((v) => `'${v}'`).join(", ")})`);
+/** A CHECK's list of allowed texts, written from the product's own list. */
+export const oneOf = (values: readonly string[]) => sql.raw(`(${values.map((v) => `'${v}'`).join(", ")})`);
 
 export const brand = pgTable(
   "brand",
@@ -156,6 +157,8 @@ export const stockItem = pgTable(
     overallDiameterMm: doublePrecision().notNull(),
     priceCents: integer().notNull(),
     quantityOnHand: integer().notNull(),
+    /** Tires on hand held for booked fittings (offers accepted, holds not yet released): they are not for sale. */
+    heldQuantity: integer().notNull().default(0),
     retired: boolean().notNull().default(false),
     /** New tread depth in 32nds of an inch, when it differs from its line's. */
     treadDepth32: smallint(),
@@ -170,7 +173,7 @@ export const stockItem = pgTable(
     // diameter at once, skipping items of other fitments. Each also holds what the filters and the
     // join read, so that the finder reads the index alone.
     index("stock_item_fitment")
-      .on(table.fitmentId, table.priceCents, sql`${table.sku} collate "C"`, table.lineId, table.quantityOnHand, table.id)
+      .on(table.fitmentId, table.priceCents, sql`${table.sku} collate "C"`, table.lineId, table.quantityOnHand, table.heldQuantity, table.id)
       .where(sql`not ${table.retired}`),
     index("stock_item_diameter")
       .on(
@@ -183,6 +186,7 @@ export const stockItem = pgTable(
         table.fitmentId,
         table.lineId,
         table.quantityOnHand,
+        table.heldQuantity,
         table.id,
       )
       .where(sql`not ${table.retired}`),
@@ -223,6 +227,7 @@ export const stockItem = pgTable(
     check("stock_item_diameter", sql`${table.overallDiameterMm} > 0`),
     check("stock_item_price", sql`${table.priceCents} >= 0`),
     check("stock_item_quantity", sql`${table.quantityOnHand} >= 0`),
+    check("stock_item_held", sql`${table.heldQuantity} >= 0 and ${table.heldQuantity} <= ${table.quantityOnHand}`),
     check("stock_item_tread_depth", sql`${table.treadDepth32} between 1 and 40`),
   ],
 );

@@ -6,3 +6,4 @@ export * from "./fit-cards";
 export * from "./email";
 export * from "./quotes";
 export * from "./rate-limit";
+export * from "./offers";

@@ -1,5 +1,5 @@
 import { sql } from "drizzle-orm";
-import { boolean, check, doublePrecision, integer, jsonb, pgTable, serial, text, timestamp } from "drizzle-orm/pg-core";
+import { boolean, check, doublePrecision, integer, jsonb, pgTable, serial, smallint, text, timestamp } from "drizzle-orm/pg-core";
 import { DEFAULT_WEEKLY_HOURS, type WeeklyHours } from "../../lib/tire/vocabulary";
 
 /**
@@ -31,12 +31,24 @@ export const shop = pgTable(
     taxRateBp: integer().notNull().default(0),
     /** Whether fitting and disposal are taxed as well as the tires. */
     taxServices: boolean().notNull().default(false),
+    /** How many sets can be fitted at once. */
+    fittingBays: smallint().notNull().default(2),
+    /** How long one set takes, also the step between fitting starts. */
+    fittingMinutes: smallint().notNull().default(60),
+    /** The earliest fitting start a driver can book, in minutes from now. */
+    leadMinutes: integer().notNull().default(120),
+    /** Until how many hours before the start a driver can cancel a fitting from the offer page. */
+    cancelCutoffHours: smallint().notNull().default(24),
     updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
   (table) => [
     check("shop_tolerance_range", sql`${table.defaultTolerancePct} between 1 and 5`),
     check("shop_charges", sql`${table.fittingPerTireCents} >= 0 and ${table.disposalPerTireCents} >= 0 and ${table.tireFeePerTireCents} >= 0`),
     check("shop_tax_rate", sql`${table.taxRateBp} between 0 and 10000`),
+    check(
+      "shop_fittings",
+      sql`${table.fittingBays} between 1 and 20 and ${table.fittingMinutes} between 15 and 480 and ${table.leadMinutes} between 0 and 20160 and ${table.cancelCutoffHours} between 0 and 168`,
+    ),
   ],
 );
 

@@ -8,12 +8,14 @@ export const ofBrand = eq(tireLine.brandId, brand.id);
 /**
  * How many of an item can be sold now: a whole number ≥ 0, the one definition every query reads (a
  * Tire's `quantity`, the finder's stock filter, the Counter's in/out filter, Fit cards, quote lines).
- * Today it is the quantity on hand; when tires held for customers come off it, this is the one edit.
- * Keep it an expression over stock_item alone, so the finder's item reads stay within its indexes.
- * stock_fitment.in_stock_count (the triggers of migration 0007) counts the items where it is ≥ 1:
- * change those triggers with it (tests/integration/catalog/fitments.test.ts compares the two).
+ * It is the quantity on hand less the tires held for booked fittings (the database keeps the held
+ * count within what is on hand, so it is never below 0; lib/fittings/holds.ts is the same rule in
+ * TypeScript). Keep it an expression over stock_item alone, so the finder's item reads stay within
+ * its indexes. stock_fitment.in_stock_count (the trigger function of migration 0013) counts the
+ * items where it is ≥ 1: change the two together (tests/integration/catalog/fitments.test.ts
+ * compares them).
  */
-export const sellableQuantity = sql<number>`${stockItem.quantityOnHand}`.mapWith(Number);
+export const sellableQuantity = sql<number>`(${stockItem.quantityOnHand} - ${stockItem.heldQuantity})`.mapWith(Number);
 
 /** What the rules read from a candidate, besides what a Tire shows. */
 export const ruleFactColumns = {

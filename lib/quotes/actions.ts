@@ -2,7 +2,6 @@
 
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
-import { QUOTE_STATUSES } from "@/db/schema";
 import { withAction } from "@/lib/auth/action";
 import { multiLineText } from "@/lib/validation/text";
 import { requestIdSchema } from "./queries";
@@ -12,7 +11,8 @@ import { formatCount } from "@/lib/format/format";
 
 const statusChangeSchema = z.object({
   id: requestIdSchema,
-  status: z.enum(QUOTE_STATUSES, { error: "choose new, answered or closed" }),
+  // "offered" is set by sending an offer, never by hand.
+  status: z.enum(["new", "answered", "closed"], { error: "choose new, answered or closed" }),
 });
 
 const replySchema = z.object({

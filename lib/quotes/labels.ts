@@ -1,8 +1,8 @@
 import type { QuoteSource, QuoteStatus } from "@/db/schema";
 
-export const statusLabels: Record<QuoteStatus, string> = { new: "New", answered: "Answered", closed: "Closed" };
+export const statusLabels: Record<QuoteStatus, string> = { new: "New", answered: "Answered", offered: "Offered", closed: "Closed" };
 
-export const sourceLabels: Record<QuoteSource, string> = { "fit-card": "Fit card", "size-sheet": "Size sheet", finder: "Replacement finder" };
+export const sourceLabels: Record<QuoteSource, string> = { "fit-card": "Fit card", "size-sheet": "Size sheet", finder: "Replacement finder", counter: "At the counter" };
 
 /** Where the request was sent from, as a link staff can open, when the page still exists. */
 export function sourceHref(source: QuoteSource, reference: string | null): string | null {

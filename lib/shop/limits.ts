@@ -6,3 +6,11 @@ export const MAX_CHARGE_CENTS = 100_000;
  * sales taxes stay below it everywhere (common practice; rates change, so it is a warning only).
  */
 export const HIGH_TAX_RATE_BP = 1_500;
+
+/** The ranges of the fitting settings; the database's check (shop_fittings) holds the same numbers. */
+export const FITTING_LIMITS = {
+  bays: { min: 1, max: 20 },
+  minutes: { min: 15, max: 480 },
+  leadMinutes: { min: 0, max: 20_160 },
+  cancelCutoffHours: { min: 0, max: 168 },
+} as const;

@@ -59,6 +59,10 @@ export function settingChanges(before: ShopSettings, after: ShopSettings): Setti
   }
   push("taxRateBp", before.taxRateBp, after.taxRateBp, `tax rate ${formatTaxRate(before.taxRateBp)} → ${formatTaxRate(after.taxRateBp)}`);
   push("taxServices", before.taxServices, after.taxServices, `fitting and disposal ${taxedText(before.taxServices)} → ${taxedText(after.taxServices)}`);
+  push("fittingBays", before.fittingBays, after.fittingBays, `fitting bays ${before.fittingBays} → ${after.fittingBays}`);
+  push("fittingMinutes", before.fittingMinutes, after.fittingMinutes, `minutes per fitting ${before.fittingMinutes} → ${after.fittingMinutes}`);
+  push("leadMinutes", before.leadMinutes, after.leadMinutes, `earliest booking ${before.leadMinutes} → ${after.leadMinutes} minutes ahead`);
+  push("cancelCutoffHours", before.cancelCutoffHours, after.cancelCutoffHours, `online cancelling until ${before.cancelCutoffHours} → ${after.cancelCutoffHours} hours before`);
   return changes;
 }
 

@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { WEEKDAYS, type Weekday } from "@/lib/tire";
 import { lineText } from "@/lib/validation/text";
-import { MAX_CHARGE_CENTS } from "./limits";
+import { FITTING_LIMITS, MAX_CHARGE_CENTS } from "./limits";
 import { MAX_TAX_RATE_BP } from "./tax-percent";
 import { isTimeZoneName, TIME_ZONE_RULE } from "./time-zone";
 import { CLOCK_PATTERN, CLOCK_RULE, closedDatesProblem, dayHoursProblem, MAX_CLOSED_DATES } from "./week-rules";
@@ -9,6 +9,7 @@ import { CLOCK_PATTERN, CLOCK_RULE, closedDatesProblem, dayHoursProblem, MAX_CLO
 const SETTINGS_FIELDS = [
   "name", "address", "phone", "email", "timeZone", "hours", "closedDates", "tolerancePct",
   "fittingPerTireCents", "disposalPerTireCents", "tireFeePerTireCents", "taxRateBp", "taxServices",
+  "fittingBays", "fittingMinutes", "leadMinutes", "cancelCutoffHours",
 ] as const;
 const ADDRESS_FIELDS = ["streetAddress", "town", "region", "postalCode"] as const;
 
@@ -94,6 +95,18 @@ export const shopSettingsChangesSchema = z
     tireFeePerTireCents: cents("the tire fee per new tire"),
     taxRateBp: wholeNumber(`the tax rate is whole basis points from 0 to ${MAX_TAX_RATE_BP}: 725 for 7.25 %`, 0, MAX_TAX_RATE_BP),
     taxServices: z.boolean({ error: "taxServices is true (fitting and disposal are taxed) or false" }),
+    fittingBays: wholeNumber(`fittingBays is how many sets can be fitted at once, a whole number from 1 to ${FITTING_LIMITS.bays.max}`, 1, FITTING_LIMITS.bays.max),
+    fittingMinutes: wholeNumber(
+      `fittingMinutes is how long one set takes, whole minutes from ${FITTING_LIMITS.minutes.min} to ${FITTING_LIMITS.minutes.max}, e.g. 60`,
+      FITTING_LIMITS.minutes.min,
+      FITTING_LIMITS.minutes.max,
+    ),
+    leadMinutes: wholeNumber(`leadMinutes is the earliest start from now, whole minutes from 0 to ${FITTING_LIMITS.leadMinutes.max} (14 days)`, 0, FITTING_LIMITS.leadMinutes.max),
+    cancelCutoffHours: wholeNumber(
+      `cancelCutoffHours is until how many hours before a fitting a driver can cancel online, from 0 to ${FITTING_LIMITS.cancelCutoffHours.max}`,
+      0,
+      FITTING_LIMITS.cancelCutoffHours.max,
+    ),
   })
   .partial()
   .catchall(unknownKey(`not a setting of the shop: remove it (the settings are ${SETTINGS_FIELDS.join(", ")})`))
@@ -126,6 +139,14 @@ export const shopSettingsSchema = z.object({
   taxRateBp: z.number().int(),
   /** Whether fitting and disposal are taxed as well as the tires. */
   taxServices: z.boolean(),
+  /** How many sets can be fitted at once. */
+  fittingBays: z.number().int(),
+  /** Minutes one set takes; also the step between fitting starts. */
+  fittingMinutes: z.number().int(),
+  /** The earliest start a driver can book, in minutes from now. */
+  leadMinutes: z.number().int(),
+  /** A driver can cancel a fitting online until this many hours before it starts. */
+  cancelCutoffHours: z.number().int(),
 });
 
 export type ShopSettings = z.infer<typeof shopSettingsSchema>;

@@ -19,6 +19,10 @@ const settingsColumns = {
   tireFeePerTireCents: shop.tireFeePerTireCents,
   taxRateBp: shop.taxRateBp,
   taxServices: shop.taxServices,
+  fittingBays: shop.fittingBays,
+  fittingMinutes: shop.fittingMinutes,
+  leadMinutes: shop.leadMinutes,
+  cancelCutoffHours: shop.cancelCutoffHours,
 };
 
 type SettingsRow = { [K in keyof typeof settingsColumns]: (typeof settingsColumns)[K]["_"]["data"] };
@@ -26,11 +30,13 @@ type SettingsRow = { [K in keyof typeof settingsColumns]: (typeof settingsColumn
 function settingsOf(row: SettingsRow): ShopSettings {
   const { name, streetAddress, town, region, postalCode, phone, email, timeZone, hours, closedDates, tolerancePct } = row;
   const { fittingPerTireCents, disposalPerTireCents, tireFeePerTireCents, taxRateBp, taxServices } = row;
+  const { fittingBays, fittingMinutes, leadMinutes, cancelCutoffHours } = row;
   // jsonb keeps an object's keys in its own order: answer the week Monday first.
   const week = Object.fromEntries(WEEKDAYS.map((day) => [day, hours[day] ?? []])) as WeeklyHours;
   return {
     name, address: { streetAddress, town, region, postalCode }, phone, email, timeZone, hours: week, closedDates, tolerancePct,
     fittingPerTireCents, disposalPerTireCents, tireFeePerTireCents, taxRateBp, taxServices,
+    fittingBays, fittingMinutes, leadMinutes, cancelCutoffHours,
   };
 }
 

@@ -56,17 +56,30 @@ export const isSku = (text: string): boolean => SKU_PATTERN.test(text);
 export const ROLES = ["customer", "staff", "admin"] as const;
 export type Role = (typeof ROLES)[number];
 
-export const QUOTE_STATUSES = ["new", "answered", "closed"] as const;
+export const QUOTE_STATUSES = ["new", "answered", "offered", "closed"] as const;
 export type QuoteStatus = (typeof QUOTE_STATUSES)[number];
 
 /** Where an Ask the shop request was sent from. */
-export const QUOTE_SOURCES = ["fit-card", "size-sheet", "finder"] as const;
+export const QUOTE_SOURCES = ["fit-card", "size-sheet", "finder", "counter"] as const;
 export type QuoteSource = (typeof QUOTE_SOURCES)[number];
 
 export const AUDIT_ACTIONS = [
   "item_added", "item_changed", "item_retired", "catalog_import", "role_changed", "shop_changed",
   "brand_added", "brand_renamed", "line_added", "line_changed", "fit_card_emailed", "request_replied",
+  "offer_sent", "offer_withdrawn", "fitting_fitted", "fitting_no_show", "fitting_cancelled",
 ] as const;
+
+/**
+ * Where a priced offer stands. Stored: open, accepted (a fitting booked, the tires held), withdrawn
+ * (by staff), cancelled (by the driver, or by staff before the fitting), no-show, fitted. "expired"
+ * is never stored: an open offer past its valid-until instant reads as expired.
+ */
+export const OFFER_STATUSES = ["open", "accepted", "expired", "withdrawn", "cancelled", "no-show", "fitted"] as const;
+export type OfferStatus = (typeof OFFER_STATUSES)[number];
+export type StoredOfferStatus = Exclude<OfferStatus, "expired">;
+/** What staff mark a booked fitting as at the counter. */
+export const FITTING_OUTCOMES = ["fitted", "no-show", "cancelled"] as const;
+export type FittingOutcome = (typeof FITTING_OUTCOMES)[number];
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];
 
 /** The days of a week of opening hours, Monday first. */

@@ -59,6 +59,10 @@ describe("GET /api/v1/shop", () => {
       tireFeePerTireCents: 100,
       taxRateBp: 725,
       taxServices: true,
+      fittingBays: 2,
+      fittingMinutes: 60,
+      leadMinutes: 120,
+      cancelCutoffHours: 24,
     });
   });
 
@@ -164,7 +168,7 @@ describe("PATCH /api/v1/shop", () => {
   it("names the unknown field and lists the settings it takes", async () => {
     const { body } = await change({ colour: "black" });
     expect(body.error.message).toBe(
-      'The field "colour" is invalid: not a setting of the shop: remove it (the settings are name, address, phone, email, timeZone, hours, closedDates, tolerancePct, fittingPerTireCents, disposalPerTireCents, tireFeePerTireCents, taxRateBp, taxServices).',
+      'The field "colour" is invalid: not a setting of the shop: remove it (the settings are name, address, phone, email, timeZone, hours, closedDates, tolerancePct, fittingPerTireCents, disposalPerTireCents, tireFeePerTireCents, taxRateBp, taxServices, fittingBays, fittingMinutes, leadMinutes, cancelCutoffHours).',
     );
   });
 

@@ -16,6 +16,10 @@ const saved: ShopSettings = {
   tireFeePerTireCents: 100,
   taxRateBp: 725,
   taxServices: true,
+  fittingBays: 2,
+  fittingMinutes: 60,
+  leadMinutes: 120,
+  cancelCutoffHours: 24,
 };
 
 describe("the shop settings form", () => {

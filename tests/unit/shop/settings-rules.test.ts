@@ -114,6 +114,10 @@ describe("what a change of settings did", () => {
     tireFeePerTireCents: 100,
     taxRateBp: 725,
     taxServices: true,
+    fittingBays: 2,
+    fittingMinutes: 60,
+    leadMinutes: 120,
+    cancelCutoffHours: 24,
   };
 
   it("merges the address and the week part by part and sorts the closed dates", () => {
