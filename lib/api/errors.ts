@@ -9,6 +9,12 @@ export const apiErrorStatus = {
   forbidden: 403,
   not_found: 404,
   already_exists: 409,
+  already_accepted: 409,
+  slot_taken: 409,
+  not_enough_stock: 409,
+  held_for_fittings: 409,
+  too_late: 409,
+  not_booked: 409,
   gone: 410,
   too_large: 413,
   too_long: 414,
@@ -32,12 +38,14 @@ export const apiErrorBodySchema = z.object({
     message: z.string(),
     /** The parameter or body field the error is about, as a dotted path ("items.1.name"). */
     field: z.string().optional(),
+    /** With a fitting time refused (slot_taken, not_enough_stock): the next free times, ISO 8601 with the shop's offset. */
+    nextSlots: z.array(z.object({ start: z.string(), end: z.string() })).optional(),
   }),
 });
 
 export type ApiErrorBody = z.infer<typeof apiErrorBodySchema>;
 
-export function apiError(code: ApiErrorCode, message: string, headers?: HeadersInit, field?: string): NextResponse {
-  const body: ApiErrorBody = { error: field === undefined ? { code, message } : { code, message, field } };
+export function apiError(code: ApiErrorCode, message: string, headers?: HeadersInit, field?: string, extra?: Pick<ApiErrorBody["error"], "nextSlots">): NextResponse {
+  const body: ApiErrorBody = { error: { code, message, ...(field === undefined ? {} : { field }), ...extra } };
   return NextResponse.json(body, { status: apiErrorStatus[code], headers });
 }

@@ -47,16 +47,9 @@ export const publicFitCardSchema = z.object({
 export type CardTire = z.infer<typeof cardTireSchema>;
 export type PublicFitCard = z.infer<typeof publicFitCardSchema>;
 
-export type CardLookup = { status: "found"; card: PublicFitCard } | { status: "withdrawn"; why: "revoked" | "expired" } | { status: "missing" };
-
-/** The card behind a link, or why there is none to show. */
-export async function readFitCard(db: Database, slug: string, now = new Date()): Promise<CardLookup> {
-  const [card] = await db.select().from(fitCard).where(eq(fitCard.slug, slug));
-  if (!card) return { status: "missing" };
-  if (card.revokedAt) return { status: "withdrawn", why: "revoked" };
-  if (card.expiresAt && card.expiresAt <= now) return { status: "withdrawn", why: "expired" };
-
-  const read = readOriginal({
+/** The tire on the car a card was made for, as the judge reads it. */
+export function readCardOriginal(card: typeof fitCard.$inferSelect) {
+  return readOriginal({
     size: card.sizes[0] ?? "",
     loadIndex: card.loadIndex,
     loadIndexDual: card.loadIndexDual ?? undefined,
@@ -67,6 +60,18 @@ export async function readFitCard(db: Database, slug: string, now = new Date()):
     minLoadIndexDual: card.minLoadIndexDual ?? undefined,
     season: card.originalSeason ?? undefined,
   });
+}
+
+export type CardLookup = { status: "found"; card: PublicFitCard } | { status: "withdrawn"; why: "revoked" | "expired" } | { status: "missing" };
+
+/** The card behind a link, or why there is none to show. */
+export async function readFitCard(db: Database, slug: string, now = new Date()): Promise<CardLookup> {
+  const [card] = await db.select().from(fitCard).where(eq(fitCard.slug, slug));
+  if (!card) return { status: "missing" };
+  if (card.revokedAt) return { status: "withdrawn", why: "revoked" };
+  if (card.expiresAt && card.expiresAt <= now) return { status: "withdrawn", why: "expired" };
+
+  const read = readCardOriginal(card);
   if (!read.ok) throw new Error(`fit card ${card.id} holds an unreadable original: ${read.message}`);
   const { original } = read;
   const rows = await db

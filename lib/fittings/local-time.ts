@@ -62,3 +62,8 @@ export function endOfLocalDay(date: string, timeZone: string): string {
   const zone = readInput(timeZoneSchema, timeZone, "timeZone");
   return day.add({ days: 1 }).toZonedDateTime(zone).toString({ timeZoneName: "never", smallestUnit: "second" });
 }
+
+/** A local date some days later (or earlier), YYYY-MM-DD. */
+export function addLocalDays(date: string, days: number): string {
+  return Temporal.PlainDate.from(readInput(localDateSchema, date, "date")).add({ days }).toString();
+}

@@ -41,6 +41,12 @@ const toNumber = (cents: bigint): number => {
   return Number(cents);
 };
 
+/** One tire of a package: its price each and how many. */
+export interface PackageLine {
+  priceCents: number;
+  quantity: number;
+}
+
 /**
  * The estimate for `quantity` tires at `priceCents` each:
  * tires = price × quantity; services = fitting × quantity; fees = (disposal + tire fee) × quantity;
@@ -48,11 +54,24 @@ const toNumber = (cents: bigint): number => {
  * when the shop taxes services (the tire fee never); total = tires + services + fees + tax.
  */
 export function estimateSet(priceCents: number, quantity: number, charges: ShopCharges): Estimate {
-  if (!Number.isSafeInteger(quantity) || quantity < 1) throw new RangeError(`quantity must be a whole number ≥ 1, not ${quantity}`);
+  return estimatePackage([{ priceCents, quantity }], charges);
+}
+
+/**
+ * The estimate for tires bought together (an offer's lines): the same sums as `estimateSet` over
+ * every line, with the tax rounded once for the whole package, so the total is never a cent off
+ * what the lines add up to before tax.
+ */
+export function estimatePackage(lines: readonly PackageLine[], charges: ShopCharges): Estimate {
+  if (lines.length === 0) throw new RangeError("a package has at least one line");
+  for (const { quantity } of lines) {
+    if (!Number.isSafeInteger(quantity) || quantity < 1) throw new RangeError(`quantity must be a whole number ≥ 1, not ${quantity}`);
+  }
+  const quantity = lines.reduce((sum, line) => sum + line.quantity, 0);
   const count = BigInt(quantity);
   const taxRate = wholeCents("taxRateBp", charges.taxRateBp);
   if (taxRate > BASIS_POINTS) throw new RangeError(`taxRateBp must be at most 10000, not ${charges.taxRateBp}`);
-  const tires = wholeCents("priceCents", priceCents) * count;
+  const tires = lines.reduce((sum, line) => sum + wholeCents("priceCents", line.priceCents) * BigInt(line.quantity), 0n);
   const fitting = wholeCents("fittingPerTireCents", charges.fittingPerTireCents) * count;
   const disposal = wholeCents("disposalPerTireCents", charges.disposalPerTireCents) * count;
   const tireFee = wholeCents("tireFeePerTireCents", charges.tireFeePerTireCents) * count;

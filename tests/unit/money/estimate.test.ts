@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { estimateSet, type ShopCharges } from "@/lib/money/estimate";
+import { estimatePackage, estimateSet, type ShopCharges } from "@/lib/money/estimate";
 import { MAX_PRICE_CENTS } from "@/lib/money/money";
 
 // The demo shop's invented charges (lib/demo/shop.ts): $25.00 fitting, $4.00 disposal, a $1.00 tire fee, 7.25 % on tires and services.
@@ -94,4 +94,15 @@ describe("the out-the-door estimate", () => {
     expect(() => estimateSet(18_299, 0, demoCharges)).toThrow(RangeError);
     expect(() => estimateSet(18_299, 4, { ...demoCharges, taxRateBp: 10_001 })).toThrow(RangeError);
   });
+
+  it("prices a package of two items as one set: the tax on the sum, rounded once", () => {
+    // Worked by hand: tires 2 × $182.99 + 2 × $204.49 = $774.96; fitting 4 × $25.00 = $100.00;
+    // fees 4 × ($4.00 + $1.00) = $20.00; taxable $774.96 + $100.00 + $16.00 = $890.96;
+    // tax 7.25 % = $64.5946 → $64.59; total $774.96 + $100.00 + $20.00 + $64.59 = $959.55.
+    const estimate = estimatePackage([{ priceCents: 18_299, quantity: 2 }, { priceCents: 20_449, quantity: 2 }], demoCharges);
+    expect(estimate).toEqual({ quantity: 4, tiresCents: 77_496, servicesCents: 10_000, feesCents: 2_000, taxCents: 6_459, totalCents: 95_955 });
+    expect(estimatePackage([{ priceCents: 18_299, quantity: 4 }], demoCharges)).toEqual(estimateSet(18_299, 4, demoCharges));
+    expect(() => estimatePackage([], demoCharges)).toThrow(RangeError);
+  });
 });
+
