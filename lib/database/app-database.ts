@@ -1,6 +1,7 @@
 import { lazyDatabase, migrateDatabase, openDatabase, type Database, type DatabaseHandle } from "@/db/client";
 import { seedDemoDataIfEmpty } from "@/lib/demo";
 import { seedDemoAccounts } from "@/lib/demo/accounts";
+import { seedDemoRequestsIfEmpty } from "@/lib/demo/requests";
 import { readEnv } from "@/lib/env/env";
 
 /** Opens the database the environment names, migrates it, and fills in the demo data unless DEMO_SEED=off. */
@@ -12,6 +13,7 @@ async function openAppDatabase(): Promise<DatabaseHandle> {
     if (env.DEMO_SEED === "on") {
       await seedDemoDataIfEmpty(handle.db);
       await seedDemoAccounts(handle.db);
+      await seedDemoRequestsIfEmpty(handle.db);
     }
     return handle;
   } catch (error) {
