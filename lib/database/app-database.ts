@@ -1,7 +1,6 @@
 import { lazyDatabase, migrateDatabase, openDatabase, type Database, type DatabaseHandle } from "@/db/client";
 import { seedDemoDataIfEmpty } from "@/lib/demo";
 import { seedDemoAccounts } from "@/lib/demo/accounts";
-import { seedDemoRequestsIfEmpty } from "@/lib/demo/requests";
 import { readEnv } from "@/lib/env/env";
 
 /** Opens the database the environment names, migrates it, and fills in the demo data unless DEMO_SEED=off. */
@@ -13,6 +12,8 @@ async function openAppDatabase(): Promise<DatabaseHandle> {
     if (env.DEMO_SEED === "on") {
       await seedDemoDataIfEmpty(handle.db);
       await seedDemoAccounts(handle.db);
+      // Loaded here, not at the top: the offers it makes read the shop through modules that import this one.
+      const { seedDemoRequestsIfEmpty } = await import("@/lib/demo/requests");
       await seedDemoRequestsIfEmpty(handle.db);
     }
     return handle;

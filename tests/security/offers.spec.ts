@@ -61,7 +61,7 @@ async function finderQuantity(sku: string): Promise<number | undefined> {
 
 test("staff send an offer for a seeded request, priced out the door and frozen", async () => {
   const requests = await described("GET", "/api/v1/quote-requests", await staff.get("/api/v1/quote-requests"));
-  const request = (requests.body.items as { id: number; status: string }[]).find((item) => item.status === "new");
+  const request = (requests.body.requests as { id: number; status: string }[]).find((item) => item.status === "new");
   expect(request, "the demo seed holds a new request").toBeTruthy();
   const { body: found } = await described("GET", SEARCH, await driver.get(SEARCH));
   tire = (found.results as Tire[]).find((result) => result.quantity >= 4 && result.quantity < 8)!;
