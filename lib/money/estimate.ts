@@ -69,3 +69,13 @@ export function estimateSet(priceCents: number, quantity: number, charges: ShopC
     totalCents: toNumber(tires + fitting + fees + tax),
   };
 }
+
+/** An estimate line by line as every breakdown words it, on pages and in e-mails (the total is `totalCents`). */
+export function estimateRows(estimate: Estimate, tiresLabel: string): [string, number][] {
+  return [
+    [tiresLabel, estimate.tiresCents],
+    ["Fitting", estimate.servicesCents],
+    ["Disposal & fees", estimate.feesCents],
+    ["Tax", estimate.taxCents],
+  ];
+}
