@@ -82,6 +82,8 @@ export default defineConfig({
         RESEND_BASE_URL: fakeResendUrl,
         RESEND_API_KEY: "",
         EMAIL_FROM: "",
+        // Tests release holds and send reminders themselves when they need to; no step runs on a timer behind them.
+        FITTING_SCHEDULE: "off",
       },
     },
   ],

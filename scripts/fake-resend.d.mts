@@ -10,6 +10,8 @@ export interface ReceivedEmail {
   text?: string;
   html?: string;
   reply_to?: string | string[];
+  /** As the SDK sends them: content in base64. */
+  attachments?: { filename: string; content?: string; path?: string; content_type?: string }[];
   [field: string]: unknown;
 }
 

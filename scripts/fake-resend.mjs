@@ -2,7 +2,7 @@
 // the real SDK code path without sending anything. It keeps what it receives in memory:
 //   POST /emails    send (needs from, to, subject) → { id }
 //   GET /emails     everything received, newest first → { data: [...] }
-//   GET /emails/:id one of them
+//   GET /emails/:id one of them, attachments included (content as the SDK sent it: base64)
 //   DELETE /emails  forget everything
 // Run it alone with `node scripts/fake-resend.mjs` (port FAKE_RESEND_PORT, default 3025).
 import { randomUUID } from "node:crypto";
@@ -47,6 +47,18 @@ function missingField(email) {
   return null;
 }
 
+/** What is wrong with the attachments, as the service would refuse them; null when they are fine or absent. */
+function badAttachments(attachments) {
+  if (attachments === undefined || attachments === null) return null;
+  if (!Array.isArray(attachments)) return "`attachments` must be an array.";
+  for (const [index, attachment] of attachments.entries()) {
+    if (typeof attachment !== "object" || attachment === null) return `\`attachments[${index}]\` must be an object.`;
+    if (typeof attachment.filename !== "string" || attachment.filename === "") return `\`attachments[${index}].filename\` is missing.`;
+    if (typeof attachment.content !== "string" && typeof attachment.path !== "string") return `\`attachments[${index}]\` needs \`content\` or \`path\`.`;
+  }
+  return null;
+}
+
 /**
  * Starts the fake. `port: 0` picks a free port. `failWith` makes every send answer that error, to
  * see how callers cope with a refusal; with `failWith.times`, only that many sends fail, then it recovers.
@@ -75,6 +87,8 @@ export function startFakeResend({ port = DEFAULT_FAKE_RESEND_PORT, host = "127.0
     }
     const missing = missingField(email);
     if (missing) return refuse(response, 422, "missing_required_field", `Missing \`${missing}\` field.`);
+    const attachmentProblem = badAttachments(email.attachments);
+    if (attachmentProblem) return refuse(response, 422, "validation_error", attachmentProblem);
     const idempotencyKey = request.headers["idempotency-key"];
     if (typeof idempotencyKey === "string" && idsByIdempotencyKey.has(idempotencyKey)) {
       return answer(response, 200, { id: idsByIdempotencyKey.get(idempotencyKey) });

@@ -30,6 +30,11 @@ export function OutboxFakeInbox({ outbox, timeZone }: { outbox: DevOutbox; timeZ
             <p className="text-sm text-ink-soft">
               To <span className="break-all">{email.to}</span> · <time dateTime={email.receivedAt.toISOString()}>{formatDateTime(email.receivedAt, { timeZone, seconds: true })}</time>
             </p>
+            {email.attachments.length > 0 ? (
+              <p className="text-sm">
+                Attached: <span className="font-mono break-all">{email.attachments.join(", ")}</span>
+              </p>
+            ) : null}
             {email.links.length > 0 ? (
               <ul className="mt-2 flex flex-col">
                 {email.links.map((link) => (

@@ -1,8 +1,20 @@
 import { statusLabel } from "@/components/fit-card/email-history";
+import type { EmailKind } from "@/db/schema";
 import type { EmailSendRow } from "@/lib/email/queries";
 import { formatDateTime, shopTimesCaption } from "@/lib/format/format";
 
-const kindLabel = { fit_card: "Fit card", quote_to_shop: "Request to the shop", quote_confirmation: "Request confirmation", quote_reply: "Reply to a request" } as const;
+const kindLabel: Record<EmailKind, string> = {
+  fit_card: "Fit card",
+  quote_to_shop: "Request to the shop",
+  quote_confirmation: "Request confirmation",
+  quote_reply: "Reply to a request",
+  offer: "Priced offer",
+  fitting_booked: "Fitting booked",
+  fitting_booked_shop: "Fitting booked, to the shop",
+  fitting_cancelled: "Fitting cancelled",
+  fitting_cancelled_shop: "Fitting cancelled, to the shop",
+  fitting_reminder: "Fitting reminder",
+};
 
 /** The last e-mails the product sent or tried to send, with how many tries and what went wrong. */
 export function OutboxSendTable({ sends, timeZone }: { sends: EmailSendRow[]; timeZone: string }) {

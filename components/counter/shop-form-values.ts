@@ -1,14 +1,30 @@
 import { centsToDollarsText, parseDollars } from "@/lib/money/money";
 import { applySettingsChanges, settingChanges, type SettingChange } from "@/lib/shop/settings-changes";
 import type { ShopSettings, ShopSettingsChanges } from "@/lib/shop/settings-schema";
-import { MAX_CHARGE_CENTS } from "@/lib/shop/limits";
+import { FITTING_LIMITS, MAX_CHARGE_CENTS } from "@/lib/shop/limits";
 import type { ShopContact } from "@/lib/shop/queries";
 import { parseTaxPercent, taxPercentText } from "@/lib/shop/tax-percent";
 import { closedDatesProblem, dayHoursProblem } from "@/lib/shop/week-rules";
 import { WEEKDAYS, type Weekday } from "@/lib/tire";
 
+/** The fitting settings, whole numbers the form holds as typed, with the limits the API and the database keep. */
+export const FITTING_FIELDS = [
+  { field: "fittingBays", label: "Fitting bays", what: "the number of bays", limits: FITTING_LIMITS.bays, hint: "How many sets can be fitted at the same time." },
+  { field: "fittingMinutes", label: "Minutes per fitting", what: "the minutes one set takes", limits: FITTING_LIMITS.minutes, hint: "How long one set takes; fitting times start this far apart." },
+  { field: "leadMinutes", label: "Earliest booking (minutes ahead)", what: "the minutes ahead", limits: FITTING_LIMITS.leadMinutes, hint: "A driver books no sooner than this from now; 120 is two hours." },
+  {
+    field: "cancelCutoffHours",
+    label: "Cancel online until (hours before)",
+    what: "the hours before a fitting",
+    limits: FITTING_LIMITS.cancelCutoffHours,
+    hint: "Closer to the fitting, a driver phones to cancel; 0 allows cancelling online until it starts.",
+  },
+] as const;
+
+type FittingField = (typeof FITTING_FIELDS)[number]["field"];
+
 /** The settings as the form holds them: text as typed, charges in dollars, the tax rate in percent. */
-export interface ShopFormValues extends Omit<ShopContact, "openingHours"> {
+export interface ShopFormValues extends Omit<ShopContact, "openingHours">, Record<FittingField, string> {
   timeZone: string;
   hours: Record<Weekday, [string, string][]>;
   closedDates: string[];
@@ -44,6 +60,7 @@ export function formValuesOf(settings: ShopSettings): ShopFormValues {
     tireFeePerTire: centsToDollarsText(settings.tireFeePerTireCents),
     taxPercent: taxPercentText(settings.taxRateBp),
     taxServices: settings.taxServices,
+    ...(Object.fromEntries(FITTING_FIELDS.map(({ field }) => [field, String(settings[field])])) as Record<FittingField, string>),
   };
 }
 
@@ -95,6 +112,12 @@ export function checkShopForm(values: ShopFormValues, initial: ShopSettings): Sh
   }
   const taxRateBp = parseTaxPercent(values.taxPercent);
   if (taxRateBp === null) errors.taxRateBp = "Enter the tax rate in percent from 0 to 100, with at most two decimals, like 7.25.";
+  const fitting: Partial<Record<FittingField, number>> = {};
+  for (const { field, what, limits } of FITTING_FIELDS) {
+    const number = /^\d{1,6}$/.test(values[field].trim()) ? Number(values[field].trim()) : NaN;
+    if (number >= limits.min && number <= limits.max) fitting[field] = number;
+    else errors[field] = `Enter ${what}, a whole number from ${limits.min} to ${limits.max}.`;
+  }
   if (Object.keys(errors).length > 0 || taxRateBp === null) return { ok: false, errors };
 
   const trimmed = (text: string) => text.trim();
@@ -110,6 +133,7 @@ export function checkShopForm(values: ShopFormValues, initial: ShopSettings): Sh
     ...cents,
     taxRateBp,
     taxServices: values.taxServices,
+    ...fitting,
   });
   const changes = settingChanges(initial, after);
   return { ok: true, body: changes.length === 0 ? null : changedSettingsOf(after, changes), changes };

@@ -9,7 +9,7 @@ import { HIGH_TAX_RATE_BP } from "@/lib/shop/limits";
 import { parseTaxPercent } from "@/lib/shop/tax-percent";
 import { itemInputClass, useHydrated } from "./item-controls";
 import { sendCatalogWrite } from "./item-form-values";
-import { CHARGE_FIELDS, checkShopForm, formFieldOf, formValuesOf, type ShopFormErrors, type ShopFormValues } from "./shop-form-values";
+import { CHARGE_FIELDS, checkShopForm, FITTING_FIELDS, formFieldOf, formValuesOf, type ShopFormErrors, type ShopFormValues } from "./shop-form-values";
 import { ShopClosedDates } from "./shop-closed-dates";
 import { ShopHoursEditor } from "./shop-hours-editor";
 import { ShopTimeZoneField } from "./shop-time-zone-field";
@@ -122,6 +122,16 @@ export function ShopSettingsForm({ initial, timeZones }: { initial: ShopSettings
             <input type="checkbox" name="taxServices" checked={values.taxServices} onChange={(e) => set("taxServices", e.target.checked)} className="size-5 accent-accent" />
             Charge sales tax on fitting and disposal too
           </label>
+        </Section>
+        <Section title="Fittings">
+          <p className="text-sm text-ink-soft">How drivers book a fitting when they accept an offer: bays, times and the cut-off for cancelling online.</p>
+          <div className="grid gap-4 sm:grid-cols-2">
+            {FITTING_FIELDS.map(({ field: apiField, label, hint }) => (
+              <FormField key={apiField} {...field(apiField)} label={label} hint={hint}>
+                {(control) => <input {...control} name={apiField} inputMode="numeric" value={values[apiField]} onChange={(e) => set(apiField, e.target.value)} autoComplete="off" className={`${itemInputClass} font-mono`} />}
+              </FormField>
+            ))}
+          </div>
         </Section>
       </fieldset>
       <p id="shop-form-error" tabIndex={-1} role="alert" className="text-danger">

@@ -1,17 +1,4 @@
-interface ServiceDescribed {
-  designation: string;
-  loadIndex: number | null;
-  loadIndexDual?: number | null;
-  speedSymbol: string | null;
-  loadRange?: string | null;
-}
-
-/** A size with its service description as the sidewall shows it, e.g. "LT265/75R16 123/120S, load range E". */
-export function describeTire({ designation, loadIndex, loadIndexDual, speedSymbol, loadRange }: ServiceDescribed): string {
-  const index = loadIndex === null ? "" : loadIndexDual ? `${loadIndex}/${loadIndexDual}` : String(loadIndex);
-  const service = `${index}${speedSymbol ?? ""}`;
-  return [designation, service].filter(Boolean).join(" ") + (loadRange ? `, load range ${loadRange}` : "");
-}
+import { describeTire, type ServiceDescribed } from "@/lib/tire";
 
 /** What the finder sends: the tire on the car, then any tires picked from the results. */
 export function finderQuoteTires(original: ServiceDescribed, picked: readonly (ServiceDescribed & { brand: string; line: string })[]): string {

@@ -1,5 +1,5 @@
 import { useId } from "react";
-import type { Estimate } from "@/lib/money/estimate";
+import { estimateRows, type Estimate } from "@/lib/money/estimate";
 import { formatPrice } from "@/lib/money/money";
 
 export const ESTIMATE_CAVEAT = "Estimate — the shop confirms the price.";
@@ -12,12 +12,7 @@ export function EstimateBreakdown({ estimate, className = "" }: { estimate: Esti
   const id = useId();
   const { quantity } = estimate;
   const each = estimate.tiresCents / quantity;
-  const rows: [string, number][] = [
-    [`${quantity} ${quantity === 1 ? "tire" : "tires"} × ${formatPrice(each)}`, estimate.tiresCents],
-    ["Fitting", estimate.servicesCents],
-    ["Disposal & fees", estimate.feesCents],
-    ["Tax", estimate.taxCents],
-  ];
+  const rows = estimateRows(estimate, `${quantity} ${quantity === 1 ? "tire" : "tires"} × ${formatPrice(each)}`);
   return (
     <section aria-labelledby={`${id}-title`} data-estimate-total={estimate.totalCents} className={`rounded border border-rule p-3 text-sm ${className}`}>
       <h4 id={`${id}-title`} className="font-semibold">

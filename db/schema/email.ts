@@ -1,7 +1,18 @@
 import { index, integer, pgTable, serial, text, timestamp } from "drizzle-orm/pg-core";
 import { user } from "./auth";
 
-export const EMAIL_KINDS = ["fit_card", "quote_to_shop", "quote_confirmation", "quote_reply"] as const;
+export const EMAIL_KINDS = [
+  "fit_card",
+  "quote_to_shop",
+  "quote_confirmation",
+  "quote_reply",
+  "offer",
+  "fitting_booked",
+  "fitting_booked_shop",
+  "fitting_cancelled",
+  "fitting_cancelled_shop",
+  "fitting_reminder",
+] as const;
 export type EmailKind = (typeof EMAIL_KINDS)[number];
 
 export const EMAIL_STATUSES = ["sending", "sent", "failed"] as const;
@@ -20,7 +31,7 @@ export const emailSend = pgTable(
     updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
     senderId: text().references(() => user.id, { onDelete: "set null" }),
     kind: text().$type<EmailKind>().notNull(),
-    /** What the e-mail is about: a Fit card's slug or a quote request's id. */
+    /** What the e-mail is about: a Fit card's slug, a quote request's id or an offer's id. */
     reference: text().notNull(),
     toAddress: text().notNull(),
     subject: text().notNull(),

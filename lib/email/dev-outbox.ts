@@ -8,6 +8,7 @@ const receivedSchema = z.object({
   to: z.union([z.string(), z.array(z.string())]),
   subject: z.string(),
   text: z.string().optional(),
+  attachments: z.array(z.object({ filename: z.string() })).optional(),
 });
 const inboxSchema = z.object({ data: z.array(z.unknown()) });
 
@@ -18,6 +19,8 @@ export interface OutboxEmail {
   subject: string;
   text: string;
   links: string[];
+  /** The attached files' names (a calendar entry's fitting.ics); their content is not shown. */
+  attachments: string[];
 }
 
 export type DevOutbox = { status: "not_local" } | { status: "unreachable"; url: string; message: string } | { status: "ok"; url: string; emails: OutboxEmail[] };
@@ -38,8 +41,18 @@ export async function readDevOutbox(): Promise<DevOutbox> {
     const emails = inbox.data.flatMap((item) => {
       const parsed = receivedSchema.safeParse(item);
       if (!parsed.success) return [];
-      const { id, created_at, to, subject, text = "" } = parsed.data;
-      return [{ id, receivedAt: new Date(created_at), to: Array.isArray(to) ? to.join(", ") : to, subject, text: redactSecretLinks(text), links: visibleLinks(text) }];
+      const { id, created_at, to, subject, text = "", attachments = [] } = parsed.data;
+      return [
+        {
+          id,
+          receivedAt: new Date(created_at),
+          to: Array.isArray(to) ? to.join(", ") : to,
+          subject,
+          text: redactSecretLinks(text),
+          links: visibleLinks(text),
+          attachments: attachments.map((attachment) => attachment.filename),
+        },
+      ];
     });
     return { status: "ok", url, emails };
   } catch (error) {

@@ -1,6 +1,7 @@
 import { originalServiceWords } from "@/lib/fit-cards/original-words";
 import type { PublicFitCard } from "@/lib/fit-cards/read-card";
 import { formatPrice } from "@/lib/money/money";
+import { addressLine } from "@/lib/shop/address";
 import type { ShopContact } from "@/lib/shop/queries";
 import { compareSizes, formatServiceDescription, formatSignedPercent, measurableSizeFromSlug, type MeasurableSize } from "@/lib/tire";
 
@@ -43,7 +44,7 @@ export function fitCardEmailContent({ card, shop, link, message }: { card: Publi
     shop: shop
       ? {
           name: shop.name,
-          address: `${shop.streetAddress}, ${shop.town}, ${shop.region} ${shop.postalCode}`,
+          address: addressLine(shop),
           phone: shop.phone,
           email: shop.email,
           hours: shop.openingHours,

@@ -3,7 +3,7 @@ import type { Database } from "@/db/client";
 import { emailSend, type EmailKind } from "@/db/schema";
 import { headerText, type EmailMessage } from "./email-message";
 import { renderEmail } from "./render-email";
-import { sendEmail } from "./send-email";
+import { type EmailAttachment, sendEmail } from "./send-email";
 
 export interface RecordedEmail {
   /** The signed-in person sending it; null when the product sends on its own. */
@@ -15,6 +15,8 @@ export interface RecordedEmail {
   message: EmailMessage;
   /** Where a reply to the e-mail goes, when not to the sender. */
   replyTo?: string;
+  /** Files sent with it, such as a calendar entry; not recorded, only sent. */
+  attachments?: EmailAttachment[];
   /** Same key, same e-mail: a retry after a failure or a timeout never delivers it twice. */
   idempotencyKey: string;
 }
@@ -66,7 +68,7 @@ export async function sendRecordedEmail(db: Database, email: RecordedEmail): Pro
   }
 
   const rendered = await renderEmail(email.message);
-  const result = await sendEmail({ to: email.to, ...rendered, replyTo: email.replyTo }, { idempotencyKey: email.idempotencyKey });
+  const result = await sendEmail({ to: email.to, ...rendered, replyTo: email.replyTo, attachments: email.attachments }, { idempotencyKey: email.idempotencyKey });
   if (result.ok) {
     await db.update(emailSend).set({ status: "sent", providerId: result.id, error: null, updatedAt: new Date() }).where(eq(emailSend.id, row.id));
     return { ok: true, id: row.id, providerId: result.id, alreadySent: false };

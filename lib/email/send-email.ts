@@ -4,6 +4,24 @@ import { readEmailEnv } from "./email-env";
 import type { EmailMessage } from "./email-message";
 import { renderEmail } from "./render-email";
 
+/** The most attachments one e-mail carries, and the most bytes each: calendar files and the like, never bulk. */
+export const ATTACHMENT_LIMITS = { count: 3, bytes: 64 * 1024 } as const;
+
+const contentBytes = (content: string | Uint8Array): number => (typeof content === "string" ? Buffer.byteLength(content, "base64") : content.byteLength);
+
+const attachmentSchema = z.object({
+  // A name every mail program shows and saves as it is: letters, digits, dot, dash and underscore, starting with a letter or digit.
+  filename: z.string().regex(/^[A-Za-z0-9][A-Za-z0-9._-]{0,99}$/, "a file name is 1–100 letters, digits, dots, dashes or underscores, starting with a letter or digit"),
+  content: z
+    .union([z.instanceof(Uint8Array), z.base64("attachment content is base64 text or bytes")])
+    .refine((content) => contentBytes(content) >= 1 && contentBytes(content) <= ATTACHMENT_LIMITS.bytes, `an attachment holds 1 to ${ATTACHMENT_LIMITS.bytes} bytes`),
+  contentType: z
+    .string()
+    .regex(/^[a-z]+\/[a-z0-9.+-]+(; ?[a-z-]+=[A-Za-z0-9._-]+)*$/, "a content type is type/subtype with optional parameters, e.g. text/calendar; charset=utf-8"),
+});
+
+export type EmailAttachment = z.input<typeof attachmentSchema>;
+
 const emailSchema = z.object({
   to: z.union([z.email(), z.array(z.email()).min(1).max(50)]),
   // The one path to the provider refuses what would break a header; renderEmail has already made it one line.
@@ -11,6 +29,7 @@ const emailSchema = z.object({
   text: z.string().min(1),
   html: z.string().min(1).optional(),
   replyTo: z.email().optional(),
+  attachments: z.array(attachmentSchema).min(1).max(ATTACHMENT_LIMITS.count).optional(),
 });
 
 export type OutgoingEmail = z.input<typeof emailSchema>;

@@ -18,6 +18,8 @@ const envSchema = z.object({
   FIT_CARD_EMAIL_LIMIT_PER_HOUR: count(20),
   QUOTE_LIMIT_PER_ADDRESS: count(5),
   QUOTE_LIMIT_PER_EMAIL: count(3),
+  /** The server's five-minute step that releases holds whose day has ended and sends the day-before fitting reminders. */
+  FITTING_SCHEDULE: z.enum(["on", "off"]).default("on"),
   TRUSTED_PROXY_HOPS: z.coerce.number().int().min(0, "TRUSTED_PROXY_HOPS must be a whole number from 0 to 10").max(10, "TRUSTED_PROXY_HOPS must be a whole number from 0 to 10").default(1),
 });
 

@@ -88,3 +88,13 @@ export function estimatePackage(lines: readonly PackageLine[], charges: ShopChar
     totalCents: toNumber(tires + fitting + fees + tax),
   };
 }
+
+/** An estimate line by line as every breakdown words it, on pages and in e-mails (the total is `totalCents`). */
+export function estimateRows(estimate: Estimate, tiresLabel: string): [string, number][] {
+  return [
+    [tiresLabel, estimate.tiresCents],
+    ["Fitting", estimate.servicesCents],
+    ["Disposal & fees", estimate.feesCents],
+    ["Tax", estimate.taxCents],
+  ];
+}

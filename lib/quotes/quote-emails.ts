@@ -1,4 +1,5 @@
 import { type EmailBlock, type EmailMessage, paragraph } from "@/lib/email/email-message";
+import { addressLine } from "@/lib/shop/address";
 import type { ShopContact } from "@/lib/shop/queries";
 
 /** The request as the e-mails tell it: only what the driver typed, never internal data. */
@@ -27,7 +28,7 @@ function summaryRows(request: RequestSummary): [string, string][] {
 
 function shopBlock(shop: ShopContact | null): EmailBlock[] {
   if (!shop) return [];
-  return [paragraph(shop.name, `${shop.streetAddress}, ${shop.town}, ${shop.region} ${shop.postalCode}`, `Phone ${shop.phone} · ${shop.email}`, shop.openingHours)];
+  return [paragraph(shop.name, addressLine(shop), `Phone ${shop.phone} · ${shop.email}`, shop.openingHours)];
 }
 
 /** To the shop: a new request; replying to the e-mail reaches the driver. */

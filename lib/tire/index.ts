@@ -12,6 +12,7 @@ export { measurableSizeFromSlug, noDiameterMessage, sizeFromSlug } from "./slug"
 export type * from "./types";
 export * from "./display";
 export * from "./describe";
+export * from "./describe-tire";
 export { COMMON_SIZES } from "./common-sizes";
 export * from "./placard";
 export * from "./compare";

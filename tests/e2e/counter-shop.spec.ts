@@ -82,6 +82,22 @@ test.describe("the Counter's shop settings", () => {
     await expectNoAxeViolations(page);
   });
 
+  test("an admin sets the fitting bays and the online cancel cut-off; a value out of range stands next to its field", async ({ page }) => {
+    await signIn(page, "admin@sidewise.test", "/counter/shop");
+    await expect(page.getByLabel("Fitting bays")).toHaveAccessibleDescription("How many sets can be fitted at the same time.");
+    await page.getByLabel("Fitting bays").fill("21");
+    await page.getByRole("button", { name: "Save settings" }).click();
+    await expect(page.getByLabel("Fitting bays")).toHaveAccessibleDescription(/a whole number from 1 to 20/);
+    await expect(page.getByLabel("Fitting bays")).toBeFocused();
+
+    await page.getByLabel("Fitting bays").fill("3");
+    await page.getByLabel("Cancel online until (hours before)").fill("48");
+    await page.getByRole("button", { name: "Save settings" }).click();
+    await expect(page.getByRole("status").filter({ hasText: "Saved:" })).toHaveText("Saved: fitting bays 2 → 3; online cancelling until 24 → 48 hours before.");
+    expect(await (await page.request.get("/api/v1/shop")).json()).toMatchObject({ fittingBays: 3, fittingMinutes: 60, leadMinutes: 120, cancelCutoffHours: 48 });
+    await expectNoAxeViolations(page);
+  });
+
   test("the Counter's times follow the shop's time zone and say which it is", async ({ page }) => {
     await signIn(page, "admin@sidewise.test", "/counter/audit");
     await expect(page.getByText(/times in America\/New_York \(the shop's time\)/)).toBeVisible();

@@ -80,4 +80,14 @@ describe("the Outbox in local e-mail mode", () => {
     expect(reset.links).toEqual([]);
     expect(outbox.emails.find((email) => email.subject === "Your Fit card")!.links).toEqual(["http://localhost:3000/s/AbCdEfGhIjKlMnOpQrStUvWx"]);
   });
+
+  it("names an e-mail's attachments without showing their content", async () => {
+    const content = Buffer.from("BEGIN:VCALENDAR\r\nEND:VCALENDAR\r\n");
+    await sendEmail({ to: "rosa@example.test", subject: "Your tire fitting", text: "See you then.", attachments: [{ filename: "fitting.ics", content, contentType: "text/calendar" }] });
+    const outbox = await readDevOutbox();
+    if (outbox.status !== "ok") throw new Error(`the outbox did not read the fake: ${outbox.status}`);
+    const fitting = outbox.emails.find((email) => email.subject === "Your tire fitting")!;
+    expect(fitting.attachments).toEqual(["fitting.ics"]);
+    expect(JSON.stringify(outbox)).not.toContain(content.toString("base64"));
+  });
 });

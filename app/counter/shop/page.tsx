@@ -18,7 +18,7 @@ export default async function ShopSettingsPage() {
       <PageIntro eyebrow="Counter · Admin" title="Shop settings">
         <p>
           The shop&apos;s contact and hours (shown in every page&apos;s footer and on Fit cards), its time zone (every time in the Counter is written in it),
-          the finder&apos;s default tolerance and what a set costs beyond the tires.
+          the finder&apos;s default tolerance, what a set costs beyond the tires and how drivers book fittings.
         </p>
       </PageIntro>
       {settings ? <ShopSettingsForm initial={settings} timeZones={listTimeZones()} /> : <p role="alert">{SHOP_NOT_SET_UP}</p>}

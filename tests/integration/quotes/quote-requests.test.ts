@@ -160,7 +160,7 @@ describe.each(testDatabaseKinds)("quote requests on %s", (kind) => {
     expect(await changeQuoteStatus(database.db, ids[2]!, "answered")).toBe(true);
 
     const first = await listQuoteRequests(database.db, { page: 1 });
-    expect(first.counts).toEqual({ new: REQUEST_PAGE_SIZE, answered: 1, closed: 1 });
+    expect(first.counts).toEqual({ new: REQUEST_PAGE_SIZE, answered: 1, offered: 0, closed: 1 });
     expect(first.total).toBe(REQUEST_PAGE_SIZE + 2);
     expect(first.pageCount).toBe(2);
     expect(first.requests[0]?.id).toBe(ids.at(-1));

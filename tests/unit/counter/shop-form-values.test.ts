@@ -50,6 +50,26 @@ describe("the shop settings form", () => {
     expect(Object.keys(checked.ok ? {} : checked.errors).sort()).toEqual(["fittingPerTireCents", "hours.sat", "name", "taxRateBp", "tolerancePct"]);
   });
 
+  it("holds the fitting settings as typed and sends only those that changed, as whole numbers", () => {
+    expect(formValuesOf(saved)).toMatchObject({ fittingBays: "2", fittingMinutes: "60", leadMinutes: "120", cancelCutoffHours: "24" });
+    const checked = checkShopForm({ ...formValuesOf(saved), fittingBays: " 3 ", cancelCutoffHours: "0" }, saved);
+    expect(checked).toMatchObject({ ok: true, body: { fittingBays: 3, cancelCutoffHours: 0 } });
+    expect(checked.ok && Object.keys(checked.body ?? {}).sort()).toEqual(["cancelCutoffHours", "fittingBays"]);
+    expect(checked.ok && checked.changes.map((change) => change.words)).toEqual(["fitting bays 2 → 3", "online cancelling until 24 → 0 hours before"]);
+  });
+
+  it("refuses fitting settings outside the limits the database keeps, or not whole numbers", () => {
+    const values = { ...formValuesOf(saved), fittingBays: "0", fittingMinutes: "10", leadMinutes: "1.5", cancelCutoffHours: "169" };
+    const checked = checkShopForm(values, saved);
+    expect(checked.ok ? {} : checked.errors).toMatchObject({
+      fittingBays: "Enter the number of bays, a whole number from 1 to 20.",
+      fittingMinutes: "Enter the minutes one set takes, a whole number from 15 to 480.",
+      leadMinutes: "Enter the minutes ahead, a whole number from 0 to 20160.",
+      cancelCutoffHours: "Enter the hours before a fitting, a whole number from 0 to 168.",
+    });
+    expect(checkShopForm({ ...formValuesOf(saved), fittingBays: "20", fittingMinutes: "480", leadMinutes: "20160", cancelCutoffHours: "168" }, saved).ok).toBe(true);
+  });
+
   it("places the API's refusals beside the field they name", () => {
     expect([formFieldOf("hours.sat.1.0"), formFieldOf("address.town"), formFieldOf("closedDates.2"), formFieldOf("body"), formFieldOf(null)]).toEqual(["hours.sat", "address.town", "closedDates", "form", "form"]);
   });

@@ -36,6 +36,17 @@ describe("the fake e-mail service", () => {
     expect((await post("not an object")).status).toBe(422);
   });
 
+  it("keeps attachments and refuses one without a file name or content, as the real service does", async () => {
+    const attachment = { filename: "fitting.ics", content: "QkVHSU46VkNBTEVOREFS", content_type: "text/calendar" };
+    const sent = await post({ from: "a@example.test", to: "b@example.test", subject: "Fitting", text: "1", attachments: [attachment] });
+    expect((await (await fetch(`${fake.url}/emails/${sent.body.id}`)).json()).attachments).toEqual([attachment]);
+    expect((await post({ from: "a@example.test", to: "b@example.test", subject: "x", attachments: [{ content: "QUJD" }] })).body).toMatchObject({
+      name: "validation_error",
+      message: "`attachments[0].filename` is missing.",
+    });
+    expect((await post({ from: "a@example.test", to: "b@example.test", subject: "x", attachments: [{ filename: "a.ics" }] })).status).toBe(422);
+  });
+
   it("keeps one e-mail per idempotency key", async () => {
     const headers = { ...auth, "idempotency-key": "reset-once" };
     const email = { from: "a@example.test", to: "b@example.test", subject: "Once", text: "1" };

@@ -84,6 +84,45 @@ describe("sendEmail", () => {
     expect(fake.received()).toHaveLength(before);
   });
 
+  it("carries attachments to the service as the SDK sends them, the content in base64, read back by id", async () => {
+    useService(fake.url);
+    const calendar = "BEGIN:VCALENDAR\r\nVERSION:2.0\r\nEND:VCALENDAR\r\n";
+    const result = await sendEmail({
+      to: "ada.quill@example.test",
+      subject: "Your fitting",
+      text: "See you then.",
+      attachments: [{ filename: "fitting.ics", content: Buffer.from(calendar, "utf8"), contentType: "text/calendar; charset=utf-8; method=PUBLISH" }],
+    });
+    if (!result.ok) throw new Error(result.message);
+    const stored = await (await fetch(`${fake.url}/emails/${result.id}`)).json();
+    expect(stored.attachments).toEqual([{ filename: "fitting.ics", content: Buffer.from(calendar).toString("base64"), content_type: "text/calendar; charset=utf-8; method=PUBLISH" }]);
+    expect(Buffer.from(stored.attachments[0].content, "base64").toString("utf8")).toBe(calendar);
+  });
+
+  it.each([
+    ["a file name with a path in it", { filename: "../fitting.ics", content: "QUJD", contentType: "text/calendar" }, /attachments\.0\.filename/],
+    ["a file name with a space", { filename: "my fitting.ics", content: "QUJD", contentType: "text/calendar" }, /attachments\.0\.filename/],
+    ["content that is not base64", { filename: "fitting.ics", content: "not base64!", contentType: "text/calendar" }, /attachments\.0\.content/],
+    ["an empty file", { filename: "fitting.ics", content: new Uint8Array(0), contentType: "text/calendar" }, /attachments\.0\.content/],
+    ["a file over 64 KB", { filename: "fitting.ics", content: new Uint8Array(64 * 1024 + 1), contentType: "text/calendar" }, /attachments\.0\.content/],
+    ["a content type with a line break", { filename: "fitting.ics", content: "QUJD", contentType: "text/calendar\r\nBcc: x@example.test" }, /attachments\.0\.contentType/],
+  ])("refuses %s before calling the service", async (_, attachment, field) => {
+    useService(fake.url);
+    vi.spyOn(console, "error").mockImplementation(() => undefined);
+    const before = fake.received().length;
+    const result = await sendEmail({ to: "ada.quill@example.test", subject: "Hello", text: "Hi", attachments: [attachment] });
+    expect(result).toEqual({ ok: false, message: expect.stringMatching(field) });
+    expect(fake.received()).toHaveLength(before);
+  });
+
+  it("refuses more than three attachments", async () => {
+    useService(fake.url);
+    vi.spyOn(console, "error").mockImplementation(() => undefined);
+    const one = { filename: "a.txt", content: "QUJD", contentType: "text/plain" };
+    const result = await sendEmail({ to: "ada.quill@example.test", subject: "Hello", text: "Hi", attachments: [one, one, one, one] });
+    expect(result).toEqual({ ok: false, message: expect.stringMatching(/attachments/) });
+  });
+
   it("refuses to send to a remote service without an API key", async () => {
     useService("https://mail.example.test");
     vi.spyOn(console, "error").mockImplementation(() => undefined);

@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { renderEmail } from "@/lib/email/render-email";
 import { quoteReplyEmail, requestConfirmationEmail, requestToShopEmail } from "@/lib/quotes/quote-emails";
-import { describeTire, finderQuoteTires, fitCardQuoteTires } from "@/components/quotes/quote-tires";
+import { finderQuoteTires, fitCardQuoteTires } from "@/components/quotes/quote-tires";
+import { describeTire } from "@/lib/tire";
 
 const request = {
   id: 42,
