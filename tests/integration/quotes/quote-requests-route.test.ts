@@ -125,7 +125,8 @@ describe("GET /api/v1/quote-requests", () => {
     const response = await callRoute(GET, "GET", "/api/v1/quote-requests?status=new", { cookie });
     expect(response.status).toBe(200);
     const body = await response.json();
-    expect(body).toMatchObject({ page: 1, pageCount: 1, counts: { new: body.total, answered: 0, closed: 0 } });
+    // The demo seed's requests: one answered, three with offers (lib/demo/requests.ts).
+    expect(body).toMatchObject({ page: 1, pageCount: 1, counts: { new: body.total, answered: 1, offered: 3, closed: 0 } });
     expect(body.requests.length).toBe(body.total);
     expect(body.requests[0]).toMatchObject({ id: expect.any(Number), status: "new", createdAt: expect.stringMatching(/Z$/) });
     const ids = body.requests.map((row: { id: number }) => row.id);
