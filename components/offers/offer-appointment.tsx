@@ -1,8 +1,9 @@
 import { PhoneLink } from "@/components/ui/phone-link";
 import { fittingVisitChecklist } from "@/content/fitting-visit";
-import { formatDateTime, formatTime } from "@/lib/format/format";
+import { formatCalendarDate, formatDateTime, formatTime } from "@/lib/format/format";
 import type { PublicOffer } from "@/lib/offers/public-offer";
 import { CancelFitting } from "./cancel-fitting";
+import { shopDateOf } from "./slot-days";
 
 interface OfferAppointmentProps {
   offer: PublicOffer & { appointment: NonNullable<PublicOffer["appointment"]> };
@@ -21,7 +22,10 @@ export function OfferAppointment({ offer, token, canCancel }: OfferAppointmentPr
         Your fitting
       </h2>
       <p className="text-lg">
-        <span className="font-semibold">{when}</span> to {formatTime(appointment.end, { timeZone })} ({timeZone} time)
+        <span className="font-semibold">
+          {formatCalendarDate(shopDateOf(appointment.start), "full")}, {formatTime(appointment.start, { timeZone })}
+        </span>{" "}
+        to {formatTime(appointment.end, { timeZone })} ({timeZone} time)
       </p>
       <p>
         At {shop.name}, {shop.address}. Phone{" "}

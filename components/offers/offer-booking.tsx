@@ -71,6 +71,9 @@ export function OfferBooking({ token, timeZone, firstDay, windowDays, phone }: O
 
   return (
     <div className="flex flex-col gap-4">
+      <p role="status" className="text-sm font-semibold empty:hidden">
+        {slots.isLoading ? "Looking up free times…" : ""}
+      </p>
       <p className="text-sm text-ink-soft">
         Free times from {formatCalendarDate(from, "short")} to {formatCalendarDate(lastDay, "short")}, {shopTimesCaption(timeZone)}.
       </p>
@@ -81,9 +84,7 @@ export function OfferBooking({ token, timeZone, firstDay, windowDays, phone }: O
             Try again
           </button>
         </div>
-      ) : !slots.data ? (
-        <p role="status">Looking up free times…</p>
-      ) : day ? (
+      ) : !slots.data ? null : day ? (
         <SlotPicker
           days={days}
           day={day}

@@ -14,11 +14,11 @@ import type { PublicOffer } from "@/lib/offers/public-offer";
 export function OfferLines({ offer }: { offer: PublicOffer }) {
   const prices = new Set(offer.lines.map((line) => line.priceCents));
   return (
-    <section aria-labelledby="offer-tires-heading" className="flex flex-col gap-3">
-      <h2 id="offer-tires-heading" className="text-xl font-semibold">
+    <section aria-labelledby="offer-tires-heading" className="grid gap-3 md:grid-cols-[minmax(0,1fr)_22rem] md:items-start print:grid-cols-[minmax(0,1fr)_22rem]">
+      <h2 id="offer-tires-heading" className="text-xl font-semibold md:col-span-2 print:col-span-2">
         The tires
       </h2>
-      <ul className="grid gap-3 md:grid-cols-2 print:grid-cols-2 print:gap-1">
+      <ul className="flex flex-col gap-3 print:gap-1">
         {offer.lines.map(({ tire, quantity, priceCents, verdict }) => (
           <li key={tire.sku} className="rounded border border-rule bg-sheet p-4 print:break-inside-avoid" data-sku={tire.sku}>
             <h3 className="font-semibold">
@@ -42,11 +42,16 @@ export function OfferLines({ offer }: { offer: PublicOffer }) {
           </li>
         ))}
       </ul>
-      <div className="flex flex-col gap-1 md:max-w-md">
+      <div className="flex flex-col gap-1">
         <EstimateBreakdown estimate={offer.estimate} level={3} mixedPrices={prices.size > 1} className="bg-sheet print:p-1" />
         <p className="text-sm">
-          Priced on {formatDay(offer.createdAt, { timeZone: offer.timeZone, long: true })}; valid until the end of{" "}
-          <span className="font-semibold">{formatCalendarDate(offer.validUntilDate, "long")}</span> ({offer.timeZone} time).
+          Priced on {formatDay(offer.createdAt, { timeZone: offer.timeZone, long: true })}
+          {offer.status === "open" ? (
+            <>
+              ; valid until the end of <span className="font-semibold">{formatCalendarDate(offer.validUntilDate, "long")}</span> ({offer.timeZone} time)
+            </>
+          ) : null}
+          .
         </p>
       </div>
     </section>

@@ -10,13 +10,16 @@ export interface SlotDay {
 }
 
 /**
- * Free times grouped by the shop's calendar day, in order. Every start carries the shop's own offset
- * (2026-12-08T09:00:00-05:00), so its first ten characters are the shop's local date.
+ * The shop's local date of a time the API gives: every time carries the shop's own offset
+ * (2026-12-08T09:00:00-05:00), so its first ten characters are that date.
  */
+export const shopDateOf = (time: string): string => time.slice(0, 10);
+
+/** Free times grouped by the shop's calendar day, in order. */
 export function slotDays(slots: readonly FreeSlot[]): SlotDay[] {
   const days: SlotDay[] = [];
   for (const slot of slots) {
-    const date = slot.start.slice(0, 10);
+    const date = shopDateOf(slot.start);
     const last = days.at(-1);
     if (last?.date === date) last.slots.push(slot);
     else days.push({ date, slots: [slot] });

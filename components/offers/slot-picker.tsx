@@ -19,12 +19,12 @@ export function SlotPicker({ days, day, chosen, timeZone, onDay, onChoose }: Slo
     <div className="flex flex-col gap-4">
       <fieldset>
         <legend className="font-semibold">Day</legend>
-        <div className="mt-2 grid grid-cols-2 gap-2 sm:grid-cols-4 lg:grid-cols-7">
+        <div className="mt-2 grid grid-cols-[repeat(auto-fill,minmax(9rem,1fr))] gap-2">
           {days.map(({ date, slots }) => (
             <label key={date} className={optionClass}>
               <input type="radio" name="fitting-day" value={date} checked={date === day.date} onChange={() => onDay(date)} className="size-4 accent-accent" />
               <span>
-                {formatCalendarDate(date, "short")}
+                <span className="whitespace-nowrap">{formatCalendarDate(date, "short")}</span>
                 <span className="block text-xs font-normal text-ink-soft">{slots.length} free</span>
               </span>
             </label>
@@ -33,11 +33,11 @@ export function SlotPicker({ days, day, chosen, timeZone, onDay, onChoose }: Slo
       </fieldset>
       <fieldset>
         <legend className="font-semibold">Time on {formatCalendarDate(day.date, "full")}</legend>
-        <div className="mt-2 grid grid-cols-3 gap-2 sm:grid-cols-4 lg:grid-cols-6">
+        <div className="mt-2 grid grid-cols-[repeat(auto-fill,minmax(6.5rem,1fr))] gap-2">
           {day.slots.map((slot) => (
             <label key={slot.start} className={optionClass}>
               <input type="radio" name="fitting-time" value={slot.start} checked={slot.start === chosen} onChange={() => onChoose(slot)} className="size-4 accent-accent" />
-              {formatTime(slot.start, { timeZone })}
+              <span className="whitespace-nowrap">{formatTime(slot.start, { timeZone })}</span>
             </label>
           ))}
         </div>
