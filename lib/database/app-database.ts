@@ -12,6 +12,9 @@ async function openAppDatabase(): Promise<DatabaseHandle> {
     if (env.DEMO_SEED === "on") {
       await seedDemoDataIfEmpty(handle.db);
       await seedDemoAccounts(handle.db);
+      // Loaded here, not at the top: the offers it makes read the shop through modules that import this one.
+      const { seedDemoRequestsIfEmpty } = await import("@/lib/demo/requests");
+      await seedDemoRequestsIfEmpty(handle.db);
     }
     return handle;
   } catch (error) {

@@ -1,13 +1,15 @@
 import { sql } from "drizzle-orm";
 import type { Database } from "@/db/client";
-import { brand, stockFitment, stockItem, tireLine, type NewTireLine } from "@/db/schema";
+import { brand, fitCard, quoteRequest, stockFitment, stockItem, tireLine, type NewTireLine } from "@/db/schema";
 import { buildStockRow } from "@/lib/stock/build-stock-row";
 import { insertStockRows } from "@/lib/stock/insert-stock-rows";
 import { CATEGORY_TRAITS, DEMO_BRANDS, type LineCategory } from "./catalog-lines";
 import { generateStock, type CatalogPlan } from "./catalog-stock";
 
-/** Empties the catalog, children first. */
+/** Empties the catalog, children first: requests (with their offers) and Fit cards name its items. */
 export async function clearCatalog(db: Database): Promise<void> {
+  await db.delete(quoteRequest);
+  await db.delete(fitCard);
   await db.delete(stockItem);
   await db.delete(stockFitment);
   await db.delete(tireLine);
