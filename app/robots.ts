@@ -3,7 +3,7 @@ import { siteUrl } from "@/lib/env/site-url";
 
 export default function robots(): MetadataRoute.Robots {
   return {
-    rules: { userAgent: "*", allow: "/", disallow: ["/api/", "/counter", "/account", "/s/"] },
+    rules: { userAgent: "*", allow: "/", disallow: ["/api/", "/counter", "/account", "/s/", "/o/"] },
     sitemap: new URL("/sitemap.xml", siteUrl()).toString(),
   };
 }

@@ -10,3 +10,7 @@ export const safetyCautions = [
   "Have tires mounted and balanced by a qualified fitter.",
   "Local rules and the vehicle and tire makers' guidance prevail over anything shown here.",
 ] as const;
+
+/** Shown beside a tire that does not meet every rule of equal-or-better for the tire on the car. */
+export const notEqualOrBetterCaution =
+  "Check your vehicle's tire placard and ask a qualified fitter before choosing this tire: it does not meet every rule for the tire on your car.";

@@ -1,5 +1,6 @@
 import Link from "next/link";
 import type { ReactNode } from "react";
+import { PhoneLink } from "@/components/ui/phone-link";
 import type { EmailStatus } from "@/db/schema";
 import { sourceHref, sourceLabels } from "@/lib/quotes/labels";
 import type { QuoteRequestDetail } from "@/lib/quotes/queries";
@@ -13,7 +14,7 @@ export function RequestFields({ request, timeZone }: { request: QuoteRequestDeta
   const rows: [string, ReactNode][] = [
     ["Received", <time key="t" dateTime={request.createdAt.toISOString()}>{formatDateTime(request.createdAt, { timeZone })}</time>],
     ["E-mail", <a key="e" href={`mailto:${request.email}`} className="break-all text-accent underline underline-offset-4">{request.email}</a>],
-    ["Phone", request.phone ? <a key="p" href={`tel:${request.phone.replace(/[^\d+]/g, "")}`} className="text-accent underline underline-offset-4">{request.phone}</a> : "not given"],
+    ["Phone", request.phone ? <PhoneLink key="p" phone={request.phone} className="text-accent underline underline-offset-4" /> : "not given"],
     ["Vehicle", request.vehicle],
     [
       "Tires",

@@ -1,9 +1,9 @@
 import type { CardTire } from "@/lib/fit-cards/read-card";
 import { formatPrice } from "@/lib/money/money";
-import { formatServiceDescription, formatSignedPercent } from "@/lib/tire";
-import { RuleNotes } from "@/components/ui/rule-notes";
 import { EstimateBreakdown } from "@/components/ui/estimate-breakdown";
 import { StockLine } from "@/components/ui/stock-line";
+import { TireSizeLine } from "@/components/ui/tire-size-line";
+import { TireVerdictList } from "@/components/ui/tire-verdict";
 
 function priceLine(tire: CardTire): string {
   if (!tire.stillStocked) return `${formatPrice(tire.priceCentsAtSave)} when saved · no longer stocked`;
@@ -28,24 +28,10 @@ export function FitCardTires({ tires, needed }: { tires: CardTire[]; needed: num
             <h3 className="font-semibold">
               {tire.brand} {tire.line}
             </h3>
-            <p className="font-mono text-sm">
-              {tire.designation} {formatServiceDescription(tire)}
-              {tire.extraLoad ? " XL" : ""}
-              {tire.loadRange ? ` LR ${tire.loadRange}` : ""}
-              <span className="ml-2 text-ink-soft">({formatSignedPercent(tire.diameterDiffPct)} diameter)</span>
-            </p>
+            <TireSizeLine tire={tire} diameterDiffPct={tire.diameterDiffPct} />
             <p className="mt-1 font-semibold">{priceLine(tire)}</p>
             {tire.stillStocked ? <StockLine quantity={tire.quantity} needed={needed} /> : <p className="text-sm text-ink-soft">Ask the shop for a current choice</p>}
-            <p className="mt-2 text-sm font-semibold">{tire.equalOrBetter ? "Equal or better than the tire on the car:" : "Differs from the tire on the car:"}</p>
-            <ul className={`text-sm ${tire.equalOrBetter ? "" : "text-danger"}`}>
-              {tire.reasons.map((reason) => (
-                <li key={reason} className="flex gap-1.5">
-                  <span aria-hidden="true">{tire.equalOrBetter ? "✓" : "!"}</span>
-                  {reason}
-                </li>
-              ))}
-            </ul>
-            {tire.notes.length > 0 ? <RuleNotes notes={tire.notes} /> : null}
+            <TireVerdictList verdict={tire} />
             {tire.stillStocked ? <EstimateBreakdown estimate={tire.estimate} className="mt-3 print:p-1" /> : null}
           </li>
         ))}

@@ -1,3 +1,4 @@
+import { PhoneLink } from "@/components/ui/phone-link";
 import type { ShopContact } from "@/lib/shop/queries";
 
 /** Where to go with the card: the shop's address, phone, e-mail and hours. */
@@ -10,9 +11,7 @@ export function ShopCard({ shop }: { shop: ShopContact }) {
       <address className="mt-1 not-italic">
         {shop.streetAddress}, {shop.town}, {shop.region} {shop.postalCode}
         <br />
-        <a className="underline" href={`tel:${shop.phone.replace(/[^\d+]/g, "")}`}>
-          {shop.phone}
-        </a>{" "}
+        <PhoneLink phone={shop.phone} />{" "}
         ·{" "}
         <a className="underline" href={`mailto:${shop.email}`}>
           {shop.email}

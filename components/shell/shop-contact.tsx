@@ -1,3 +1,4 @@
+import { PhoneLink } from "@/components/ui/phone-link";
 import type { ShopContact } from "@/lib/shop/queries";
 
 /** The shop's address, phone and hours, one line in the footer. */
@@ -7,9 +8,7 @@ export function ShopContactLine({ contact }: { contact: ShopContact | null }) {
     <address className="not-italic">
       <span className="font-semibold text-ink">{contact.name}</span> · {contact.streetAddress}, {contact.town},{" "}
       {contact.region} {contact.postalCode} ·{" "}
-      <a className="underline" href={`tel:${contact.phone.replace(/[^\d+]/g, "")}`}>
-        {contact.phone}
-      </a>{" "}
+      <PhoneLink phone={contact.phone} />{" "}
       · {contact.openingHours}
     </address>
   );

@@ -4,20 +4,30 @@ import { formatPrice } from "@/lib/money/money";
 
 export const ESTIMATE_CAVEAT = "Estimate — the shop confirms the price.";
 
+interface EstimateBreakdownProps {
+  estimate: Estimate;
+  className?: string;
+  /** The title's heading level where the breakdown sits under an h2 rather than an h3. */
+  level?: 3 | 4;
+  /** A package of tires at different prices: its tires' row gives the count alone (the lines above give each price). */
+  mixedPrices?: boolean;
+}
+
 /**
  * What a set costs out the door, line by line: the tires, fitting, disposal and fees, tax and the
  * total, marked as an estimate the shop confirms. Figures come from lib/money/estimate.ts.
  */
-export function EstimateBreakdown({ estimate, className = "" }: { estimate: Estimate; className?: string }) {
+export function EstimateBreakdown({ estimate, className = "", level = 4, mixedPrices = false }: EstimateBreakdownProps) {
   const id = useId();
+  const Title = level === 3 ? "h3" : "h4";
   const { quantity } = estimate;
-  const each = estimate.tiresCents / quantity;
-  const rows = estimateRows(estimate, `${quantity} ${quantity === 1 ? "tire" : "tires"} × ${formatPrice(each)}`);
+  const tires = `${quantity} ${quantity === 1 ? "tire" : "tires"}`;
+  const rows = estimateRows(estimate, mixedPrices ? tires : `${tires} × ${formatPrice(estimate.tiresCents / quantity)}`);
   return (
     <section aria-labelledby={`${id}-title`} data-estimate-total={estimate.totalCents} className={`rounded border border-rule p-3 text-sm ${className}`}>
-      <h4 id={`${id}-title`} className="font-semibold">
+      <Title id={`${id}-title`} className="font-semibold">
         Out the door for {quantity}: {formatPrice(estimate.totalCents)}
-      </h4>
+      </Title>
       <dl className="mt-1 grid grid-cols-[minmax(0,1fr)_auto]">
         {rows.map(([label, cents]) => (
           <div key={label} className="contents">

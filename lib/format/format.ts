@@ -23,6 +23,32 @@ export function formatDay(date: Date | string, { timeZone = DEFAULT_TIME_ZONE, l
   return dateFormat({ dateStyle: long ? "long" : "medium", timeZone }).format(new Date(date));
 }
 
+const CALENDAR_STYLES = {
+  medium: { dateStyle: "medium" },
+  long: { dateStyle: "long" },
+  full: { dateStyle: "full" },
+  short: { weekday: "short", month: "short", day: "numeric" },
+} satisfies Record<string, Intl.DateTimeFormatOptions>;
+
+/**
+ * A calendar date written YYYY-MM-DD (an offer's last day, a day of fitting times), which is the same
+ * day in every zone: "Dec 8, 2026", "December 8, 2026" (long), "Tuesday, December 8, 2026" (full)
+ * or "Tue, Dec 8" (short).
+ */
+export function formatCalendarDate(date: string, style: keyof typeof CALENDAR_STYLES = "medium"): string {
+  return dateFormat({ ...CALENDAR_STYLES[style], timeZone: "UTC" }).format(new Date(`${date}T00:00:00Z`));
+}
+
+/** A calendar date (YYYY-MM-DD) some days later, or earlier: plain calendar arithmetic, in the browser too. */
+export function addCalendarDays(date: string, days: number): string {
+  return new Date(Date.parse(`${date}T00:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
+}
+
+/** "3:05 PM": a time of day alone, for a list whose caption names the zone (`shopTimesCaption`). */
+export function formatTime(date: Date | string, { timeZone = DEFAULT_TIME_ZONE } = {}): string {
+  return dateFormat({ hour: "numeric", minute: "2-digit", timeZone }).format(new Date(date));
+}
+
 /**
  * "Dec 4, 2026, 3:05 PM EST": a time that says which zone it is in, by the zone's short name
  * ("HST", or "GMT+1" where English has no abbreviation); with `seconds`, "3:05:09 PM EST".

@@ -142,6 +142,7 @@ export const PAGE_WALKS: Record<string, { path: string; as?: Caller; names?: str
   "forgot-password/page.tsx": { path: "/forgot-password" },
   "learn/[topic]/page.tsx": { path: "/learn/{topic}" },
   "learn/page.tsx": { path: "/learn" },
+  "o/[token]/page.tsx": { path: "/o/{token}" },
   "plus/page.tsx": { path: "/plus", names: ["size", "loadIndex", "speedSymbol", "tolerancePct"] },
   "replace/page.tsx": { path: "/replace", names: ["size", "loadIndex", "speedSymbol", "brand", "season", "minPriceCents", "gawrFront", "vehicle", "quantity", "sort"] },
   "reset-password/page.tsx": { path: "/reset-password", names: ["token", "error"] },
