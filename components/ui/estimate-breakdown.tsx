@@ -8,12 +8,12 @@ export const ESTIMATE_CAVEAT = "Estimate — the shop confirms the price.";
  * What a set costs out the door, line by line: the tires, fitting, disposal and fees, tax and the
  * total, marked as an estimate the shop confirms. Figures come from lib/money/estimate.ts.
  */
-export function EstimateBreakdown({ estimate, className = "" }: { estimate: Estimate; className?: string }) {
+export function EstimateBreakdown({ estimate, mixed = false, className = "" }: { estimate: Estimate; mixed?: boolean; className?: string }) {
   const id = useId();
   const { quantity } = estimate;
-  const each = estimate.tiresCents / quantity;
+  const tires = `${quantity} ${quantity === 1 ? "tire" : "tires"}`;
   const rows: [string, number][] = [
-    [`${quantity} ${quantity === 1 ? "tire" : "tires"} × ${formatPrice(each)}`, estimate.tiresCents],
+    [mixed ? tires : `${tires} × ${formatPrice(estimate.tiresCents / quantity)}`, estimate.tiresCents],
     ["Fitting", estimate.servicesCents],
     ["Disposal & fees", estimate.feesCents],
     ["Tax", estimate.taxCents],

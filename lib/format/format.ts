@@ -32,6 +32,16 @@ export function formatDateTime(date: Date | string, { timeZone = DEFAULT_TIME_ZO
   return dateFormat({ year: "numeric", month: "short", day: "numeric", hour: "numeric", minute: "2-digit", second, timeZoneName: "short", timeZone }).format(new Date(date));
 }
 
+/** "3:05 PM EST": a time of day that names its zone, for lists already grouped by day. */
+export function formatTime(date: Date | string, { timeZone = DEFAULT_TIME_ZONE } = {}): string {
+  return dateFormat({ hour: "numeric", minute: "2-digit", timeZoneName: "short", timeZone }).format(new Date(date));
+}
+
+/** "Friday, December 4, 2026": a local date (YYYY-MM-DD) as a heading, read as the date it names whatever the zone. */
+export function formatLocalDate(day: string, { long = true } = {}): string {
+  return dateFormat({ dateStyle: long ? "full" : "medium", timeZone: "UTC" }).format(new Date(`${day}T12:00:00Z`));
+}
+
 /** "times in America/New_York (the shop's time)": the caption of a list of times in the shop's zone. */
 export const shopTimesCaption = (timeZone: string): string => `times in ${timeZone} (the shop's time)`;
 
