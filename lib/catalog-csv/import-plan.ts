@@ -1,3 +1,4 @@
+import { belowHeldMessage } from "@/lib/fittings";
 import { inArray } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { stockItem, type NewStockItem } from "@/db/schema";
@@ -23,8 +24,9 @@ const COMPARED_FIELDS = ["lineId", "designation", "loadIndex", "loadIndexDual", 
 const existingColumns = {
   sku: stockItem.sku,
   retired: stockItem.retired,
+  heldQuantity: stockItem.heldQuantity,
   ...Object.fromEntries(COMPARED_FIELDS.map((field) => [field, stockItem[field]])),
-} as { sku: typeof stockItem.sku; retired: typeof stockItem.retired } & { [F in (typeof COMPARED_FIELDS)[number]]: (typeof stockItem)[F] };
+} as { sku: typeof stockItem.sku; retired: typeof stockItem.retired; heldQuantity: typeof stockItem.heldQuantity } & { [F in (typeof COMPARED_FIELDS)[number]]: (typeof stockItem)[F] };
 
 /** The brand list and the current items of retired lines, which rows are judged against (lineJudge). */
 export async function readCatalogLines(db: Database): Promise<CatalogLines> {
@@ -56,6 +58,8 @@ export async function planImport(db: Database, rows: readonly LinedRow[]): Promi
     const current = existing.get(stockRow.sku);
     if (current?.retired) {
       plan.refusals.push({ line: row.line, column: "sku", reason: `SKU "${stockRow.sku}" is retired; give the item a new SKU` });
+    } else if (current && stockRow.quantityOnHand < current.heldQuantity) {
+      plan.refusals.push({ line: row.line, column: "quantity", reason: `${belowHeldMessage(current.heldQuantity)} Mark or cancel those fittings at the Counter first` });
     } else if (!current) {
       plan.added.push(stockRow);
     } else if (COMPARED_FIELDS.some((field) => current[field] !== (stockRow[field] ?? null))) {

@@ -1,3 +1,4 @@
+import { isCheckViolation } from "@/lib/database/unique-violation";
 import { sql } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { stockItem, type NewStockItem } from "@/db/schema";
@@ -62,7 +63,8 @@ export async function importCatalogCsv(
   if (!read.ok) return read;
   if (read.headerRefused) return { ok: true, report: { added: 0, updated: 0, unchanged: 0, refused: read.refusals, written: false } };
 
-  const report = await db.transaction(async (tx): Promise<CatalogImportReport> => {
+  // A hold booked between the plan and the write fails the held check (stock_item_held): plan again once, and the row is refused.
+  const importOnce = () => db.transaction(async (tx): Promise<CatalogImportReport> => {
     const lines = judgeRowLines(read.rows, lineJudge(await readCatalogLines(tx)));
     const plan = await planImport(tx, lines.lined);
     const refused = [...read.refusals, ...lines.refusals, ...plan.refusals].sort(byLine);
@@ -76,6 +78,10 @@ export async function importCatalogCsv(
       await recordAudit(tx, actor, [{ action: "catalog_import", subject: file.name, summary }]);
     }
     return { added: plan.added.length, updated: plan.updated.length, unchanged: plan.unchanged, refused, written };
+  });
+  const report = await importOnce().catch((error: unknown) => {
+    if (isCheckViolation(error, "stock_item_held")) return importOnce();
+    throw error;
   });
   return { ok: true, report };
 }

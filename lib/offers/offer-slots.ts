@@ -1,4 +1,4 @@
-import { and, gt, inArray, lt } from "drizzle-orm";
+import { and, eq, gt, inArray, lt } from "drizzle-orm";
 import { z } from "zod";
 import type { Database } from "@/db/client";
 import { offer } from "@/db/schema";
@@ -51,9 +51,10 @@ export async function freeSlotsWith(db: Database, settings: ShopSettings, { from
   });
 }
 
-/** GET …/slots: the free times from a day (default today), for the shop as it is set up now. */
-export async function readFreeSlots(db: Database, { from, now = new Date() }: { from?: string; now?: Date }): Promise<SlotList | null> {
-  const settings = await readShopSettings(db);
+/** GET …/slots: the free times from a day (default today) for an offer's driver; null for an unknown token. */
+export async function readOfferSlots(db: Database, token: string, { from, now = new Date() }: { from?: string; now?: Date }): Promise<SlotList | null> {
+  const [known] = await db.select({ id: offer.id }).from(offer).where(eq(offer.token, token));
+  const settings = known ? await readShopSettings(db) : null;
   if (!settings) return null;
   return { timeZone: settings.timeZone, slots: await freeSlotsWith(db, settings, { from, now }) };
 }

@@ -1,3 +1,5 @@
+import { isCheckViolation } from "@/lib/database/unique-violation";
+import { belowHeldRefusal } from "@/lib/offers/held-refusal";
 import { and, eq, sql } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import { brand, stockItem, tireLine } from "@/db/schema";
@@ -108,6 +110,16 @@ export async function createStockItem(db: Database, body: NewStockItemBody, acto
  * stay on a retired line (its stock is still sold) but not move onto one.
  */
 export async function updateStockItem(db: Database, sku: string, changes: StockItemChanges, actor: Actor): Promise<StockWriteResult> {
+  try {
+    return await writeItemChanges(db, sku, changes, actor);
+  } catch (error) {
+    // The database keeps the held count within what is on hand: name the fittings that hold the tires.
+    if (isCheckViolation(error, "stock_item_held")) return refuse("held_for_fittings", await belowHeldRefusal(db, sku), "quantity");
+    throw error;
+  }
+}
+
+function writeItemChanges(db: Database, sku: string, changes: StockItemChanges, actor: Actor): Promise<StockWriteResult> {
   return db.transaction(async (tx) => {
     const current = await findCurrent(tx, sku);
     if (!current) return refuse("not_found", `No current catalog item has the SKU "${sku}".`);

@@ -17,6 +17,10 @@ export const PUBLIC_HANDLERS = [
   "v1/compare/route.ts#GET",
   "v1/decode/route.ts#GET",
   "v1/fit-cards/[slug]/route.ts#GET",
+  "v1/offers/[token]/route.ts#GET",
+  "v1/offers/[token]/slots/route.ts#GET",
+  "v1/offers/[token]/accept/route.ts#POST",
+  "v1/offers/[token]/cancel/route.ts#POST",
   "v1/openapi.json/route.ts#GET",
   "v1/plus/route.ts#GET",
   "v1/quote-requests/form-token/route.ts#GET",
@@ -56,6 +60,10 @@ export const MATRIX: { file: string; method: string; path: string; body?: unknow
   { file: "v1/catalog/import/route.ts", method: "POST", path: "/api/v1/catalog/import", expected: { anonymous: 401, customer: 403, staff: 400, admin: 400 } },
   { file: "v1/catalog/export/route.ts", method: "GET", path: "/api/v1/catalog/export", expected: { anonymous: 401, customer: 403, staff: 200, admin: 200 } },
   { file: "v1/quote-requests/route.ts", method: "GET", path: "/api/v1/quote-requests", expected: { anonymous: 401, customer: 403, staff: 200, admin: 200 } },
+  {
+    file: "v1/quote-requests/[id]/offers/route.ts", method: "POST", path: `/api/v1/quote-requests/${NO_SUCH_ID}/offers`, params: { id: NO_SUCH_ID },
+    body: { lines: [{ sku: "NO-SUCH-SKU", quantity: 4 }] }, expected: { anonymous: 401, customer: 403, staff: 422, admin: 422 },
+  },
   // A tolerance outside 1–5 % is refused after the guard, so nothing changes.
   { file: "v1/shop/route.ts", method: "PATCH", path: "/api/v1/shop", body: { tolerancePct: 9 }, expected: { anonymous: 401, customer: 403, staff: 403, admin: 400 } },
   { file: "v1/brands/route.ts", method: "POST", path: "/api/v1/brands", body: {}, expected: { anonymous: 401, customer: 403, staff: 400, admin: 400 } },

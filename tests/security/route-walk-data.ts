@@ -17,6 +17,8 @@ export interface ApiWalk {
 }
 
 const SLUG = "N".repeat(24);
+/** An offer token no offer has. */
+const OFFER_TOKEN = "N".repeat(32);
 /** A brand or line id no row has: a body the walk spoils into a valid one still changes nothing (404). */
 const NO_SUCH_ID = "2147483647";
 const LINE = { name: "Walk Line", season: "all-season", terrain: "highway", threePeak: false, treadDepth32: 10 };
@@ -74,6 +76,11 @@ export const API_WALKS: Record<string, ApiWalk[]> = {
     { method: "GET", path: "/api/v1/catalog/export", as: "staff", query: { base: "", names: ["q", "brand", "season", "terrain", "rim", "stock", "sort", "dir", "page"] } },
   ],
   "v1/catalog/import/route.ts": [{ method: "POST", path: "/api/v1/catalog/import", as: "staff", multipart: true }],
+  "v1/offers/[token]/route.ts": [{ method: "GET", path: "/api/v1/offers/{token}" }],
+  "v1/offers/[token]/slots/route.ts": [{ method: "GET", path: `/api/v1/offers/${OFFER_TOKEN}/slots`, query: { base: "from=2026-12-07", names: ["from"] } }],
+  // An unknown token: every spoiled body still reaches no offer.
+  "v1/offers/[token]/accept/route.ts": [{ method: "POST", path: `/api/v1/offers/${OFFER_TOKEN}/accept`, body: { slotStart: "2026-12-07T09:00:00-05:00" } }],
+  "v1/offers/[token]/cancel/route.ts": [{ method: "POST", path: "/api/v1/offers/{token}/cancel" }],
   "v1/compare/route.ts": [{ method: "GET", path: "/api/v1/compare", query: { base: "sizes=265-70R17,285-70R17", names: ["sizes"] } }],
   "v1/decode/route.ts": [{ method: "GET", path: "/api/v1/decode", query: { base: "q=285%2F50R20", names: ["q"] } }],
   "v1/fit-cards/route.ts": [
@@ -93,6 +100,11 @@ export const API_WALKS: Record<string, ApiWalk[]> = {
       body: { name: "Walker", email: "walker@example.test", vehicle: "2019 family SUV", tires: "235/65R17", quantity: 4, source: "size-sheet", skus: ["WALK-1"], website: "", renderedAt: "1.unsigned" },
     },
     { method: "GET", path: "/api/v1/quote-requests", as: "staff", query: { base: "", names: ["status", "page"] } },
+  ],
+  "v1/quote-requests/[id]/offers/route.ts": [
+    { method: "POST", path: "/api/v1/quote-requests/{id}/offers", as: "staff" },
+    // No such request and no such SKU: nothing is offered, however the body is spoiled.
+    { method: "POST", path: `/api/v1/quote-requests/${NO_SUCH_ID}/offers`, as: "staff", body: { lines: [{ sku: "NO-SUCH-SKU", quantity: 4 }], validUntil: "2026-12-20", message: "walk" } },
   ],
   "v1/quote-requests/form-token/route.ts": [{ method: "GET", path: "/api/v1/quote-requests/form-token" }],
   "v1/shop/route.ts": [

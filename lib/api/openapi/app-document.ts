@@ -3,12 +3,13 @@ import type { ApiOperation } from "./operation";
 import { BRAND_ROUTES } from "./routes-brands";
 import { CARD_ROUTES } from "./routes-cards";
 import { CATALOG_ROUTES } from "./routes-catalog";
+import { OFFER_ROUTES } from "./routes-offers";
 import { PUBLIC_ROUTES } from "./routes-public";
 import { QUOTE_ROUTES } from "./routes-quotes";
 import { SHOP_ROUTES } from "./routes-shop";
 
 /** Every route of the API: a new route file needs its entry here (the document's test lists the files). */
-export const API_OPERATIONS: readonly ApiOperation[] = [...PUBLIC_ROUTES, ...CATALOG_ROUTES, ...BRAND_ROUTES, ...CARD_ROUTES, ...QUOTE_ROUTES, ...SHOP_ROUTES];
+export const API_OPERATIONS: readonly ApiOperation[] = [...PUBLIC_ROUTES, ...CATALOG_ROUTES, ...BRAND_ROUTES, ...CARD_ROUTES, ...QUOTE_ROUTES, ...OFFER_ROUTES, ...SHOP_ROUTES];
 
 let built: OpenApiDocument | undefined;
 
