@@ -8,6 +8,7 @@ import { FITTING_OUTCOMES } from "@/lib/tire";
 import { skuSchema } from "@/lib/validation/sku";
 import { createOffer } from "./create-offer";
 import { fittingOutcomeWords } from "./labels";
+import { notifyFittingCancelled, notifyOfferSent } from "./notify";
 import { newOfferSchema, offerIdParamsSchema } from "./offer-input";
 import { readOfferTire, type OfferTire } from "./offer-tire";
 import { markFitting as markStoredFitting, withdrawOffer as withdrawStoredOffer } from "./staff-offers";
@@ -40,8 +41,14 @@ export const sendOffer = withAction({ role: "staff", input: sendOfferSchema }, a
     if (created.code === "not_found") return { ok: false, status: 404, message: created.message };
     return { ok: false, status: 400, message: created.message, fieldErrors: { [created.field ?? "form"]: created.message } };
   }
+  const emailed = await notifyOfferSent(db, created.offer.id);
   refreshOffers(requestId);
-  return { ok: true, data: { id: created.offer.id, url: created.offer.url }, message: `Offer #${created.offer.id} saved: give the driver its link.` };
+  const { id, url } = created.offer;
+  return {
+    ok: true,
+    data: { id, url, emailed },
+    message: emailed ? `Offer #${id} sent: the driver has it by e-mail.` : `Offer #${id} saved, but not e-mailed: give the driver its link.`,
+  };
 });
 
 /** Counter: withdraws an offer the driver has not accepted. */
@@ -56,6 +63,7 @@ export const withdrawOffer = withAction({ role: "staff", input: offerChangeSchem
 export const markFitting = withAction({ role: "staff", input: markFittingSchema }, async ({ db, user, input }) => {
   const changed = await markStoredFitting(db, user, input.id, input.outcome);
   if (!changed.ok) return changed;
+  if (input.outcome === "cancelled") await notifyFittingCancelled(db, input.id);
   refreshOffers(input.requestId);
   return { ok: true, data: undefined, message: `Fitting of offer #${input.id} marked ${fittingOutcomeWords[input.outcome].label.toLowerCase()}.` };
 });
