@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { formatDateTime, formatDay, shopTimesCaption } from "@/lib/format/format";
+import { formatDateTime, formatDay, formatLocalDate, formatTime, shopTimesCaption } from "@/lib/format/format";
 
 // 2026-12-05 14:14 UTC is 09:14 in New York (EST, UTC−5) and 04:14 in Honolulu (HST, UTC−10, no daylight saving);
 // 2026-07-05 14:14 UTC is 10:14 EDT (UTC−4). Offsets from the IANA time zone database.
@@ -19,6 +19,13 @@ describe("dates and times in the shop's time zone", () => {
     const lateEvening = new Date("2026-12-05T03:30:00Z");
     expect(formatDay(lateEvening, { timeZone: "America/New_York" })).toBe("Dec 4, 2026");
     expect(formatDay(lateEvening)).toBe("Dec 5, 2026");
+  });
+
+  it("give a time of day with its zone, and a local date as the date it names in any zone", () => {
+    expect(formatTime(winter, { timeZone: "America/New_York" })).toBe("9:14 AM EST");
+    expect(formatTime(summer, { timeZone: "America/New_York" })).toBe("10:14 AM EDT");
+    expect(formatLocalDate("2026-12-07")).toBe("Monday, December 7, 2026");
+    expect(formatLocalDate("2026-12-07", { long: false })).toBe("Dec 7, 2026");
   });
 
   it("name the zone in a list's caption", () => {
