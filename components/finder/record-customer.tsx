@@ -62,13 +62,13 @@ export function RecordCustomer({ tires, skus, quantity }: { tires: string; skus:
             <FormField id={`${id}-name`} label="Customer's name" error={errors.name}>
               {(control) => <input {...control} name="name" autoComplete="off" className={fieldClass} />}
             </FormField>
-            <FormField id={`${id}-email`} label="E-mail" hint="The offer's link goes here." error={errors.email}>
+            <FormField id={`${id}-email`} label="Customer's e-mail" hint="The offer's link goes here." error={errors.email}>
               {(control) => <input {...control} name="email" type="email" autoComplete="off" className={fieldClass} />}
             </FormField>
-            <FormField id={`${id}-phone`} label="Phone (optional)" error={errors.phone}>
+            <FormField id={`${id}-phone`} label="Customer's phone (optional)" error={errors.phone}>
               {(control) => <input {...control} name="phone" type="tel" autoComplete="off" className={fieldClass} />}
             </FormField>
-            <FormField id={`${id}-vehicle`} label="Vehicle" error={errors.vehicle}>
+            <FormField id={`${id}-vehicle`} label="Customer's vehicle" error={errors.vehicle}>
               {(control) => <input {...control} name="vehicle" autoComplete="off" className={fieldClass} />}
             </FormField>
             <FormField id={`${id}-quantity`} label="How many tires" error={errors.quantity}>
