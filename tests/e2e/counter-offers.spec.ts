@@ -54,7 +54,7 @@ test.describe("offers and fittings at the Counter", () => {
     await page.getByRole("button", { name: "Send the offer" }).click();
 
     const link = page.getByLabel("The offer's link");
-    await expect(link).toHaveValue(/\/o\/[A-Za-z0-9_-]{32}$/);
+    await expect(link).toHaveValue(/^https?:\/\/[^/]+\/o\/[A-Za-z0-9_-]{32}$/);
     const token = (await link.inputValue()).split("/o/")[1]!;
     const listed = page.locator("li[data-offer-id]").first();
     await expect(listed.locator("[data-offer-status]")).toHaveText("Open");
