@@ -48,7 +48,7 @@ export function OfferComposer({ requestId, quantity, namedTires, charges, validD
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-4 rounded border border-rule bg-sheet p-4">
       <OfferLines lines={lines} quantity={quantity} error={linesError} onChange={setLines} />
-      {estimate ? <EstimateBreakdown estimate={estimate} mixed={new Set(included.map((line) => line.tire.priceCents)).size > 1} /> : <p className="text-ink-soft">Tick at least one tire to see the estimate.</p>}
+      {estimate ? <EstimateBreakdown estimate={estimate} mixed={new Set(included.map((line) => line.tire.priceCents)).size > 1} className="max-w-md" /> : <p className="text-ink-soft">Tick at least one tire to see the estimate.</p>}
       <div className="grid gap-4 sm:grid-cols-[minmax(0,14rem)_minmax(0,1fr)]">
         <FormField id="offer-valid-until" label="Valid until" hint="The offer holds until the end of this day in the shop's time zone." error={errors.validUntil}>
           {(control) => <input {...control} type="date" required min={validDays.today} max={validDays.latest} value={validUntil} onChange={(event) => setValidUntil(event.target.value)} className={fieldClass} />}
