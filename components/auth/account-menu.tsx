@@ -2,32 +2,15 @@
 
 import Link from "next/link";
 import { useRouter } from "next/navigation";
-import { useEffect, useState } from "react";
 import { postAuth } from "./post-auth";
-
-type SessionState = "loading" | "signed-out" | { name: string };
+import { useBrowserSession } from "./use-browser-session";
 
 const linkClass = "inline-flex min-h-11 items-center px-2 font-semibold text-accent underline-offset-4 hover:underline";
 
 /** Sign in, or the signed-in person's account link and a sign-out button; read in the browser so pages stay static. */
 export function AccountMenu() {
   const router = useRouter();
-  const [state, setState] = useState<SessionState>("loading");
-
-  useEffect(() => {
-    let live = true;
-    fetch("/api/auth/get-session")
-      .then((response) => (response.ok ? response.json() : null))
-      .then((session: { user?: { name?: unknown } } | null) => {
-        if (!live) return;
-        const name = session?.user?.name;
-        setState(typeof name === "string" ? { name } : "signed-out");
-      })
-      .catch(() => live && setState("signed-out"));
-    return () => {
-      live = false;
-    };
-  }, []);
+  const [state, setState] = useBrowserSession();
 
   async function signOut() {
     await postAuth("sign-out", {});

@@ -9,6 +9,7 @@ const sections = [
   { href: "/counter/import", label: "Import & export", adminOnly: false },
   { href: "/counter/cards", label: "Fit cards", adminOnly: false },
   { href: "/counter/requests", label: "Requests", adminOnly: false },
+  { href: "/counter/fittings", label: "Fittings", adminOnly: false },
   { href: "/counter/outbox", label: "Outbox", adminOnly: false },
   { href: "/counter/team", label: "Team", adminOnly: true },
   { href: "/counter/audit", label: "Audit log", adminOnly: true },

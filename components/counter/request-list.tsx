@@ -1,5 +1,6 @@
 import Link from "next/link";
-import { QUOTE_STATUSES, type QuoteStatus } from "@/lib/tire";
+import { QUOTE_STATUSES, type OfferStatus, type QuoteStatus } from "@/lib/tire";
+import { OfferStatusBadge } from "./offer-status-badge";
 import { sourceLabels, statusLabels } from "@/lib/quotes/labels";
 import type { QuoteRequestListing, RequestListQuery } from "@/lib/quotes/queries";
 import { formatCount, formatDateTime, shopTimesCaption } from "@/lib/format/format";
@@ -25,8 +26,16 @@ export function RequestStatusBadge({ status }: { status: QuoteStatus }) {
   return <span className={`inline-block rounded border px-2 py-0.5 text-sm font-semibold ${statusBadge[status]}`}>{statusLabels[status]}</span>;
 }
 
-/** The inbox: a filter per status with its count (kept in the address), then the requests, newest first. */
-export function RequestList({ listing, query, timeZone }: { listing: QuoteRequestListing; query: RequestListQuery; timeZone: string }) {
+interface RequestListProps {
+  listing: QuoteRequestListing;
+  query: RequestListQuery;
+  timeZone: string;
+  /** Each listed request's latest offer's status, when it has one. */
+  offerStatuses: ReadonlyMap<number, OfferStatus>;
+}
+
+/** The inbox: a filter per status with its count (kept in the address), then the requests, newest first, each with its latest offer's status. */
+export function RequestList({ listing, query, timeZone, offerStatuses }: RequestListProps) {
   const all = QUOTE_STATUSES.reduce((sum, status) => sum + listing.counts[status], 0);
   const filters: { status: QuoteStatus | undefined; label: string; count: number }[] = [
     { status: undefined, label: "All", count: all },
@@ -66,7 +75,10 @@ export function RequestList({ listing, query, timeZone }: { listing: QuoteReques
                 <Link href={`/counter/requests/${request.id}`} prefetch={false} className={`${linkClass} break-all`}>
                   #{request.id} · {request.name}
                 </Link>
-                <RequestStatusBadge status={request.status} />
+                <span className="flex flex-wrap gap-2">
+                  <RequestStatusBadge status={request.status} />
+                  {offerStatuses.has(request.id) ? <OfferStatusBadge status={offerStatuses.get(request.id)!} prefix="Offer:" /> : null}
+                </span>
               </div>
               <p className="mt-1 break-words">
                 {request.quantity} × {request.tires}

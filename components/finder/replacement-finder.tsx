@@ -14,6 +14,7 @@ import { FinderFilters } from "./finder-filters";
 import { fitCardDraft } from "./fit-card-draft";
 import { FinderResults } from "./finder-results";
 import { OriginalSummary } from "./original-summary";
+import { RecordCustomer } from "./record-customer";
 import { PlacardForm } from "./placard-form";
 import { useAlternatives } from "./use-alternatives";
 
@@ -72,6 +73,7 @@ export function ReplacementFinder({ initialQuery, brands, defaultTolerancePct }:
         {data.first ? (
           <AskTheShop source="finder" tires={finderQuoteTires(data.first.original, picked)} catalogTires={quoteCatalogTires(picked)} quantity={setSizeOf(query)} />
         ) : null}
+        {data.first ? <RecordCustomer tires={finderQuoteTires(data.first.original, picked)} skus={picked.map((tire) => tire.sku)} quantity={setSizeOf(query)} /> : null}
       </div>
     </div>
   );

@@ -23,7 +23,7 @@ export type OfferCreation =
   | { ok: false; code: "not_found" | "invalid"; field?: string; message: string };
 
 /** The driver's page of an offer. */
-export const offerUrl = (token: string): string => `${siteUrl()}/o/${token}`;
+export const offerUrl = (token: string): string => new URL(`/o/${token}`, siteUrl()).toString();
 
 function validUntilProblem(validUntil: string, today: string): string | null {
   if (validUntil < today) return `validUntil ${validUntil} has passed: give today (${today}) or a later day`;

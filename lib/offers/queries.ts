@@ -13,6 +13,7 @@ export interface OfferLineSummary {
   line: string;
   designation: string;
   loadIndex: number;
+  loadIndexDual: number | null;
   speedSymbol: string;
   quantity: number;
   priceCents: number;
@@ -39,6 +40,7 @@ const lineColumns = {
   line: tireLine.name,
   designation: stockItem.designation,
   loadIndex: stockItem.loadIndex,
+  loadIndexDual: stockItem.loadIndexDual,
   speedSymbol: stockItem.speedSymbol,
   quantity: offerLine.quantity,
   priceCents: offerLine.priceCents,

@@ -5,7 +5,8 @@ import { z } from "zod";
 import { withAction } from "@/lib/auth/action";
 import { multiLineText } from "@/lib/validation/text";
 import { requestIdSchema } from "./queries";
-import { MAX_REPLY_LENGTH } from "./quote-input";
+import { storeQuoteRequest } from "./create-request";
+import { MAX_REPLY_LENGTH, walkInRequestSchema } from "./quote-input";
 import { changeQuoteStatus, replyToQuoteRequest } from "./staff-changes";
 import { formatCount } from "@/lib/format/format";
 
@@ -45,4 +46,14 @@ export const sendQuoteReply = withAction({ role: "staff", input: replySchema }, 
   return outcome.status === "sent"
     ? { ok: true, data: undefined, message: "Reply sent by e-mail and kept with the request." }
     : { ok: true, data: undefined, message: "Reply kept with the request, but the e-mail could not be sent. It is listed in the outbox; try again later or call the driver." };
+});
+
+/**
+ * Counter: a customer at the counter, recorded from the finder as a request with the tires picked,
+ * ready for an offer. Nobody is e-mailed: the shop is the one asking, and the customer gets the offer.
+ */
+export const recordWalkIn = withAction({ role: "staff", input: walkInRequestSchema }, async ({ db, input }) => {
+  const { id } = await storeQuoteRequest(db, { ...input, source: "counter" });
+  revalidatePath("/counter/requests");
+  return { ok: true, data: { id }, message: `Request #${id} recorded for ${input.name}.` };
 });

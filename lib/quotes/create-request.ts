@@ -33,13 +33,9 @@ async function storeNamedTires(db: Database, requestId: number, skus: readonly s
   await db.insert(quoteRequestTire).values(named.map((item, position) => ({ requestId, position, stockItemId: item.id })));
 }
 
-/**
- * Stores a driver's request, then e-mails it to the shop (replies go to the driver) and a
- * confirmation to the driver, at most 3 a day to one address, so that the form cannot be used to
- * flood someone else's inbox. The request is kept whatever happens to the e-mails.
- */
-export async function createQuoteRequest(db: Database, input: NewQuoteRequest): Promise<CreatedQuoteRequest> {
-  const row = await db.transaction(async (tx) => {
+/** Stores a request and the catalog tires it names, together; sends nothing. */
+export async function storeQuoteRequest(db: Database, input: NewQuoteRequest): Promise<{ id: number }> {
+  return db.transaction(async (tx) => {
     const [stored] = await tx
       .insert(quoteRequest)
       .values({
@@ -58,6 +54,15 @@ export async function createQuoteRequest(db: Database, input: NewQuoteRequest): 
     await storeNamedTires(tx, stored.id, input.skus ?? []);
     return stored;
   });
+}
+
+/**
+ * Stores a driver's request, then e-mails it to the shop (replies go to the driver) and a
+ * confirmation to the driver, at most 3 a day to one address, so that the form cannot be used to
+ * flood someone else's inbox. The request is kept whatever happens to the e-mails.
+ */
+export async function createQuoteRequest(db: Database, input: NewQuoteRequest): Promise<CreatedQuoteRequest> {
+  const row = await storeQuoteRequest(db, input);
 
   const summary: RequestSummary = { id: row.id, ...input, phone: input.phone ?? null, preferredDay: input.preferredDay ?? null };
   const shop = await getShopContact(db);

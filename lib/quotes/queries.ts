@@ -14,7 +14,7 @@ export const requestListQuerySchema = z.object({
   page: z.coerce.number().int().min(1).max(100_000).catch(1).default(1),
 });
 export const requestListApiQuerySchema = z.object({
-  status: z.enum(QUOTE_STATUSES, { error: "use new, answered or closed" }).optional(),
+  status: z.enum(QUOTE_STATUSES, { error: "use new, answered, offered or closed" }).optional(),
   page: z.coerce.number({ error: "use a whole number from 1" }).int().min(1).max(100_000).default(1),
 });
 export type RequestListQuery = z.infer<typeof requestListQuerySchema>;

@@ -104,3 +104,7 @@ export function quoteFieldErrors(error: z.ZodError): Record<string, string> {
   for (const issue of error.issues) errors[String(issue.path[0] ?? "form")] ??= issue.message;
   return errors;
 }
+
+/** A customer staff record at the counter from the finder: who, how to reach them, the car, and the tires picked. */
+export const walkInRequestSchema = quoteRequestSchema.pick({ name: true, email: true, phone: true, vehicle: true, tires: true, quantity: true, skus: true });
+export type WalkInRequest = z.infer<typeof walkInRequestSchema>;

@@ -92,6 +92,15 @@ export const ACTION_MATRIX: { file: string; action: string; input: unknown; expe
   },
   { file: "lib/quotes/actions.ts", action: "setQuoteStatus", input: { id: 999_999, status: "closed" }, expected: { anonymous: 401, customer: 403, staff: 404, admin: 404 } },
   { file: "lib/quotes/actions.ts", action: "sendQuoteReply", input: { id: 999_999, body: "Hello" }, expected: { anonymous: 401, customer: 403, staff: 404, admin: 404 } },
+  {
+    file: "lib/quotes/actions.ts", action: "recordWalkIn", input: { name: "Walk In", email: "walk-in@example.test", vehicle: "Van", tires: "225/65R17 102H", quantity: 4, skus: [] },
+    expected: { anonymous: 401, customer: 403, staff: 200, admin: 200 },
+  },
+  { file: "lib/offers/actions.ts", action: "findOfferTire", input: { sku: "NO-SUCH-SKU" }, expected: { anonymous: 401, customer: 403, staff: 404, admin: 404 } },
+  // The catalog is empty here, so the SKU is refused before the request is looked up.
+  { file: "lib/offers/actions.ts", action: "sendOffer", input: { requestId: 999_999, lines: [{ sku: "NO-SUCH-SKU", quantity: 4 }] }, expected: { anonymous: 401, customer: 403, staff: 400, admin: 400 } },
+  { file: "lib/offers/actions.ts", action: "withdrawOffer", input: { id: 999_999, requestId: 999_999 }, expected: { anonymous: 401, customer: 403, staff: 404, admin: 404 } },
+  { file: "lib/offers/actions.ts", action: "markFitting", input: { id: 999_999, requestId: 999_999, outcome: "fitted" }, expected: { anonymous: 401, customer: 403, staff: 404, admin: 404 } },
 ];
 
 
@@ -104,6 +113,7 @@ export const COUNTER_PAGES: { file: string; path: string; role: "staff" | "admin
   { file: "(catalog)/page.tsx", path: "/counter", role: "staff" },
   { file: "audit/page.tsx", path: "/counter/audit", role: "admin" },
   { file: "cards/page.tsx", path: "/counter/cards", role: "staff" },
+  { file: "fittings/page.tsx", path: "/counter/fittings", role: "staff" },
   { file: "import/page.tsx", path: "/counter/import", role: "staff" },
   { file: "items/[sku]/page.tsx", path: "/counter/items/{sku}", role: "staff" },
   { file: "items/new/page.tsx", path: "/counter/items/new", role: "staff" },

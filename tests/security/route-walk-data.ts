@@ -130,6 +130,7 @@ export const PAGE_WALKS: Record<string, { path: string; as?: Caller; names?: str
   "counter/(catalog)/page.tsx": { path: "/counter", as: "staff", names: ["q", "brand", "season", "rim", "stock", "sort", "dir", "page", "added"] },
   "counter/audit/page.tsx": { path: "/counter/audit", as: "admin", names: ["page"] },
   "counter/cards/page.tsx": { path: "/counter/cards", as: "staff", names: ["q", "page"] },
+  "counter/fittings/page.tsx": { path: "/counter/fittings", as: "staff", names: ["day", "view"] },
   "counter/import/page.tsx": { path: "/counter/import", as: "staff" },
   "counter/items/[sku]/page.tsx": { path: "/counter/items/{sku}", as: "staff" },
   "counter/items/new/page.tsx": { path: "/counter/items/new", as: "staff" },

@@ -21,6 +21,11 @@ describe("dates and times in the shop's time zone", () => {
     expect(formatDay(lateEvening)).toBe("Dec 5, 2026");
   });
 
+  it("give a local date as the date it names in any zone", () => {
+    expect(formatCalendarDate("2026-12-07", "full")).toBe("Monday, December 7, 2026");
+    expect(formatCalendarDate("2026-12-07")).toBe("Dec 7, 2026");
+  });
+
   it("name the zone in a list's caption", () => {
     expect(shopTimesCaption("Pacific/Honolulu")).toBe("times in Pacific/Honolulu (the shop's time)");
   });

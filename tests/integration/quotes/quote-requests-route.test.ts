@@ -134,7 +134,7 @@ describe("GET /api/v1/quote-requests", () => {
 
     const wrong = await callRoute(GET, "GET", "/api/v1/quote-requests?status=open", { cookie });
     expect(wrong.status).toBe(400);
-    expect((await wrong.json()).error.message).toBe('The parameter "status" is invalid: use new, answered or closed.');
+    expect((await wrong.json()).error.message).toBe('The parameter "status" is invalid: use new, answered, offered or closed.');
   });
 
   it("is not for customers", async () => {

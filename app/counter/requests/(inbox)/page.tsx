@@ -7,6 +7,7 @@ import { getDb } from "@/lib/database/app-database";
 import { requirePageUser } from "@/lib/auth/page-user";
 import { listQuoteRequests, requestListQuerySchema } from "@/lib/quotes/queries";
 import { readShopTimeZone } from "@/lib/shop/queries";
+import { latestOfferStatuses } from "@/lib/offers/queries";
 
 export const metadata: Metadata = { title: "Requests · Counter", robots: { index: false } };
 
@@ -17,12 +18,13 @@ export default async function RequestsPage({ searchParams }: { searchParams: Pro
   await connection();
   const db = await getDb();
   const [listing, timeZone] = await Promise.all([listQuoteRequests(db, query), readShopTimeZone(db)]);
+  const offerStatuses = await latestOfferStatuses(db, listing.requests.map((request) => request.id));
   return (
     <section>
       <PageIntro eyebrow="Counter · Staff" title="Price requests">
-        <p>What drivers asked through “Ask the shop”. Open one to reply by e-mail; the reply is kept with it.</p>
+        <p>What drivers asked through “Ask the shop”, and customers recorded at the counter. Open one to reply by e-mail or send a priced offer.</p>
       </PageIntro>
-      <RequestList listing={listing} query={query} timeZone={timeZone} />
+      <RequestList listing={listing} query={query} timeZone={timeZone} offerStatuses={offerStatuses} />
     </section>
   );
 }

@@ -14,6 +14,13 @@ import { getQuoteRequest, requestIdSchema } from "@/lib/quotes/queries";
 import { readShopTimeZone } from "@/lib/shop/queries";
 import { readQuoteLines } from "@/lib/quotes/quote-lines";
 import { RequestLines } from "@/components/counter/request-lines";
+import { OfferComposer } from "@/components/counter/offer-composer";
+import { RequestOffers } from "@/components/counter/request-offers";
+import { addLocalDays, todayIn } from "@/lib/fittings";
+import { DEFAULT_VALID_DAYS, MAX_LINE_QUANTITY, MAX_VALID_DAYS } from "@/lib/offers/offer-input";
+import { offerTireOf } from "@/lib/offers/offer-tire";
+import { listRequestOffers } from "@/lib/offers/queries";
+import { readShopCharges } from "@/lib/shop/charges";
 
 export const metadata: Metadata = { title: "Request · Counter", robots: { index: false } };
 
@@ -27,7 +34,9 @@ export default async function RequestPage({ params }: { params: Promise<{ id: st
   const db = await getDb();
   const [request, timeZone] = await Promise.all([getQuoteRequest(db, id.data), readShopTimeZone(db)]);
   if (!request) notFound();
-  const lines = await readQuoteLines(db, request.id, request.quantity);
+  const [lines, offers, charges] = await Promise.all([readQuoteLines(db, request.id, request.quantity), listRequestOffers(db, request.id), readShopCharges(db)]);
+  const today = todayIn(timeZone, new Date());
+  const validDays = { today, standard: addLocalDays(today, DEFAULT_VALID_DAYS), latest: addLocalDays(today, MAX_VALID_DAYS) };
   return (
     <section className="flex flex-col gap-6">
       <Link href="/counter/requests" prefetch={false} className="inline-flex min-h-11 items-center self-start font-semibold text-accent underline underline-offset-4">
@@ -45,6 +54,20 @@ export default async function RequestPage({ params }: { params: Promise<{ id: st
       <RequestStatusButtons requestId={request.id} status={request.status} />
       <RequestFields request={request} timeZone={timeZone} />
       <RequestLines lines={lines} quantity={request.quantity} />
+      <section aria-labelledby="offers-heading" className="flex flex-col gap-3">
+        <h2 id="offers-heading" className="text-xl font-semibold">
+          Offers
+        </h2>
+        <RequestOffers offers={offers} timeZone={timeZone} />
+        <h3 className="text-lg font-semibold">Price an offer</h3>
+        <OfferComposer
+          requestId={request.id}
+          quantity={Math.min(request.quantity, MAX_LINE_QUANTITY)}
+          namedTires={lines.filter((line) => line.stillStocked).map((line) => offerTireOf(line.tire))}
+          charges={charges}
+          validDays={validDays}
+        />
+      </section>
       <section aria-labelledby="replies-heading" className="flex flex-col gap-3">
         <h2 id="replies-heading" className="text-xl font-semibold">
           Replies
