@@ -1,18 +1,7 @@
 import { expect, test, type Page } from "./helpers/test";
 import { expectNoAxeViolations } from "./helpers/axe";
+import { emailsTo } from "./helpers/inbox";
 
-const inboxUrl = `${process.env.E2E_FAKE_RESEND_URL ?? "http://127.0.0.1:3226"}/emails`;
-
-interface ReceivedEmail {
-  to: string | string[];
-  subject: string;
-  text?: string;
-}
-
-async function emailsTo(address: string): Promise<ReceivedEmail[]> {
-  const { data } = (await (await fetch(inboxUrl)).json()) as { data: ReceivedEmail[] };
-  return data.filter((email) => email.to === address);
-}
 
 /**
  * The server refuses a form sent within 3 s of handing it its signed opening time ("<ms>.<signature>");

@@ -1,5 +1,6 @@
 import { expect, test, type Page } from "./helpers/test";
 import { expectNoAxeViolations } from "./helpers/axe";
+import { emailsTo } from "./helpers/inbox";
 
 // A common size the demo shop stocks deeply. The test fits four of its best-stocked tire, so the
 // on-hand specs that run later still find that tire with a set or more.
@@ -14,7 +15,7 @@ async function signInAsStaff(page: Page, path: string) {
 }
 
 test.describe("offers and fittings at the Counter", () => {
-  test("staff record a walk-in from the finder, send an offer, and mark the fitting the driver booked", async ({ page, request }, testInfo) => {
+  test("staff record a walk-in from the finder and send an offer; the driver books from the e-mailed link; staff mark the fitting", async ({ page, request, browser, viewport, isMobile, hasTouch }, testInfo) => {
     // A long journey through five pages, three of them scanned: more time in all, no step timed.
     test.slow();
     const stamp = `${testInfo.project.name}.${Date.now()}`;
@@ -62,12 +63,23 @@ test.describe("offers and fittings at the Counter", () => {
     await expect(listed).toContainText("Four fitted and balanced");
     await expectNoAxeViolations(page);
 
-    // The driver, signed out, takes the first free time through the API.
-    const slots = await request.get(`/api/v1/offers/${token}/slots`);
-    expect(slots.status()).toBe(200);
-    const first = ((await slots.json()) as { slots: { start: string }[] }).slots[0]!;
-    const accepted = await request.post(`/api/v1/offers/${token}/accept`, { data: { slotStart: first.start } });
-    expect(accepted.status()).toBe(200);
+    // The driver opens the e-mailed link, signed out, in a browser of their own, and books the first free time.
+    await expect.poll(async () => (await emailsTo(`oriel.${stamp}@example.test`)).find((email) => email.text?.includes(`/o/${token}`))?.subject ?? "").toMatch(/offer/i);
+    const [offerEmail] = await emailsTo(`oriel.${stamp}@example.test`);
+    const emailedLink = /https?:\/\/\S+\/o\/[A-Za-z0-9_-]{32}/.exec(offerEmail!.text ?? "")![0];
+    const driver = await browser.newContext({ viewport, isMobile, hasTouch });
+    const driverPage = await driver.newPage();
+    await driverPage.goto(new URL(new URL(emailedLink).pathname, page.url()).toString());
+    await expect(driverPage.getByText("Status: Open")).toBeVisible();
+    await driverPage.getByRole("group", { name: /^Time on / }).getByRole("radio").first().check();
+    await driverPage.getByRole("button", { name: "Accept and book this time" }).click();
+    await expect(driverPage.getByText("Status: Booked")).toBeVisible();
+    await driver.close();
+    const booked = (await (await request.get(`/api/v1/offers/${token}`)).json()) as { appointment: { start: string } };
+    const first = booked.appointment;
+    await expect
+      .poll(async () => (await emailsTo(`oriel.${stamp}@example.test`)).flatMap((email) => email.attachments ?? []).map((file) => file.filename))
+      .toContain("fitting.ics");
 
     // The fitting shows on its day (the slot's date is the shop's local date) and in its week.
     const day = first.start.slice(0, 10);
