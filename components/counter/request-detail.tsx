@@ -1,3 +1,4 @@
+import { LabelledRows } from "@/components/ui/labelled-rows";
 import Link from "next/link";
 import type { ReactNode } from "react";
 import { PhoneLink } from "@/components/ui/phone-link";
@@ -32,14 +33,7 @@ export function RequestFields({ request, timeZone }: { request: QuoteRequestDeta
     ["Sent from", from ? <Link key="s" href={from} prefetch={false} className="text-accent underline underline-offset-4">{sourceLabels[request.source]} {request.reference}</Link> : `${sourceLabels[request.source]}${request.reference ? ` ${request.reference}` : ""}`],
   ];
   return (
-    <dl className="grid gap-x-6 gap-y-2 rounded border border-rule bg-sheet p-4 sm:grid-cols-[10rem_minmax(0,1fr)]">
-      {rows.map(([label, value]) => (
-        <div key={label} className="contents">
-          <dt className="font-semibold text-ink-soft">{label}</dt>
-          <dd className="mb-2 break-words whitespace-pre-line sm:mb-0">{value}</dd>
-        </div>
-      ))}
-    </dl>
+    <LabelledRows rows={rows} className="gap-y-2 rounded border border-rule bg-sheet p-4 sm:grid-cols-[10rem_minmax(0,1fr)]" />
   );
 }
 

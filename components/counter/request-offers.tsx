@@ -1,3 +1,4 @@
+import { LabelledRows } from "@/components/ui/labelled-rows";
 import type { ReactNode } from "react";
 import { formatDateTime, formatCalendarDate, formatTime } from "@/lib/format/format";
 import { formatPrice } from "@/lib/money/money";
@@ -32,14 +33,7 @@ export function RequestOffers({ offers, timeZone }: { offers: OfferSummary[]; ti
               <h3 className="font-semibold">Offer #{offer.id}</h3>
               <OfferStatusBadge status={offer.status} />
             </div>
-            <dl className="grid gap-x-6 gap-y-1 sm:grid-cols-[8rem_minmax(0,1fr)]">
-              {rows.map(([label, value]) => (
-                <div key={label} className="contents">
-                  <dt className="font-semibold text-ink-soft">{label}</dt>
-                  <dd className="mb-2 break-words whitespace-pre-line sm:mb-0">{value}</dd>
-                </div>
-              ))}
-            </dl>
+            <LabelledRows rows={rows} className="gap-y-1 sm:grid-cols-[8rem_minmax(0,1fr)]" />
             {offer.status === "open" ? <OfferWithdraw offerId={offer.id} requestId={offer.requestId} /> : null}
           </li>
         );

@@ -1,8 +1,8 @@
-import { asc, eq } from "drizzle-orm";
+import { eq } from "drizzle-orm";
 import type { Database } from "@/db/client";
-import { brand, offer, offerLine, quoteRequest, stockItem, tireLine, type FrozenEstimate } from "@/db/schema";
-import { ofBrand, ofLine } from "@/lib/catalog/columns";
+import { offer, quoteRequest, type FrozenEstimate } from "@/db/schema";
 import { siteUrl } from "@/lib/env/site-url";
+import { readOfferLines } from "./queries";
 import { getShopContact, readShopTimeZone, type ShopContact } from "@/lib/shop/queries";
 import { readShopSettings } from "@/lib/shop/settings";
 import { describeTire, type StoredOfferStatus } from "@/lib/tire";
@@ -89,23 +89,6 @@ export async function readOfferFacts(db: Database, offerId: number): Promise<Off
 }
 
 async function readLines(db: Database, offerId: number): Promise<OfferLineFacts[]> {
-  const rows = await db
-    .select({
-      brand: brand.name,
-      line: tireLine.name,
-      designation: stockItem.designation,
-      loadIndex: stockItem.loadIndex,
-      loadIndexDual: stockItem.loadIndexDual,
-      speedSymbol: stockItem.speedSymbol,
-      loadRange: stockItem.loadRange,
-      quantity: offerLine.quantity,
-      priceCents: offerLine.priceCents,
-    })
-    .from(offerLine)
-    .innerJoin(stockItem, eq(offerLine.stockItemId, stockItem.id))
-    .innerJoin(tireLine, ofLine)
-    .innerJoin(brand, ofBrand)
-    .where(eq(offerLine.offerId, offerId))
-    .orderBy(asc(offerLine.position));
-  return rows.map((line) => ({ label: `${line.brand} ${line.line} ${describeTire(line)}`, quantity: line.quantity, priceCents: line.priceCents }));
+  const lines = await readOfferLines(db, [offerId]);
+  return lines.map((line) => ({ label: `${line.brand} ${line.line} ${describeTire(line)}`, quantity: line.quantity, priceCents: line.priceCents }));
 }

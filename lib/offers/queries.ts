@@ -15,6 +15,7 @@ export interface OfferLineSummary {
   loadIndex: number;
   loadIndexDual: number | null;
   speedSymbol: string;
+  loadRange: string | null;
   quantity: number;
   priceCents: number;
 }
@@ -33,7 +34,7 @@ export interface OfferSummary {
   lines: OfferLineSummary[];
 }
 
-const lineColumns = {
+const offerLineColumns = {
   offerId: offerLine.offerId,
   sku: stockItem.sku,
   brand: brand.name,
@@ -42,20 +43,26 @@ const lineColumns = {
   loadIndex: stockItem.loadIndex,
   loadIndexDual: stockItem.loadIndexDual,
   speedSymbol: stockItem.speedSymbol,
+  loadRange: stockItem.loadRange,
   quantity: offerLine.quantity,
   priceCents: offerLine.priceCents,
 };
 
-async function summaries(db: Database, rows: (typeof offer.$inferSelect)[], now: Date): Promise<OfferSummary[]> {
-  if (rows.length === 0) return [];
-  const lines = await db
-    .select(lineColumns)
+/** The lines of some offers with their tires named, offer by offer in their order. */
+export function readOfferLines(db: Database, offerIds: readonly number[]): Promise<OfferLineSummary[]> {
+  return db
+    .select(offerLineColumns)
     .from(offerLine)
     .innerJoin(stockItem, eq(offerLine.stockItemId, stockItem.id))
     .innerJoin(tireLine, ofLine)
     .innerJoin(brand, ofBrand)
-    .where(inArray(offerLine.offerId, rows.map((row) => row.id)))
+    .where(inArray(offerLine.offerId, [...offerIds]))
     .orderBy(asc(offerLine.offerId), asc(offerLine.position));
+}
+
+async function summaries(db: Database, rows: (typeof offer.$inferSelect)[], now: Date): Promise<OfferSummary[]> {
+  if (rows.length === 0) return [];
+  const lines = await readOfferLines(db, rows.map((row) => row.id));
   return rows.map((row) => ({
     id: row.id,
     requestId: row.requestId,
