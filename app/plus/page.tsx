@@ -4,6 +4,7 @@ import { getDb } from "@/lib/database/app-database";
 import { PlusForm } from "@/components/plus/plus-form";
 import { PlusGroups } from "@/components/plus/plus-groups";
 import { PlusPicks, PlusSaveCard } from "@/components/plus/plus-picks";
+import { PlusWidthRule } from "@/components/plus/plus-width-rule";
 import { PageIntro } from "@/components/ui/page-intro";
 import { SafetyCautions } from "@/components/ui/safety-cautions";
 import { readShopTolerance } from "@/lib/shop/tolerance";
@@ -54,6 +55,7 @@ export default async function PlusPlannerPage({ searchParams }: { searchParams: 
             made: &ldquo;In the catalog&rdquo; says which the shop can supply. The rim width is the theoretical one: section width × a factor set by
             the aspect ratio (UN Regulation No. 30, §6.1.1.1), rounded to the half inch.
           </p>
+          <PlusWidthRule params={params} every={query.success && query.data.all === true} />
           <PlusPicks>
             <PlusGroups plan={answer.plan} speedSymbol={query.success ? query.data.speedSymbol : undefined} />
             <PlusSaveCard

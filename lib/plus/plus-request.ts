@@ -2,12 +2,18 @@ import { z } from "zod";
 import type { Database } from "@/db/client";
 import { readJudgedOriginal } from "@/lib/alternatives/original";
 import type { ApiErrorCode } from "@/lib/api/errors";
-import { originalQueryFields } from "@/lib/api/query-fields";
+import { optional, originalQueryFields, yesNo } from "@/lib/api/query-fields";
 import { readShopTolerance } from "@/lib/shop/tolerance";
 import { type PlusCandidate, plusCandidates, sizeGeometry } from "@/lib/tire";
 import { countCatalogMatches } from "./catalog-matches";
 
-export const plusQuerySchema = z.object(originalQueryFields);
+export const plusQuerySchema = z.object({
+  ...originalQueryFields,
+  all: optional(yesNo).describe(
+    "true: every theoretical grid size within tolerance; by default only the section widths such a wheel takes in practice " +
+      "(10 mm narrower, 20 mm on a smaller wheel, to 20 mm wider plus 10 mm per inch added; common practice).",
+  ),
+});
 
 export type PlusQuery = z.infer<typeof plusQuerySchema>;
 
@@ -63,13 +69,13 @@ export function toPlusBody(plan: PlusPlan): PlusBody {
   };
 }
 
-/** Answers GET /api/v1/plus: every grid size within tolerance and how many catalog tires of each would serve. */
+/** Answers GET /api/v1/plus: the grid sizes within tolerance (those a wheel takes in practice, or all) and how many catalog tires of each would serve. */
 export async function answerPlus(db: Database, query: PlusQuery): Promise<PlusAnswer> {
   const read = readJudgedOriginal(query);
   if (!read.ok) return read;
   const { original, size } = read;
   const tolerancePct = query.tolerancePct ?? (await readShopTolerance(db));
-  const candidates = plusCandidates(size, tolerancePct);
+  const candidates = plusCandidates(size, tolerancePct, { every: query.all === true });
   const matches = await countCatalogMatches(db, original, candidates.map((candidate) => candidate.designation), tolerancePct);
   const geometry = sizeGeometry(size);
   return {

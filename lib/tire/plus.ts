@@ -64,18 +64,31 @@ function candidateOf(original: MeasurableSize, size: MeasurableSize, plus: numbe
 }
 
 /**
- * Every grid size on a wheel one inch smaller to three inches larger whose overall diameter stays
- * within the tolerance, the original first; ordered by plus, then |diameter change|, then width.
- * Grid sizes keep the original's service type marks (P or LT prefix, C, run-flat) so they can be
- * matched against the catalog.
+ * The section widths a wheel `plus` inches larger (or smaller) takes in practice, from the original's
+ * width: from 10 mm narrower (20 mm on a smaller wheel) to 20 mm wider plus 10 mm for each inch
+ * added (nothing added on the same or a smaller wheel). Common practice, not a standard: a wider
+ * wheel carries a somewhat wider tire, and a 125 or 345 mm section on the same wheel fits no car.
  */
-export function plusCandidates(original: MeasurableSize, tolerancePct: number): PlusCandidate[] {
+export function practicalWidthRangeMm(originalWidthMm: number, plus: number): { min: number; max: number } {
+  return { min: originalWidthMm - (plus < 0 ? 20 : 10), max: originalWidthMm + 20 + 10 * Math.max(plus, 0) };
+}
+
+/**
+ * Grid sizes on a wheel one inch smaller to three inches larger whose overall diameter stays within
+ * the tolerance, the original first; ordered by plus, then |diameter change|, then width. Only the
+ * section widths such a wheel takes in practice (`practicalWidthRangeMm`) unless `every` asks for
+ * every theoretical size. Grid sizes keep the original's service type marks (P or LT prefix, C,
+ * run-flat) so they can be matched against the catalog.
+ */
+export function plusCandidates(original: MeasurableSize, tolerancePct: number, { every = false } = {}): PlusCandidate[] {
   const referenceMm = sizeGeometry(original).overallDiameterMm;
   const originalCandidate = candidateOf(original, original, 0, referenceMm);
   const found: PlusCandidate[] = [originalCandidate];
   for (let plus = PLUS_GRID.plus.from; plus <= PLUS_GRID.plus.to; plus++) {
     const rimDiameterIn = original.rimDiameterIn + plus;
+    const widths = practicalWidthRangeMm(original.sectionWidthMm, plus);
     for (const sectionWidthMm of range(PLUS_GRID.widthsMm.from, PLUS_GRID.widthsMm.to, PLUS_GRID.widthsMm.step)) {
+      if (!every && (sectionWidthMm < widths.min || sectionWidthMm > widths.max)) continue;
       for (const aspectRatio of range(PLUS_GRID.aspectRatios.from, PLUS_GRID.aspectRatios.to, PLUS_GRID.aspectRatios.step)) {
         const size: MeasurableSize = {
           kind: "metric",

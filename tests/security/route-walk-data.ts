@@ -92,7 +92,7 @@ export const API_WALKS: Record<string, ApiWalk[]> = {
   ],
   "v1/fit-cards/[slug]/email/route.ts": [{ method: "POST", path: `/api/v1/fit-cards/${SLUG}/email`, as: "staff", body: { to: "nobody@example.test", message: "walk" } }],
   "v1/openapi.json/route.ts": [{ method: "GET", path: "/api/v1/openapi.json" }],
-  "v1/plus/route.ts": [{ method: "GET", path: "/api/v1/plus", query: { base: "size=225-45R17", names: ["size", "loadIndex", "speedSymbol", "tolerancePct"] } }],
+  "v1/plus/route.ts": [{ method: "GET", path: "/api/v1/plus", query: { base: "size=225-45R17", names: ["size", "loadIndex", "speedSymbol", "tolerancePct", "all"] } }],
   "v1/quote-requests/route.ts": [
     {
       method: "POST",

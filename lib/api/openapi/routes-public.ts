@@ -65,7 +65,9 @@ export const PUBLIC_ROUTES: ApiOperation[] = [
     path: "/api/v1/plus",
     tag: "Sizes",
     summary: "Plus planner: grid sizes within tolerance on wheels one inch smaller to three larger",
-    description: "Widths 125–355 step 10, aspect ratios 25–85 step 5, rims −1 to +3 inches, within the tolerance (default the shop's).",
+    description:
+      "Widths 125–355 step 10, aspect ratios 25–85 step 5, rims −1 to +3 inches, within the tolerance (default the shop's). By default only the widths a " +
+      "wheel of that diameter takes in practice (the original's −10 mm, −20 mm on a smaller wheel, to +20 mm plus 10 mm per inch added); all=true lists every one.",
     access: "public",
     query: plusQuerySchema,
     answers: [{ status: 200, description: "Every candidate size with its catalog matches.", json: named("PlusPlan", plusBodySchema) }],

@@ -40,6 +40,20 @@ describe("GET /api/v1/plus", () => {
     expect(body.candidates.find((c: { designation: string }) => c.designation === "205/55R16")).toMatchObject({ plus: 0, diameterDiffPct: 0, minLoadIndex: 91 });
   });
 
+  it("lists by default the widths a wheel takes in practice, and every theoretical size with all=true (common practice)", async () => {
+    const practical = (await plus("size=225-45R17")).body.candidates as { designation: string; plus: number; sectionWidthMm: number }[];
+    const every = (await plus("size=225-45R17&all=true")).body.candidates as { designation: string }[];
+    expect(every.map((c) => c.designation)).toEqual(expect.arrayContaining(["125/80R17", "345/30R17"]));
+    expect(practical.map((c) => c.designation)).not.toContain("125/80R17");
+    // 225 mm: from 215 (205 on a smaller wheel) to 245 + 10 per inch added; the order is the same as for every size.
+    for (const candidate of practical) {
+      expect(candidate.sectionWidthMm, candidate.designation).toBeGreaterThanOrEqual(candidate.plus < 0 ? 205 : 215);
+      expect(candidate.sectionWidthMm, candidate.designation).toBeLessThanOrEqual(245 + 10 * Math.max(candidate.plus, 0));
+    }
+    expect(practical.map((c) => c.designation)).toEqual(every.map((c) => c.designation).filter((designation) => practical.some((c) => c.designation === designation)));
+    expect((await plus("size=225-45R17&all=maybe")).status).toBe(400);
+  });
+
   it("counts catalog tires of exactly each size, of the original's service type, load and speed at least as given", async () => {
     const { body } = await plus("size=205-55R16&loadIndex=91&speedSymbol=V&tolerancePct=2");
     const rows = await (await getDb())

@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { PLUS_GRID, plusCandidates, measurableSizeFromSlug, sizeGeometry, theoreticalRimWidthIn, type MeasurableSize } from "@/lib/tire";
+import { PLUS_GRID, plusCandidates, practicalWidthRangeMm, measurableSizeFromSlug, sizeGeometry, theoreticalRimWidthIn, type MeasurableSize } from "@/lib/tire";
 
 const size = (designation: string): MeasurableSize => measurableSizeFromSlug(designation)!;
 
@@ -22,7 +22,7 @@ function bruteForce(original: MeasurableSize, tolerancePct: number): string[] {
 
 describe("the Plus planner's candidates", () => {
   it("lists the original once, with plus 0 and 0 % difference", () => {
-    const candidates = plusCandidates(size("225/45R17"), 3);
+    const candidates = plusCandidates(size("225/45R17"), 3, { every: true });
     expect(candidates.filter((candidate) => candidate.designation === "225/45R17")).toEqual([
       expect.objectContaining({ plus: 0, diameterDiffPct: 0 }),
     ]);
@@ -46,8 +46,15 @@ describe("the Plus planner's candidates", () => {
         fc.double({ min: 1, max: 5, noNaN: true }),
         (width, aspect, rim, tolerance) => {
           const original = size(`${width}/${aspect}R${rim}`);
-          const planned = plusCandidates(original, tolerance).map((candidate) => candidate.designation);
+          const planned = plusCandidates(original, tolerance, { every: true }).map((candidate) => candidate.designation);
           expect(new Set(planned)).toEqual(new Set(bruteForce(original, tolerance)));
+          // The widths a wheel takes in practice, written out again here: −10 mm (−20 on a smaller wheel) to +20 mm + 10 per inch added.
+          const practical = bruteForce(original, tolerance).filter((designation) => {
+            const candidate = size(designation);
+            const plus = candidate.rimDiameterIn - rim;
+            return candidate.sectionWidthMm >= width - (plus < 0 ? 20 : 10) && candidate.sectionWidthMm <= width + 20 + 10 * Math.max(plus, 0);
+          });
+          expect(new Set(plusCandidates(original, tolerance).map((candidate) => candidate.designation))).toEqual(new Set(practical));
         },
       ),
       { numRuns: 60, seed: 20261202 },
@@ -72,5 +79,22 @@ describe("the Plus planner's candidates", () => {
     expect(theoreticalRimWidthIn(225, 45)).toBe(7.5);
     expect(theoreticalRimWidthIn(265, 75)).toBe(7.5);
     expect(theoreticalRimWidthIn(285, 50)).toBe(9);
+  });
+
+  it("lists by default only the section widths a wheel takes in practice (common practice)", () => {
+    const every = plusCandidates(size("225/45R17"), 3, { every: true });
+    const practical = plusCandidates(size("225/45R17"), 3);
+    expect(every.map((candidate) => candidate.designation)).toEqual(expect.arrayContaining(["125/80R17", "345/30R17"]));
+    expect(practical.map((candidate) => candidate.designation)).not.toEqual(expect.arrayContaining(["125/80R17"]));
+    expect(practical.length).toBeLessThan(every.length / 3);
+    for (const candidate of practical.slice(1)) {
+      const { min, max } = practicalWidthRangeMm(225, candidate.plus);
+      expect(candidate.sectionWidthMm, candidate.designation).toBeGreaterThanOrEqual(min);
+      expect(candidate.sectionWidthMm, candidate.designation).toBeLessThanOrEqual(max);
+    }
+    // +1 inch: 215 to 255 mm; −1 inch: 205 to 245 mm.
+    expect(practicalWidthRangeMm(225, 1)).toEqual({ min: 215, max: 255 });
+    expect(practicalWidthRangeMm(225, -1)).toEqual({ min: 205, max: 245 });
+    expect(practical.map((candidate) => candidate.designation)).toContain("225/40R18");
   });
 });
