@@ -8,7 +8,7 @@ import { FITTING_OUTCOMES } from "@/lib/tire";
 import { skuSchema } from "@/lib/validation/sku";
 import { createOffer } from "./create-offer";
 import { fittingOutcomeWords } from "./labels";
-import { notifyFittingCancelled, notifyOfferSent } from "./notify";
+import { sendFittingCancelledEmails, sendOfferEmail } from "./offer-emails";
 import { newOfferSchema, offerIdParamsSchema } from "./offer-input";
 import { readOfferTire, type OfferTire } from "./offer-tire";
 import { markFitting as markStoredFitting, withdrawOffer as withdrawStoredOffer } from "./staff-offers";
@@ -41,7 +41,7 @@ export const sendOffer = withAction({ role: "staff", input: sendOfferSchema }, a
     if (created.code === "not_found") return { ok: false, status: 404, message: created.message };
     return { ok: false, status: 400, message: created.message, fieldErrors: { [created.field ?? "form"]: created.message } };
   }
-  const emailed = await notifyOfferSent(db, created.offer.id);
+  const emailed = (await sendOfferEmail(db, created.offer.id)).ok;
   refreshOffers(requestId);
   const { id, url } = created.offer;
   return {
@@ -63,7 +63,7 @@ export const withdrawOffer = withAction({ role: "staff", input: offerChangeSchem
 export const markFitting = withAction({ role: "staff", input: markFittingSchema }, async ({ db, user, input }) => {
   const changed = await markStoredFitting(db, user, input.id, input.outcome);
   if (!changed.ok) return changed;
-  if (input.outcome === "cancelled") await notifyFittingCancelled(db, input.id);
+  if (input.outcome === "cancelled") await sendFittingCancelledEmails(db, input.id);
   refreshOffers(input.requestId);
   return { ok: true, data: undefined, message: `Fitting of offer #${input.id} marked ${fittingOutcomeWords[input.outcome].label.toLowerCase()}.` };
 });

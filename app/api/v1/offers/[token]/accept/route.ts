@@ -2,7 +2,7 @@ import { NextResponse } from "next/server";
 import { withRoute } from "@/lib/auth/guard";
 import { acceptOffer } from "@/lib/offers/accept-offer";
 import { refusalAnswer } from "@/lib/offers/answers";
-import { notifyFittingBooked } from "@/lib/offers/notify";
+import { sendFittingBookedEmails } from "@/lib/offers/offer-emails";
 import { acceptOfferSchema, offerTokenParamsSchema } from "@/lib/offers/offer-input";
 
 /**
@@ -13,6 +13,6 @@ import { acceptOfferSchema, offerTokenParamsSchema } from "@/lib/offers/offer-in
 export const POST = withRoute({ role: "public", params: offerTokenParamsSchema, body: acceptOfferSchema }, async ({ db, params, body }) => {
   const accepted = await acceptOffer(db, params.token, body.slotStart);
   if (!accepted.ok) return refusalAnswer(accepted);
-  await notifyFittingBooked(db, accepted.offerId);
+  await sendFittingBookedEmails(db, accepted.offerId);
   return NextResponse.json({ status: "accepted", appointment: accepted.appointment });
 });
