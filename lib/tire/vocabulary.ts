@@ -60,7 +60,7 @@ export const QUOTE_STATUSES = ["new", "answered", "offered", "closed"] as const;
 export type QuoteStatus = (typeof QUOTE_STATUSES)[number];
 
 /** Where an Ask the shop request was sent from. */
-export const QUOTE_SOURCES = ["fit-card", "size-sheet", "finder", "counter"] as const;
+export const QUOTE_SOURCES = ["fit-card", "size-sheet", "finder", "compare", "plus", "counter"] as const;
 export type QuoteSource = (typeof QUOTE_SOURCES)[number];
 
 export const AUDIT_ACTIONS = [
