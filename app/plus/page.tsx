@@ -7,6 +7,7 @@ import { PlusPicks, PlusSaveCard } from "@/components/plus/plus-picks";
 import { PlusWidthRule } from "@/components/plus/plus-width-rule";
 import { PageIntro } from "@/components/ui/page-intro";
 import { SafetyCautions } from "@/components/ui/safety-cautions";
+import { plusPlannerCautions } from "@/content/safety";
 import { readShopTolerance } from "@/lib/shop/tolerance";
 import { answerPlus, plusQuerySchema } from "@/lib/plus/plus-request";
 
@@ -14,12 +15,6 @@ export const metadata: Metadata = {
   title: "Plus planner",
   description: "Sizes on a smaller or larger wheel that keep the overall diameter within tolerance, and which of them the shop stocks.",
 };
-
-const wheelCautions = [
-  "A different wheel must suit the vehicle: bolt pattern, centre bore, offset and the wheel's own load rating.",
-  "Check clearance to brakes, suspension and bodywork at full steering lock and full compression.",
-  "The theoretical rim width is a guide; the tire maker's approved rim widths decide, and so does a qualified fitter.",
-];
 
 type SearchParams = Promise<Record<string, string | string[] | undefined>>;
 
@@ -67,7 +62,7 @@ export default async function PlusPlannerPage({ searchParams }: { searchParams: 
           </PlusPicks>
         </>
       ) : null}
-      <SafetyCautions extra={wheelCautions} />
+      <SafetyCautions cautions={plusPlannerCautions} />
     </section>
   );
 }
