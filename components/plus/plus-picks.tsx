@@ -22,7 +22,7 @@ export function PickSize({ designation }: { designation: string }) {
   const { picks, toggle } = useContext(PicksContext);
   const picked = picks.includes(designation);
   return (
-    <label className="inline-flex min-h-11 min-w-11 items-center justify-center">
+    <label className="relative inline-flex min-h-11 min-w-11 items-center justify-center">
       <input type="checkbox" checked={picked} disabled={!picked && picks.length >= MAX_PICKS} onChange={(event) => toggle(designation, event.target.checked)} className="size-5 accent-accent" />
       <span className="sr-only">Pick {designation} to compare and ask about</span>
     </label>
