@@ -1,6 +1,6 @@
 /** The cautions shown wherever a choice of tire or size is made. Plain words, our own. */
 export const safetySummary =
-  "Tires carry people. Follow your vehicle's tire and loading placard, keep the same rim diameter, never fit a lower load index or speed rating than specified, and have tires mounted and balanced by a qualified fitter. Local rules and the vehicle and tire makers' guidance come first.";
+  "Tires carry people. Follow your vehicle's tire and loading placard, fit a tire only to a wheel of exactly its rim size, never fit a lower load index or speed rating than specified, and have tires mounted and balanced by a qualified fitter. Local rules and the vehicle and tire makers' guidance come first.";
 
 export const safetyCautions = [
   "Follow the tire and loading information placard on your vehicle (usually on the driver's door jamb).",
