@@ -3,10 +3,11 @@ import { connection } from "next/server";
 import { getDb } from "@/lib/database/app-database";
 import { PlusForm } from "@/components/plus/plus-form";
 import { PlusGroups } from "@/components/plus/plus-groups";
-import { PlusPicks, PlusSaveCard } from "@/components/plus/plus-picks";
+import { PlusActions, PlusPicks } from "@/components/plus/plus-picks";
 import { PlusWidthRule } from "@/components/plus/plus-width-rule";
 import { PageIntro } from "@/components/ui/page-intro";
 import { SafetyCautions } from "@/components/ui/safety-cautions";
+import { plusPlannerCautions } from "@/content/safety";
 import { readShopTolerance } from "@/lib/shop/tolerance";
 import { answerPlus, plusQuerySchema } from "@/lib/plus/plus-request";
 
@@ -14,12 +15,6 @@ export const metadata: Metadata = {
   title: "Plus planner",
   description: "Sizes on a smaller or larger wheel that keep the overall diameter within tolerance, and which of them the shop stocks.",
 };
-
-const wheelCautions = [
-  "A different wheel must suit the vehicle: bolt pattern, centre bore, offset and the wheel's own load rating.",
-  "Check clearance to brakes, suspension and bodywork at full steering lock and full compression.",
-  "The theoretical rim width is a guide; the tire maker's approved rim widths decide, and so does a qualified fitter.",
-];
 
 type SearchParams = Promise<Record<string, string | string[] | undefined>>;
 
@@ -52,13 +47,13 @@ export default async function PlusPlannerPage({ searchParams }: { searchParams: 
           <p className="text-ink-soft">
             {answer.plan.candidates.length} sizes within ±{answer.plan.tolerancePct} % of {answer.plan.original.designation} (
             {Math.round(answer.plan.original.overallDiameterMm)} mm). A lower sidewall rides firmer and protects the wheel less. Not every size is
-            made: &ldquo;In the catalog&rdquo; says which the shop can supply. The rim width is the theoretical one: section width × a factor set by
+            made: &ldquo;In the catalog&rdquo; says which the shop can supply, and those come first in each group. The rim width is the theoretical one: section width × a factor set by
             the aspect ratio (UN Regulation No. 30, §6.1.1.1), rounded to the half inch.
           </p>
           <PlusWidthRule params={params} every={query.success && query.data.all === true} />
           <PlusPicks>
             <PlusGroups plan={answer.plan} speedSymbol={query.success ? query.data.speedSymbol : undefined} />
-            <PlusSaveCard
+            <PlusActions
               original={answer.plan.original.designation}
               loadIndex={query.success ? query.data.loadIndex : undefined}
               speedSymbol={query.success ? query.data.speedSymbol : undefined}
@@ -67,7 +62,7 @@ export default async function PlusPlannerPage({ searchParams }: { searchParams: 
           </PlusPicks>
         </>
       ) : null}
-      <SafetyCautions extra={wheelCautions} />
+      <SafetyCautions cautions={plusPlannerCautions} />
     </section>
   );
 }

@@ -3,6 +3,7 @@
 import { useEffect, useMemo, useRef, useState } from "react";
 import { ScaledTireDrawing } from "@/components/diagram/scaled-tire-drawing";
 import { SaveFitCard } from "@/components/fit-card/save-fit-card-button";
+import { AskTheShop } from "@/components/quotes/ask-the-shop";
 import { UnitsToggle } from "@/components/units/units-toggle";
 import { useUnitSystem } from "@/components/units/use-unit-system";
 import { compareSizes, formatSize, hasNominalDiameter, measurableSizeFromSlug, noDiameterMessage, sizeFromSlug, sizeGeometry, sizeToSlug, type MeasurableSize } from "@/lib/tire";
@@ -77,7 +78,12 @@ export function SideBySide({ initialSizes }: { initialSizes: string[] }) {
         ) : tires.length === 1 ? (
           <p className="text-ink-soft">Add a second size to compare it with {tires[0]!.label}.</p>
         ) : null}
-        {tires.length > 0 ? <SaveFitCard draft={{ sizes: tires.map((tire) => tire.label) }} /> : null}
+        {tires.length > 0 ? (
+          <>
+            <SaveFitCard draft={{ sizes: tires.map((tire) => tire.label) }} />
+            <AskTheShop source="compare" reference={sizes.map(sizeToSlug).join(",")} tires={tires.map((tire) => tire.label).join(", ")} />
+          </>
+        ) : null}
       </div>
     </div>
   );

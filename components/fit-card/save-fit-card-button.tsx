@@ -2,6 +2,9 @@
 
 import dynamic from "next/dynamic";
 import { useState } from "react";
+import { useBrowserSession } from "@/components/auth/use-browser-session";
+import { hasRole, SAVE_FIT_CARD_ROLE } from "@/lib/tire";
+import { CopyOrSignIn } from "./copy-or-sign-in";
 
 /** What a card is saved with; the finder fills in everything the judge reads about the original. */
 export interface FitCardDraft {
@@ -23,9 +26,15 @@ const SaveFitCardForm = dynamic(() => import("./save-fit-card-form").then((modul
   loading: () => <p className="text-ink-soft">Opening the form…</p>,
 });
 
-/** "Save as Fit card": a button that opens the form. */
+/**
+ * "Save as Fit card" for those who may save one (read in the browser, so the page stays the same
+ * for everyone); everyone else gets the page's link to copy, and a way to sign in.
+ */
 export function SaveFitCard({ draft }: { draft: FitCardDraft }) {
+  const [session] = useBrowserSession();
   const [open, setOpen] = useState(false);
+  if (session === "loading") return <div className="min-h-11 print:hidden" aria-hidden="true" />;
+  if (session === "signed-out" || !hasRole(session.role, SAVE_FIT_CARD_ROLE)) return <CopyOrSignIn signedOut={session === "signed-out"} />;
   if (open) return <SaveFitCardForm draft={draft} onCancel={() => setOpen(false)} />;
   return (
     <button type="button" onClick={() => setOpen(true)} className="min-h-11 self-start rounded border border-accent px-4 font-semibold text-accent print:hidden">

@@ -1,23 +1,15 @@
 "use client";
 
-import { useState, useSyncExternalStore } from "react";
+import { useSyncExternalStore } from "react";
+import { useCopyLink } from "./use-copy-link";
 
 const neverChanges = () => () => undefined;
 
 /** Copy the card's link, hand it to the phone's share sheet where there is one, or print it. */
 export function ShareActions({ url, title }: { url: string; title: string }) {
-  const [status, setStatus] = useState("");
+  const { status, copy } = useCopyLink();
   // Known only in the browser: the server renders without the share button.
   const canShare = useSyncExternalStore(neverChanges, () => typeof navigator.share === "function", () => false);
-
-  async function copy() {
-    try {
-      await navigator.clipboard.writeText(url);
-      setStatus("Link copied.");
-    } catch {
-      setStatus(`Copy this link: ${url}`);
-    }
-  }
 
   async function share() {
     try {
@@ -30,7 +22,7 @@ export function ShareActions({ url, title }: { url: string; title: string }) {
   const button = "min-h-11 rounded border border-accent px-3 font-semibold text-accent";
   return (
     <div className="flex flex-wrap items-center gap-2 print:hidden">
-      <button type="button" onClick={copy} className={button}>
+      <button type="button" onClick={() => copy(url)} className={button}>
         Copy link
       </button>
       {canShare ? (

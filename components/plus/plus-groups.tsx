@@ -1,6 +1,6 @@
 import Link from "next/link";
 import type { PlusPlan } from "@/lib/plus/plus-request";
-import { PickForCard } from "./plus-picks";
+import { PickSize } from "./plus-picks";
 import { formatLength, formatSignedPercent, sizeToSlug } from "@/lib/tire";
 
 const groupTitle = (plus: number, rim: number) =>
@@ -16,10 +16,16 @@ interface PlusGroupsProps {
   speedSymbol?: string;
 }
 
-/** The candidates, grouped from one inch smaller to three inches larger, closest diameter first. */
+/** Within a group, the sizes the shop stocks first; otherwise the plan's order (closest diameter first) stands. */
+const stockedFirst = (candidates: PlusPlan["candidates"]) => [
+  ...candidates.filter((candidate) => candidate.catalogMatches > 0),
+  ...candidates.filter((candidate) => candidate.catalogMatches === 0),
+];
+
+/** The candidates, grouped from one inch smaller to three inches larger: sizes in the catalog first, then the rest, closest diameter first. */
 export function PlusGroups({ plan, speedSymbol }: PlusGroupsProps) {
   const groups = [-1, 0, 1, 2, 3]
-    .map((plus) => ({ plus, candidates: plan.candidates.filter((candidate) => candidate.plus === plus) }))
+    .map((plus) => ({ plus, candidates: stockedFirst(plan.candidates.filter((candidate) => candidate.plus === plus)) }))
     .filter((group) => group.candidates.length > 0);
   return (
     <div className="flex flex-col gap-8">
@@ -39,7 +45,7 @@ export function PlusGroups({ plan, speedSymbol }: PlusGroupsProps) {
                   <th scope="col" className="px-2 py-1 text-right font-semibold">Rim width</th>
                   <th scope="col" className="px-2 py-1 text-right font-semibold">Load index at least</th>
                   <th scope="col" className="py-1 pl-2 text-right font-semibold">In the catalog</th>
-                  <th scope="col" className="py-1 pl-2 text-right font-semibold">Fit card</th>
+                  <th scope="col" className="py-1 pl-2 text-right font-semibold">Pick</th>
                 </tr>
               </thead>
               <tbody>
@@ -71,7 +77,7 @@ export function PlusGroups({ plan, speedSymbol }: PlusGroupsProps) {
                           <span className="text-ink-soft">none</span>
                         )}
                       </td>
-                      <td className="pl-2 text-right">{isOriginal ? null : <PickForCard designation={candidate.designation} />}</td>
+                      <td className="pl-2 text-right">{isOriginal ? null : <PickSize designation={candidate.designation} />}</td>
                     </tr>
                   );
                 })}

@@ -1,11 +1,13 @@
 import { HONEYPOT_FIELD, quoteFieldErrors, quoteRequestSchema } from "@/lib/quotes/quote-input";
+import type { QuoteSource } from "@/lib/tire";
 
 export type QuoteOutcome =
   | { ok: true; id: number; email: string }
   | { ok: false; message: string; fieldErrors: Record<string, string> };
 
 export interface QuoteContext {
-  source: "fit-card" | "size-sheet" | "finder";
+  /** The page the form sits on; "counter" is staff recording a walk-in, never this form. */
+  source: Exclude<QuoteSource, "counter">;
   reference?: string;
   /** The catalog tires the page names, by SKU. */
   skus?: string[];

@@ -12,6 +12,19 @@ export function fitCardQuoteTires(card: { sizes: string[]; tires: readonly (Serv
   return card.tires.map((tire) => `${tire.brand} ${tire.line} ${describeTire(tire)}`).join("\n");
 }
 
+/**
+ * What the Plus planner sends: the tire on the car, then the sizes picked for new wheels with the
+ * load index and speed symbol they must still meet.
+ */
+export function plusQuoteTires(original: { designation: string; loadIndex?: number; speedSymbol?: string }, picks: readonly string[]): string {
+  const service = original.loadIndex !== undefined && original.speedSymbol ? ` ${original.loadIndex}${original.speedSymbol}` : "";
+  const minimum = service
+    ? `load index ${original.loadIndex} or more, speed symbol ${original.speedSymbol} or better`
+    : "load index and speed symbol at least the vehicle's placard";
+  const sizes = picks.length > 0 ? picks.join(", ") : "a size you suggest";
+  return `On the car now: ${original.designation}${service}\nOn new wheels (${minimum}): ${sizes}`;
+}
+
 /** A catalog tire a request form names: sent by SKU, shown with how many are on hand against the quantity asked for. */
 export interface QuoteCatalogTire {
   sku: string;

@@ -56,11 +56,20 @@ export const isSku = (text: string): boolean => SKU_PATTERN.test(text);
 export const ROLES = ["customer", "staff", "admin"] as const;
 export type Role = (typeof ROLES)[number];
 
+/** Roles are ordered: admin includes staff, staff includes customer. An unknown role grants nothing. */
+export function hasRole(userRole: string | null | undefined, needed: Role): boolean {
+  const rank = ROLES.indexOf(userRole as Role);
+  return rank >= 0 && rank >= ROLES.indexOf(needed);
+}
+
+/** Who may save a Fit card: anyone signed in (the pages show "Save as Fit card" only to them). */
+export const SAVE_FIT_CARD_ROLE: Role = "customer";
+
 export const QUOTE_STATUSES = ["new", "answered", "offered", "closed"] as const;
 export type QuoteStatus = (typeof QUOTE_STATUSES)[number];
 
 /** Where an Ask the shop request was sent from. */
-export const QUOTE_SOURCES = ["fit-card", "size-sheet", "finder", "counter"] as const;
+export const QUOTE_SOURCES = ["fit-card", "size-sheet", "finder", "compare", "plus", "counter"] as const;
 export type QuoteSource = (typeof QUOTE_SOURCES)[number];
 
 export const AUDIT_ACTIONS = [

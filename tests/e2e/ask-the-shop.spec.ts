@@ -1,18 +1,7 @@
-import { expect, test, type Page } from "./helpers/test";
+import { expect, test } from "./helpers/test";
 import { expectNoAxeViolations } from "./helpers/axe";
 import { emailsTo } from "./helpers/inbox";
-
-
-/**
- * The server refuses a form sent within 3 s of handing it its signed opening time ("<ms>.<signature>");
- * a test fills faster than a person, so it waits until the form is that old (server and test share a clock).
- */
-async function waitUntilTheFormIsOldEnough(page: Page) {
-  const token = page.locator('input[name="renderedAt"]');
-  await expect(token).toHaveValue(/^\d+\./);
-  const openedAt = Number((await token.inputValue()).split(".")[0]);
-  await expect.poll(() => Date.now() - openedAt, { message: "the form has been open 3 s" }).toBeGreaterThanOrEqual(3000);
-}
+import { waitUntilTheFormIsOldEnough } from "./helpers/quote-form";
 
 test.describe("Ask the shop", () => {
   test("a driver asks from a Size sheet; staff answer from the Counter inbox and the reply is e-mailed", async ({ page }, testInfo) => {

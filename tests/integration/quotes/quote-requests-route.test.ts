@@ -1,3 +1,4 @@
+import { eq } from "drizzle-orm";
 import { NextRequest } from "next/server";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { GET as getFormToken } from "@/app/api/v1/quote-requests/form-token/route";
@@ -64,6 +65,16 @@ describe("POST /api/v1/quote-requests", () => {
       "counter@marrowby-tire.test",
       "rosa@example.test",
     ]);
+  });
+
+  it.each([
+    ["compare", "225-45R17,235-40R18", "225/45R17, 235/40R18"],
+    ["plus", "225/45R17", "On the car now: 225/45R17\nOn new wheels (load index and speed symbol at least the vehicle's placard): 225/40R18"],
+  ])("takes a request sent from Side-by-side or the Plus planner (source %s) → 201", async (source, reference, tires) => {
+    const { status, body } = await ask({ ...request, email: `${source}@example.test`, source, reference, tires });
+    expect(status).toBe(201);
+    const [stored] = await (await getDb()).select().from(quoteRequest).where(eq(quoteRequest.id, body.id));
+    expect(stored).toMatchObject({ source, reference, tires });
   });
 
   it.each([

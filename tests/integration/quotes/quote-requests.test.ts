@@ -86,6 +86,19 @@ describe.each(testDatabaseKinds)("quote requests on %s", (kind) => {
     ]);
   });
 
+  it.each([
+    ["compare", "225-45R17,235-40R18", "225/45R17, 235/40R18"],
+    ["plus", "225/45R17", "On the car now: 225/45R17 94W\nOn new wheels (load index 94 or more, speed symbol W or better): 225/40R18"],
+  ] as const)("stores a request sent from the %s page with its reference, and the Counter lists it under that source", async (source, reference, tires) => {
+    fake = await useFake();
+    const created = await createQuoteRequest(database.db, asking({ source, reference, tires }));
+    expect(created).toMatchObject({ status: "new", emailed: { shop: true, customer: true } });
+    const detail = await getQuoteRequest(database.db, created.id);
+    expect(detail).toMatchObject({ source, reference, tires });
+    const listed = await listQuoteRequests(database.db, { page: 1 });
+    expect(listed.requests.find((request) => request.id === created.id)).toMatchObject({ source });
+  });
+
   it("confirms to one address at most 3 times a day, keeping every request and telling the shop each time", async () => {
     fake = await useFake();
     const created = [];
