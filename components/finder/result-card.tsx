@@ -72,7 +72,8 @@ export function ResultCard({ tire, original, units, needed, pick }: ResultCardPr
           <span>
             {pick.label}
             <span className="sr-only">
-              : {tire.brand} {tire.line} {tire.designation} {formatServiceDescription(tire)}
+              {" "}
+              ({tire.brand} {tire.line} {tire.designation} {formatServiceDescription(tire)})
             </span>
           </span>
         </label>
