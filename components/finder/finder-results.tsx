@@ -3,6 +3,7 @@
 import type { DrawnTire } from "@/components/diagram/drawing-layout";
 import type { UnitSystem } from "@/lib/tire";
 import { MAX_CARD_TIRES } from "@/lib/fit-cards/card-input";
+import { AskBar } from "./ask-bar";
 import { ResultCard } from "./result-card";
 import type { useAlternatives } from "./use-alternatives";
 
@@ -12,10 +13,14 @@ interface FinderResultsProps {
   units: UnitSystem;
   picked: readonly string[];
   onPick: (sku: string, picked: boolean) => void;
+  /** What ticking a result does, in the words of who is looking. */
+  pickLabel: string;
+  /** Opens Ask the shop with the picked tires (the phone's ask bar). */
+  onAsk: () => void;
 }
 
 /** The qualifying tires, page by page, with the near misses folded away below. */
-export function FinderResults({ data, original, units, picked, onPick }: FinderResultsProps) {
+export function FinderResults({ data, original, units, picked, onPick, pickLabel, onAsk }: FinderResultsProps) {
   const { first, results, error, isLoading, hasMore, isLoadingMore, loadMore, retry } = data;
   if (error) {
     return (
@@ -55,7 +60,7 @@ export function FinderResults({ data, original, units, picked, onPick }: FinderR
               original={original}
               units={units}
               needed={first.quantity}
-              pick={{ picked: picked.includes(tire.sku), disabled: picked.length >= MAX_CARD_TIRES, onChange: (on) => onPick(tire.sku, on) }}
+              pick={{ label: pickLabel, picked: picked.includes(tire.sku), disabled: picked.length >= MAX_CARD_TIRES, onChange: (on) => onPick(tire.sku, on) }}
             />
           </li>
         ))}
@@ -79,6 +84,7 @@ export function FinderResults({ data, original, units, picked, onPick }: FinderR
           </ol>
         </details>
       ) : null}
+      <AskBar picked={picked.length} onAsk={onAsk} />
     </section>
   );
 }

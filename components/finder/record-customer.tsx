@@ -2,30 +2,25 @@
 
 import { useRouter } from "next/navigation";
 import { useId, useRef, useState, type FormEvent } from "react";
-import { useBrowserSession } from "@/components/auth/use-browser-session";
 import { fieldClass, FormField } from "@/components/ui/form-field";
 import { recordWalkIn } from "@/lib/quotes/actions";
 import { MAX_QUANTITY, MIN_QUANTITY } from "@/lib/quotes/quote-input";
-import { ROLES, type Role } from "@/lib/tire";
 
-const isStaff = (role: string) => ROLES.includes(role as Role) && ROLES.indexOf(role as Role) >= ROLES.indexOf("staff");
 const FIELDS = ["name", "email", "phone", "vehicle", "quantity", "tires"] as const;
 
 type Outcome = Awaited<ReturnType<typeof recordWalkIn>>;
 
 /**
- * Staff only (read in the browser, so the finder stays the same page for everyone): records the
- * customer at the counter as a request with the picked tires, then opens it to price an offer.
+ * For staff (the finder shows it once the browser has read the session): records the customer at
+ * the counter as a request with the picked tires, then opens it to price an offer.
  */
 export function RecordCustomer({ tires, skus, quantity }: { tires: string; skus: string[]; quantity: number }) {
-  const [session] = useBrowserSession();
   const [open, setOpen] = useState(false);
   const [busy, setBusy] = useState(false);
   const [outcome, setOutcome] = useState<Outcome | null>(null);
   const formRef = useRef<HTMLFormElement>(null);
   const router = useRouter();
   const id = useId();
-  if (session === "loading" || session === "signed-out" || !isStaff(session.role)) return null;
 
   async function submit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();

@@ -1,22 +1,24 @@
 "use client";
 
-import { useEffect, useMemo, useState } from "react";
+import { useEffect, useMemo, useRef, useState } from "react";
 import { drawnTireOf } from "@/components/reader/drawn-tire";
 import { useUnitSystem } from "@/components/units/use-unit-system";
 import { UnitsToggle } from "@/components/units/units-toggle";
 import { alternativesSearch, type FinderQuery, finderSearch, setSizeOf } from "@/lib/finder/finder-query";
 import { placardFor, readOriginalMarking } from "@/lib/finder/original-marking";
 import { SaveFitCard } from "@/components/fit-card/save-fit-card-button";
-import { AskTheShop } from "@/components/quotes/ask-the-shop";
+import { AskTheShop, type AskTheShopHandle } from "@/components/quotes/ask-the-shop";
 import { finderQuoteTires, quoteCatalogTires } from "@/components/quotes/quote-tires";
 import type { Candidate } from "@/lib/finder/alternatives-response";
 import { FinderFilters } from "./finder-filters";
 import { fitCardDraft } from "./fit-card-draft";
 import { FinderResults } from "./finder-results";
 import { OriginalSummary } from "./original-summary";
+import { pickLabel } from "./pick-words";
 import { RecordCustomer } from "./record-customer";
 import { PlacardForm } from "./placard-form";
 import { useAlternatives } from "./use-alternatives";
+import { useStaffView } from "./use-staff-view";
 
 interface ReplacementFinderProps {
   initialQuery: FinderQuery;
@@ -35,6 +37,8 @@ export function ReplacementFinder({ initialQuery, brands, defaultTolerancePct }:
   const data = useAlternatives(search);
   const update = (patch: Partial<FinderQuery>) => setQuery((current) => ({ ...current, ...patch }));
   const [picked, setPicked] = useState<Candidate[]>([]);
+  const staff = useStaffView();
+  const askTheShop = useRef<AskTheShopHandle>(null);
   const pick = (sku: string, on: boolean) =>
     setPicked((list) => (on ? [...list, ...data.results.filter((tire) => tire.sku === sku)] : list.filter((tire) => tire.sku !== sku)));
 
@@ -68,12 +72,14 @@ export function ReplacementFinder({ initialQuery, brands, defaultTolerancePct }:
           units={units}
           picked={picked.map((tire) => tire.sku)}
           onPick={pick}
+          pickLabel={pickLabel(staff)}
+          onAsk={() => askTheShop.current?.open()}
         />
         {data.first ? <SaveFitCard draft={fitCardDraft(data.first.original.designation, query, minimums, picked, data.first.tolerancePct)} /> : null}
         {data.first ? (
-          <AskTheShop source="finder" tires={finderQuoteTires(data.first.original, picked)} catalogTires={quoteCatalogTires(picked)} quantity={setSizeOf(query)} />
+          <AskTheShop ref={askTheShop} source="finder" tires={finderQuoteTires(data.first.original, picked)} catalogTires={quoteCatalogTires(picked)} quantity={setSizeOf(query)} />
         ) : null}
-        {data.first ? <RecordCustomer tires={finderQuoteTires(data.first.original, picked)} skus={picked.map((tire) => tire.sku)} quantity={setSizeOf(query)} /> : null}
+        {data.first && staff ? <RecordCustomer tires={finderQuoteTires(data.first.original, picked)} skus={picked.map((tire) => tire.sku)} quantity={setSizeOf(query)} /> : null}
       </div>
     </div>
   );

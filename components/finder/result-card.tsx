@@ -22,8 +22,8 @@ interface ResultCardProps {
   units: UnitSystem;
   /** How many tires the driver needs. */
   needed: number;
-  /** For qualifying tires: whether it is picked for a Fit card, and how to change that. */
-  pick?: { picked: boolean; disabled: boolean; onChange: (picked: boolean) => void };
+  /** For qualifying tires: what picking it does, whether it is picked, and how to change that. */
+  pick?: { label: string; picked: boolean; disabled: boolean; onChange: (picked: boolean) => void };
 }
 
 /** One catalog tire: what it is, what it costs, whether it is here, and why it qualifies (or not). */
@@ -34,8 +34,9 @@ export function ResultCard({ tire, original, units, needed, pick }: ResultCardPr
   const badges = [tire.extraLoad ? "XL" : null, tire.runFlat ? "Run-flat" : null, tire.loadRange ? `Load range ${tire.loadRange}` : null, tire.threePeak ? "3PMSF" : null];
   return (
     <article className="rounded border border-rule bg-sheet p-4" data-sku={tire.sku}>
-      <div className="flex flex-wrap items-start justify-between gap-x-4 gap-y-1">
-        <div>
+      {/* A fixed price column from sm up, so price and stock sit in one place on every card, whatever the stock words. */}
+      <div className="grid gap-x-4 gap-y-1 sm:grid-cols-[minmax(0,1fr)_14rem]">
+        <div className="min-w-0">
           <h3 className="font-semibold">
             {tire.brand} {tire.line}
           </h3>
@@ -49,7 +50,7 @@ export function ResultCard({ tire, original, units, needed, pick }: ResultCardPr
           </p>
         </div>
         <div className="sm:text-right">
-          <p className="text-lg font-semibold">
+          <p className="text-lg font-semibold" data-price={tire.priceCents}>
             {formatPrice(tire.priceCents)} <span className="text-sm font-normal text-ink-soft">each</span>
           </p>
           <StockLine quantity={tire.quantity} needed={needed} />
@@ -68,7 +69,13 @@ export function ResultCard({ tire, original, units, needed, pick }: ResultCardPr
       {pick ? (
         <label className="mt-2 flex min-h-11 items-center gap-2 text-sm font-semibold">
           <input type="checkbox" checked={pick.picked} disabled={pick.disabled && !pick.picked} onChange={(event) => pick.onChange(event.target.checked)} className="size-5 accent-accent" />
-          Pick for a Fit card
+          <span>
+            {pick.label}
+            <span className="sr-only">
+              {" "}
+              ({tire.brand} {tire.line} {tire.designation} {formatServiceDescription(tire)})
+            </span>
+          </span>
         </label>
       ) : null}
       {original ? (

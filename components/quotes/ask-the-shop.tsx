@@ -1,7 +1,7 @@
 "use client";
 
 import dynamic from "next/dynamic";
-import { useId, useRef, useState } from "react";
+import { useId, useImperativeHandle, useRef, useState, type Ref } from "react";
 import type { QuoteContext } from "./post-quote-request";
 import type { QuoteCatalogTire } from "./quote-tires";
 
@@ -22,12 +22,27 @@ interface AskTheShopProps extends Omit<QuoteContext, "skus"> {
   catalogTires?: QuoteCatalogTire[];
   /** How many tires the form starts with (the finder's set size); 4 when not given. */
   quantity?: number;
+  /** For a page that opens the form from elsewhere (the finder's ask bar on a phone). */
+  ref?: Ref<AskTheShopHandle>;
+}
+
+export interface AskTheShopHandle {
+  /** Opens the form, brings it into view and moves focus to its heading's button. */
+  open: () => void;
 }
 
 /** "Ask the shop for a price": a disclosure with the request form, filled in from the page it sits on. */
-export function AskTheShop({ tires, catalogTires = [], quantity, ...context }: AskTheShopProps) {
+export function AskTheShop({ tires, catalogTires = [], quantity, ref, ...context }: AskTheShopProps) {
   const [open, setOpen] = useState(false);
   const toggle = useRef<HTMLButtonElement>(null);
+  const section = useRef<HTMLElement>(null);
+  useImperativeHandle(ref, () => ({
+    open: () => {
+      setOpen(true);
+      section.current?.scrollIntoView({ block: "start" });
+      toggle.current?.focus({ preventScroll: true });
+    },
+  }));
   const close = () => {
     setOpen(false);
     toggle.current?.focus();
@@ -35,7 +50,7 @@ export function AskTheShop({ tires, catalogTires = [], quantity, ...context }: A
   const id = useId();
   const panelId = `${id}-panel`;
   return (
-    <section aria-labelledby={`${id}-title`} className="rounded border border-rule bg-sheet p-4 print:hidden">
+    <section ref={section} aria-labelledby={`${id}-title`} className="scroll-mt-4 rounded border border-rule bg-sheet p-4 print:hidden">
       <h2 id={`${id}-title`} className="text-lg font-semibold">
         <button
           ref={toggle}

@@ -54,6 +54,11 @@ export function readFinderQuery(params: Record<string, string | string[] | undef
   return finderQuerySchema.parse(flat);
 }
 
+const filterKeys = ["season", "terrain", "brand", "minPriceCents", "maxPriceCents", "inStock", "threePeak", "tolerancePct"] as const;
+
+/** How many of the finder's filters narrow the list (the set size and the sort narrow nothing). */
+export const activeFilterCount = (query: FinderQuery): number => filterKeys.filter((key) => query[key] !== undefined).length;
+
 /** The query string that reproduces this state: for the address bar and for links. */
 export function finderSearch(query: FinderQuery): string {
   const search = new URLSearchParams();
@@ -69,6 +74,12 @@ const apiKeys = [
 ] as const;
 
 const flagKeys = new Set<string>(["runFlat", "threePeak", "inStock"]);
+
+/**
+ * Results the finder asks for at a time, well below the API's own default, so that on a phone the
+ * end of the list (Show more, the near misses, Ask the shop) is a short scroll away.
+ */
+export const FINDER_PAGE_SIZE = 12;
 
 /** The Placard check's minimum load indices, when it was made. */
 export interface PlacardMinimums {
@@ -86,6 +97,7 @@ export function alternativesSearch(query: FinderQuery, minimums: PlacardMinimums
   }
   // Always named, so that each answer says for how many tires its stock filter and estimates are.
   search.set("quantity", String(setSizeOf(query)));
+  search.set("limit", String(FINDER_PAGE_SIZE));
   if (minimums.loadIndex !== null && minimums.loadIndex > (query.loadIndex ?? -1)) search.set("loadIndex", String(minimums.loadIndex));
   if (minimums.loadIndexDual !== null && minimums.loadIndexDual > (query.loadIndexDual ?? -1)) {
     search.set("loadIndexDual", String(minimums.loadIndexDual));

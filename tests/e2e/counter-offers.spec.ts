@@ -1,6 +1,7 @@
 import { expect, test, type Page } from "./helpers/test";
 import { expectNoAxeViolations } from "./helpers/axe";
 import { emailsTo } from "./helpers/inbox";
+import { FINDER_PAGE_SIZE } from "../../lib/finder/finder-query";
 
 // A common size the demo shop stocks deeply. The test fits four of its best-stocked tire, so the
 // on-hand specs that run later still find that tire with a set or more.
@@ -19,14 +20,15 @@ test.describe("offers and fittings at the Counter", () => {
     // A long journey through five pages, three of them scanned: more time in all, no step timed.
     test.slow();
     const stamp = `${testInfo.project.name}.${Date.now()}`;
-    const found = await page.request.get(`/api/v1/alternatives?${SEARCH}&quantity=4&inStock=true`);
+    // The finder's first page of tires with a set on hand, as the page below shows it.
+    const found = await page.request.get(`/api/v1/alternatives?${SEARCH}&quantity=4&inStock=true&limit=${FINDER_PAGE_SIZE}`);
     const { results } = (await found.json()) as { results: { sku: string; quantity: number }[] };
     const tire = results.reduce((best, candidate) => (candidate.quantity > best.quantity ? candidate : best));
 
     // The walk-in: recorded from the finder with the picked tire; the request page opens ready to price it.
     await signInAsStaff(page, "/counter/requests");
-    await page.goto(`/replace?${SEARCH}`);
-    await page.locator(`article[data-sku="${tire.sku}"]`).getByLabel("Pick for a Fit card").check();
+    await page.goto(`/replace?${SEARCH}&inStock=1`);
+    await page.locator(`article[data-sku="${tire.sku}"]`).getByRole("checkbox", { name: /^Add to a Fit card/ }).check();
     const walkIn = page.getByRole("region", { name: "Record a customer" });
     await walkIn.getByRole("button", { name: "Record a customer" }).click();
     await expect(walkIn.getByLabel("Tires", { exact: true })).toHaveValue(/^Replacing 225\/65R17 102H\n/);

@@ -1,7 +1,6 @@
 import { expect, type Page, test } from "./helpers/test";
 import { expectNoAxeViolations } from "./helpers/axe";
-
-const resultsHeading = (page: Page) => page.getByRole("heading", { level: 2, name: /equal-or-better|No tire in the catalog/ });
+import { resultsHeading, showFilters } from "./helpers/finder";
 
 async function totalShown(page: Page): Promise<number> {
   const text = (await resultsHeading(page).textContent()) ?? "";
@@ -27,6 +26,7 @@ test.describe("the Replacement finder", () => {
     await page.goto("/replace?size=285-50R20&loadIndex=119&speedSymbol=S");
     await expect(resultsHeading(page)).toBeVisible();
     const before = await totalShown(page);
+    await showFilters(page);
     await page.getByLabel("At least 4 on hand").check();
     await expect(page).toHaveURL(/inStock=1/);
     await expect.poll(() => totalShown(page)).toBeLessThanOrEqual(before);

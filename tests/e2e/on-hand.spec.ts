@@ -1,10 +1,12 @@
 import { demoShopCharges } from "../../lib/demo/shop";
 import { estimateSet } from "../../lib/money/estimate";
 import { formatPrice } from "../../lib/money/money";
+import { FINDER_PAGE_SIZE } from "../../lib/finder/finder-query";
 import { expect, type Page, test } from "./helpers/test";
 import { expectNoAxeViolations } from "./helpers/axe";
+import { showFilters } from "./helpers/finder";
 
-// A common size the demo shop stocks deeply: its list holds tires with a set or more, with one to three, and with none.
+// A common size the demo shop stocks deeply: its first page holds tires with a set or more, with one to three, and with none.
 const SEARCH = "size=225-65R17&loadIndex=102&speedSymbol=H&sort=price";
 
 interface Result {
@@ -18,8 +20,9 @@ const results = (page: Page) => page.locator("article[data-sku]");
 const listShown = (page: Page) => expect(results(page).first()).toBeVisible({ timeout: 15_000 });
 const setSize = (page: Page) => page.getByLabel("Tires needed");
 
+/** The first page of results, as the finder asks for it. */
 async function firstPage(page: Page, quantity: number): Promise<Result[]> {
-  const response = await page.request.get(`/api/v1/alternatives?${SEARCH}&quantity=${quantity}`);
+  const response = await page.request.get(`/api/v1/alternatives?${SEARCH}&quantity=${quantity}&limit=${FINDER_PAGE_SIZE}`);
   expect(response.status()).toBe(200);
   return ((await response.json()) as { results: Result[] }).results;
 }
@@ -64,6 +67,7 @@ test.describe("how many are on hand, and what a set costs out the door", () => {
   test("a set of two stays in the address across a reload, and the words and estimates follow it", async ({ page }) => {
     await page.goto(`/replace?${SEARCH}`);
     await listShown(page);
+    await showFilters(page);
     await setSize(page).selectOption("2");
     await expect(page).toHaveURL(/quantity=2/);
     await expect(results(page).first().locator("[data-estimate-total] h4")).toContainText("Out the door for 2", { timeout: 15_000 });
@@ -74,6 +78,7 @@ test.describe("how many are on hand, and what a set costs out the door", () => {
     for (const tire of [tires.find((t) => t.quantity === 1), tires.find((t) => t.quantity >= 2), tires[0]]) if (tire) await expectPriced(page, tire, 2);
 
     // "At least 2 on hand" keeps only tires with two or more.
+    await showFilters(page);
     await page.getByLabel("At least 2 on hand").check();
     await expect(page).toHaveURL(/inStock=1/);
     await expect.poll(async () => (await results(page).locator("[data-stock]").allTextContents()).every((text) => /^\d+ on hand$/.test(text))).toBe(true);
@@ -92,7 +97,7 @@ test.describe("how many are on hand, and what a set costs out the door", () => {
     await listShown(page);
     const tires = await firstPage(page, 6);
     const short = tires.find((tire) => tire.quantity > 0 && tire.quantity < 6)!;
-    await page.locator(`article[data-sku="${short.sku}"]`).getByLabel("Pick for a Fit card").check();
+    await page.locator(`article[data-sku="${short.sku}"]`).getByRole("checkbox", { name: /^Add to my price request/ }).check();
     await page.getByRole("button", { name: "Ask the shop for a price" }).click();
     const form = page.locator("form").filter({ has: page.getByLabel("How many tires (1–16)") });
     await expect(form.getByLabel("How many tires (1–16)")).toHaveValue("6");

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { alternativesSearch, finderSearch, readFinderQuery, setSizeOf } from "@/lib/finder/finder-query";
+import { DEFAULT_PAGE_SIZE } from "@/lib/catalog/query-schema";
+import { activeFilterCount, alternativesSearch, FINDER_PAGE_SIZE, finderSearch, readFinderQuery, setSizeOf } from "@/lib/finder/finder-query";
 import { placardFor, readOriginalMarking } from "@/lib/finder/original-marking";
 
 describe("the finder's address", () => {
@@ -30,8 +31,20 @@ describe("the finder's address", () => {
       loadIndex: "119",
       speedSymbol: "S",
       quantity: "4",
+      limit: String(FINDER_PAGE_SIZE),
     });
     expect(alternativesSearch(readFinderQuery({ size: "285-50R20", quantity: "6" }), { loadIndex: null, loadIndexDual: null }).get("quantity")).toBe("6");
+  });
+
+  it("asks for a page of a dozen results, fewer than the API's default", () => {
+    const search = alternativesSearch(readFinderQuery({ size: "285-50R20", loadIndex: "119", speedSymbol: "S" }), { loadIndex: null, loadIndexDual: null });
+    expect(search.get("limit")).toBe("12");
+    expect(FINDER_PAGE_SIZE).toBeLessThan(DEFAULT_PAGE_SIZE);
+  });
+
+  it("counts the filters that narrow the list, not the set size or the sort", () => {
+    expect(activeFilterCount(readFinderQuery({ size: "285-50R20", quantity: "2", sort: "price" }))).toBe(0);
+    expect(activeFilterCount(readFinderQuery({ size: "285-50R20", season: "winter", inStock: "1", maxPriceCents: "20000" }))).toBe(3);
   });
 
   it("turns the address's short flags into the API's true", () => {
