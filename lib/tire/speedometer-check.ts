@@ -6,7 +6,7 @@ import { trueSpeed } from "./diameter-change";
  * speedometer on its own tires; here the reference size stands for those tires and is taken to read
  * true, so only the change of size moves the reading.
  */
-export const R39_SOURCE = "UN Regulation No. 39, §5.3";
+export const R39_SOURCE = "UN Regulation No. 39 §5.3";
 export const R39_OVER_READING_SHARE = 0.1;
 export const R39_OVER_READING_KMH = 4;
 

@@ -31,7 +31,7 @@ describe("the speedometer sentence (100 km/h in metric, 65 mph in imperial)", ()
   it("265/70R17 → 285/70R17: 65 × 830.8 ÷ 802.8 = 67.27 mph, below the true speed", () => {
     const said = sentence("265/70R17", "285/70R17", "imperial");
     expect(said.text).toBe(
-      "On 285/70R17, showing 65 mph, you would be doing 67.3 mph: the speedometer reads 2.3 mph below the true speed, which UN Regulation No. 39, §5.3 forbids.",
+      "On 285/70R17, showing 65 mph, you would be doing 67.3 mph: the speedometer reads 2.3 mph below the true speed, which UN Regulation No. 39 §5.3 forbids.",
     );
     expect(said.breaksRule).toBe(true);
     // 100 × 830.8 ÷ 802.8 = 103.49 km/h.
@@ -42,7 +42,7 @@ describe("the speedometer sentence (100 km/h in metric, 65 mph in imperial)", ()
     const said = sentence("225/45R17", "225/50R16", "imperial");
     // 65 × 631.4 ÷ 634.3 = 64.70 mph.
     expect(said.text).toBe(
-      "On 225/50R16, showing 65 mph, you would be doing 64.7 mph: a small change (−0.5 % in diameter); the speedometer reads 0.3 mph high, within what UN Regulation No. 39, §5.3 allows.",
+      "On 225/50R16, showing 65 mph, you would be doing 64.7 mph: a small change (−0.5 % in diameter); the speedometer reads 0.3 mph high, within what UN Regulation No. 39 §5.3 allows.",
     );
     expect(said.verdict).toBe("readsHigh");
     expect(said.breaksRule).toBe(false);
@@ -52,7 +52,7 @@ describe("the speedometer sentence (100 km/h in metric, 65 mph in imperial)", ()
     const said = sentence("225/50R16", "205/55R16", "metric");
     // 100 × 631.9 ÷ 631.4 = 100.08 km/h.
     expect(said.text).toBe(
-      "On 205/55R16, showing 100 km/h, you would be doing 100.1 km/h: a small change (+0.1 % in diameter), but the speedometer reads 0.1 km/h below the true speed, which UN Regulation No. 39, §5.3 forbids.",
+      "On 205/55R16, showing 100 km/h, you would be doing 100.1 km/h: a small change (+0.1 % in diameter), but the speedometer reads 0.1 km/h below the true speed, which UN Regulation No. 39 §5.3 forbids.",
     );
     expect(said.breaksRule).toBe(true);
   });
@@ -61,7 +61,7 @@ describe("the speedometer sentence (100 km/h in metric, 65 mph in imperial)", ()
     const said = sentence("285/75R16", "205/55R16", "metric");
     // 100 × 631.9 ÷ 833.9 = 75.78; 0.1 × 75.78 + 4 = 11.58 < 100 − 75.78 = 24.22.
     expect(said.text).toBe(
-      "On 205/55R16, showing 100 km/h, you would be doing 75.8 km/h: the speedometer reads 24.2 km/h high, more than UN Regulation No. 39, §5.3 allows (110 % of the true speed plus 4 km/h).",
+      "On 205/55R16, showing 100 km/h, you would be doing 75.8 km/h: the speedometer reads 24.2 km/h high, more than UN Regulation No. 39 §5.3 allows (110 % of the true speed plus 4 km/h).",
     );
     expect(said.verdict).toBe("readsTooHigh");
   });
