@@ -144,6 +144,8 @@ test.describe("the Counter's catalog table at 390 px", () => {
   test.skip(({ isMobile }) => !isMobile, "the narrow layout is for phones");
 
   test("shows each item's size, load/speed, price and on hand without scrolling sideways", async ({ page }, testInfo) => {
+    // A budget, not a measure: the accessibility scan reads fifty rows of inputs.
+    test.slow();
     await page.goto("/counter");
     await page.getByLabel("E-mail").fill("staff@sidewise.test");
     await page.getByLabel("Password").fill("sidewise-demo");
@@ -156,7 +158,7 @@ test.describe("the Counter's catalog table at 390 px", () => {
     // The item's cell leads with its size and load index with speed symbol, as on the sidewall: 205/55R16 91V.
     await row.scrollIntoViewIfNeeded();
     await expect(row.getByRole("rowheader")).toContainText(/R\d{2}\S* \d{2,3}(\/\d{2,3})?\(?[A-Z]/);
-    for (const shown of [row.getByRole("rowheader"), page.getByLabel(`Price of ${sku} in dollars`), page.getByLabel(`Quantity of ${sku} on hand`), row.getByText(/on hand$/)]) {
+    for (const shown of [row.getByRole("rowheader"), page.getByLabel(`Price of ${sku} in dollars`), page.getByLabel(`Quantity of ${sku} on hand`), row.locator("[data-stock]")]) {
       await expect(shown).toBeInViewport();
       const box = (await shown.boundingBox())!;
       expect(box.x).toBeGreaterThanOrEqual(0);
