@@ -9,6 +9,7 @@ import { useUnitSystem } from "@/components/units/use-unit-system";
 import { compareSizes, formatSize, hasNominalDiameter, measurableSizeFromSlug, noDiameterMessage, sizeFromSlug, sizeGeometry, sizeToSlug, type MeasurableSize } from "@/lib/tire";
 import { DifferenceTable } from "./difference-table";
 import { type SizeEntry, SizeListEditor } from "./size-list-editor";
+import { SpeedometerSummary } from "./speedometer-summary";
 import { SpeedometerTable } from "./speedometer-table";
 
 function entryOf(text: string, id: number): SizeEntry {
@@ -72,6 +73,7 @@ export function SideBySide({ initialSizes }: { initialSizes: string[] }) {
         )}
         {compared.length > 1 ? (
           <>
+            <SpeedometerSummary sizes={compared} units={units} />
             <DifferenceTable sizes={compared} units={units} />
             <SpeedometerTable sizes={compared} units={units} />
           </>

@@ -121,7 +121,7 @@ export function CatalogInlineEdit({ sku, field, value, label }: CatalogInlineEdi
           className={`min-h-11 rounded border border-rule bg-paper px-2 text-right font-mono aria-invalid:border-danger ${field === "priceCents" ? "w-24" : "w-16"}`}
         />
       </span>
-      <span id={`${id}-status`} role="status" className={`max-w-40 text-right text-xs ${status.kind === "error" ? "text-danger" : "text-ink-soft"}`}>
+      <span id={`${id}-status`} role="status" className={`max-w-28 text-right text-xs lg:max-w-40 ${status.kind === "error" ? "text-danger" : "text-ink-soft"}`}>
         {message}
         {status.kind === "saved" ? (
           <>

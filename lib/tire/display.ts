@@ -23,6 +23,17 @@ export function formatSpeed(kmh: number, units: UnitSystem): string {
   return units === "metric" ? `${formatInteger(kmh)} km/h` : `${formatInteger(kmhToMph(kmh))} mph`;
 }
 
+/** A speed to a tenth, as the speedometer figures show it: 67.3 mph, 103.5 km/h. */
+export function formatSpeedToTenth(kmh: number, units: UnitSystem): string {
+  return units === "metric" ? `${formatOneDecimal(kmh)} km/h` : `${formatOneDecimal(kmhToMph(kmh))} mph`;
+}
+
+/** A gap between two speeds, to a tenth; one that rounds to nothing is "less than 0.1 mph". */
+export function formatSpeedGap(kmh: number, units: UnitSystem): string {
+  const text = formatSpeedToTenth(Math.abs(kmh), units);
+  return text.startsWith("0.0 ") ? `less than 0.1 ${units === "metric" ? "km/h" : "mph"}` : text;
+}
+
 export function formatPressure(kPa: number, units: UnitSystem): string {
   return units === "metric" ? `${formatInteger(kPa)} kPa` : `${formatInteger(kpaToPsi(kPa))} psi`;
 }

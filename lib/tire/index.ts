@@ -16,6 +16,8 @@ export * from "./describe-tire";
 export { COMMON_SIZES } from "./common-sizes";
 export * from "./placard";
 export * from "./compare";
+export * from "./speedometer-check";
+export * from "./speedometer-words";
 export { diameterChangePct } from "./diameter-change";
 export * from "./plus";
 export * from "./vocabulary";
