@@ -1,7 +1,7 @@
 import { diameterChangePct, trueSpeed } from "./diameter-change";
 import { formatSize } from "./format";
 import { sizeGeometry, type MeasurableSize } from "./geometry";
-import { speedometerVerdict } from "./speedometer-check";
+import { readsBelowTrueSpeed, speedometerVerdict } from "./speedometer-check";
 import { KM_PER_MILE, mmToIn } from "./units";
 
 export interface SpeedometerRow {
@@ -59,7 +59,7 @@ export function compareSizes(sizes: readonly MeasurableSize[]): ComparedSize[] {
       diameterDiffPct: diameterChangePct(reference, diameter),
       clearanceChangeMm: (diameter - reference) / 2,
       speedometer: speedometerRows(reference, diameter),
-      readsBelowTrue: speedometerVerdict(SHOWN_KMH[0], reference, diameter) === "readsBelowTrue",
+      readsBelowTrue: readsBelowTrueSpeed(speedometerVerdict(SHOWN_KMH[0], reference, diameter)),
     };
   });
 }

@@ -26,7 +26,8 @@ export function speedometerSentence(referenceMm: number, size: ComparedSize, uni
   const verdictWords: Record<SpeedometerVerdict, string> = {
     same: "the same as on the reference",
     readsHigh: `${small ? `${small}; ` : ""}the speedometer reads ${gap} high, within what ${R39_SOURCE} allows`,
-    readsBelowTrue: `${small ? `${small}, but ` : ""}the speedometer reads ${gap} below the true speed, which ${R39_SOURCE} forbids`,
+    slightlyBelowTrue: `${small}; the speedometer reads ${gap} below the true speed if it read true on the reference; speedometers are usually set to read a little high, which covers a change this small (common practice), and a fitter can check yours`,
+    readsBelowTrue: `the speedometer reads ${gap} below the true speed, which ${R39_SOURCE} forbids`,
     readsTooHigh: `the speedometer reads ${gap} high, more than ${R39_SOURCE} allows (110 % of the true speed plus 4 km/h)`,
   };
   return { designation: size.designation, verdict, breaksRule: breaksR39(verdict), text: `${reading}: ${verdictWords[verdict]}.` };
@@ -36,6 +37,7 @@ export function speedometerSentence(referenceMm: number, size: ComparedSize, uni
 export const VERDICT_MARK: Record<SpeedometerVerdict, string | null> = {
   same: null,
   readsHigh: null,
+  slightlyBelowTrue: null,
   readsBelowTrue: "below true speed",
   readsTooHigh: "too high",
 };
