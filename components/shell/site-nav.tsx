@@ -73,7 +73,7 @@ export function SiteNav() {
         className={`${open ? "flex" : "hidden"} absolute inset-x-0 top-full z-40 flex-col gap-2 border-b border-rule bg-sheet px-4 py-3 shadow-lg lg:static lg:flex lg:flex-row lg:items-center lg:justify-between lg:gap-4 lg:border-0 lg:bg-transparent lg:p-0 lg:shadow-none`}
       >
         <NavLinks items={navFor(typeof session === "object" ? session.role : null)} pathname={pathname} onNavigate={() => setOpenOn(null)} />
-        <div className="border-t border-rule pt-2 lg:border-0 lg:pt-0">
+        <div className="border-t border-rule pt-2 pl-1 lg:border-0 lg:pt-0 lg:pl-0">
           <AccountMenu state={session} onChange={setSession} />
         </div>
       </div>
