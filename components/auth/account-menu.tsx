@@ -3,18 +3,23 @@
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { postAuth } from "./post-auth";
-import { useBrowserSession } from "./use-browser-session";
+import type { BrowserSession } from "./use-browser-session";
 
 const linkClass = "inline-flex min-h-11 items-center px-2 font-semibold text-accent underline-offset-4 hover:underline";
 
-/** Sign in, or the signed-in person's account link and a sign-out button; read in the browser so pages stay static. */
-export function AccountMenu() {
+interface AccountMenuProps {
+  /** Read in the browser (`useBrowserSession`) so pages stay static; shared with the navigation. */
+  state: BrowserSession;
+  onChange: (session: BrowserSession) => void;
+}
+
+/** Sign in, or the signed-in person's account link and a sign-out button. */
+export function AccountMenu({ state, onChange }: AccountMenuProps) {
   const router = useRouter();
-  const [state, setState] = useBrowserSession();
 
   async function signOut() {
     await postAuth("sign-out", {});
-    setState("signed-out");
+    onChange("signed-out");
     router.push("/");
     router.refresh();
   }

@@ -13,6 +13,9 @@ export const loadIndexRows: readonly LoadIndexRow[] = Array.from({ length: LOAD_
   return { key: String(index), index, kg: loadIndexKg(index) ?? Number.NaN };
 });
 
+/** The anchor of a load index's row on the lesson: /learn/load-index#load-index-150. */
+export const loadIndexAnchor = (index: number): string => `load-index-${index}`;
+
 type WeightUnit = "kg" | "lb";
 const weightWords: Record<string, WeightUnit> = {
   kg: "kg", kgs: "kg", kilo: "kg", kilos: "kg", kilogram: "kg", kilograms: "kg",

@@ -1,9 +1,11 @@
 "use client";
 
 import { CAR_LOAD_INDEX_RANGE } from "@/content/learn/ranges";
-import { formatLoad, LOAD_INDEX_MAX, LOAD_INDEX_MIN } from "@/lib/tire";
-import { loadIndexRows, searchLoadIndices, type LoadIndexRow } from "./load-index-search";
-import { TableFinder, type FinderColumn, type FinderFilter } from "./table-finder";
+import { formatLoad } from "@/lib/tire";
+import type { CommonRange } from "./common-range";
+import type { FinderColumn } from "./finder-table";
+import { loadIndexAnchor, loadIndexRows, searchLoadIndices, type LoadIndexRow } from "./load-index-search";
+import { TableFinder } from "./table-finder";
 
 const [carFrom, carTo] = CAR_LOAD_INDEX_RANGE;
 
@@ -14,12 +16,13 @@ const columns: readonly FinderColumn<LoadIndexRow>[] = [
   { label: "What it means", cell: (row) => `carries ${formatLoad(row.kg, "metric")} / ${formatLoad(row.kg, "imperial")} per tire` },
 ];
 
-const filters: readonly FinderFilter<LoadIndexRow>[] = [
-  { id: "all", label: `All (${LOAD_INDEX_MIN}\u2060–\u2060${LOAD_INDEX_MAX})`, includes: () => true },
-  { id: "cars", label: `Common on cars and light trucks (${carFrom}\u2060–\u2060${carTo})`, includes: (row) => row.index >= carFrom && row.index <= carTo },
-];
+const commonRange: CommonRange<LoadIndexRow> = {
+  description: `those common on cars and light trucks (${carFrom}\u2060–\u2060${carTo}); a search covers them all`,
+  includes: (row) => row.index >= carFrom && row.index <= carTo,
+  showAllLabel: `Show all ${loadIndexRows.length} load indices`,
+};
 
-/** All load indices with their loads, searchable by index, service description or weight. */
+/** Every load index with its load, opening at the range common on cars and light trucks; searchable by index, service description or weight. */
 export function LoadIndexTable() {
   return (
     <TableFinder
@@ -30,8 +33,8 @@ export function LoadIndexTable() {
       search={searchLoadIndices}
       searchLabel="Find a load index or a weight"
       searchHint="Type a load index such as 119, a service description such as 119S, or a weight per tire such as 1360 kg or 2998 lb."
-      filterLegend="Show"
-      filters={filters}
+      commonRange={commonRange}
+      rowId={(row) => loadIndexAnchor(row.index)}
     />
   );
 }

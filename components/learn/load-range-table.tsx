@@ -2,7 +2,8 @@
 
 import { formatPressure, psiToKpa } from "@/lib/tire";
 import { loadRangeRows, searchLoadRanges, type LoadRangeRow } from "./load-range-search";
-import { TableFinder, type FinderColumn } from "./table-finder";
+import type { FinderColumn } from "./finder-table";
+import { TableFinder } from "./table-finder";
 
 function typicalPressure(row: LoadRangeRow): string | null {
   if (row.typicalMaxPsi === null) return null;

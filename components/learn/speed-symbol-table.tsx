@@ -3,7 +3,9 @@
 import { SLOWEST_ROAD_SPEED_SYMBOL } from "@/content/learn/ranges";
 import { formatSpeed, speedSymbolRank } from "@/lib/tire";
 import { searchSpeedSymbols, speedSymbolRows, type SpeedSymbolRow } from "./speed-symbol-search";
-import { TableFinder, type FinderColumn, type FinderFilter } from "./table-finder";
+import type { CommonRange } from "./common-range";
+import type { FinderColumn } from "./finder-table";
+import { TableFinder } from "./table-finder";
 
 const bothSpeeds = (row: SpeedSymbolRow) => `${formatSpeed(row.kmh, "metric")} / ${formatSpeed(row.kmh, "imperial")}`;
 
@@ -15,15 +17,14 @@ const columns: readonly FinderColumn<SpeedSymbolRow>[] = [
 ];
 
 const roadRank = speedSymbolRank(SLOWEST_ROAD_SPEED_SYMBOL);
-const rankOf = (row: SpeedSymbolRow) => speedSymbolRank(row.symbol);
 
-const filters: readonly FinderFilter<SpeedSymbolRow>[] = [
-  { id: "all", label: "All symbols", includes: () => true },
-  { id: "road", label: `Cars and light trucks (${SLOWEST_ROAD_SPEED_SYMBOL} and faster)`, includes: (row) => rankOf(row) >= roadRank },
-  { id: "slow", label: "Slow machines and special vehicles", includes: (row) => rankOf(row) < roadRank },
-];
+const commonRange: CommonRange<SpeedSymbolRow> = {
+  description: `those of cars and light trucks (${SLOWEST_ROAD_SPEED_SYMBOL} and faster); a search covers them all`,
+  includes: (row) => speedSymbolRank(row.symbol) >= roadRank,
+  showAllLabel: `Show all ${speedSymbolRows.length} speed symbols, slow machines too`,
+};
 
-/** Every speed symbol in order of speed, searchable by letter, service description or speed. */
+/** Every speed symbol in order of speed, opening at those of cars and light trucks; searchable by letter, service description or speed. */
 export function SpeedSymbolTable() {
   return (
     <TableFinder
@@ -34,8 +35,7 @@ export function SpeedSymbolTable() {
       search={searchSpeedSymbols}
       searchLabel="Find a speed symbol or a speed"
       searchHint="Type a letter such as H, a service description such as 95H, or a speed such as 210 km/h or 130 mph."
-      filterLegend="Show"
-      filters={filters}
+      commonRange={commonRange}
     />
   );
 }

@@ -1,4 +1,7 @@
-/** The Sidewise mark: a tire in side view with a dimension line across its diameter. */
+/**
+ * The Sidewise mark: a tire in side view with a dimension line across its diameter. The app's icons
+ * (app/icon.svg, and app/favicon.ico and app/apple-icon.png drawn from it) show the same mark: redraw them when it changes.
+ */
 export function BrandMark({ className }: { className?: string }) {
   return (
     <svg viewBox="0 0 32 32" className={className} aria-hidden="true" focusable="false">

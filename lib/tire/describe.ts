@@ -1,9 +1,9 @@
-import { formatLength, formatLoad, formatPressure, formatSpeed, type UnitSystem } from "./display";
+import { formatInchesAsMarked, formatLength, formatLoad, formatMillimetresAsMarked, formatPressure, formatSpeed, type UnitSystem } from "./display";
 import { loadIndexKg } from "./load-index";
 import { rimTwin } from "./rim-twins";
 import { serviceType } from "./service-type";
 import type { DetailKind, Marking, PartKind, ServiceDescription, Span, TireSize } from "./types";
-import { lbToKg, mmToIn, psiToKpa } from "./units";
+import { lbToKg, psiToKpa } from "./units";
 
 export interface PartSpan {
   start: number;
@@ -51,27 +51,16 @@ function spanOf(spans: Span[], part: PartKind): PartSpan | null {
   return { start: found[0]!.start, end: found[found.length - 1]!.end };
 }
 
-/** Inches as marked on a size: 12.50, 7.50, 11. */
-function markedInches(mm: number): string {
-  const inches = mmToIn(mm);
-  return Number.isInteger(Math.round(inches * 100) / 100) ? String(Math.round(inches)) : inches.toFixed(2);
-}
-
-/** An inch figure as marked, with millimetres beside it for metric readers. */
-function inchesAsMarked(mm: number, units: UnitSystem): string {
-  return units === "metric" ? `${markedInches(mm)} in (${formatLength(mm, "metric")})` : `${markedInches(mm)} in`;
-}
-
 function describeSize(marking: Marking, size: TireSize, units: UnitSystem, add: AddPart): void {
   const { geometry } = marking;
   const sizeSpan = spanOf(marking.spans, "size");
   const sub = (detail: DetailKind) => detailSpan(marking, detail) ?? sizeSpan;
   if (size.prefix) add("prefix", `${size.prefix}: ${PREFIX_MEANING[size.prefix]}`, sub("prefix"));
   if (size.flotationDiameterIn !== null && geometry) {
-    add("overallDiameter", `${inchesAsMarked(geometry.overallDiameterMm, units)} tall overall; sidewall ${formatLength(geometry.sidewallMm, units)} high`, sub("overallDiameter"), "overall");
+    add("overallDiameter", `${formatInchesAsMarked(geometry.overallDiameterMm, units)} tall overall; sidewall ${formatLength(geometry.sidewallMm, units)} high`, sub("overallDiameter"), "overall");
   }
   // Metric sizes mark the width in millimetres; the others (flotation, inch-width) in inches.
-  const width = size.kind === "metric" ? formatLength(size.sectionWidthMm, units) : inchesAsMarked(size.sectionWidthMm, units);
+  const width = size.kind === "metric" ? formatMillimetresAsMarked(size.sectionWidthMm, units) : formatInchesAsMarked(size.sectionWidthMm, units);
   add("sectionWidth", `${width} wide`, sub("sectionWidth"), "sectionWidth");
   const aspect = geometry?.aspectRatio ?? null;
   if (geometry && aspect !== null) {

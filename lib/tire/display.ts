@@ -14,6 +14,22 @@ export function formatLength(mm: number, units: UnitSystem): string {
   return units === "metric" ? `${formatInteger(mm)} mm` : `${formatOneDecimal(mmToIn(mm))} in`;
 }
 
+/** Inches as a size marks them: 12.50, 7.50, 11. */
+function markedInches(mm: number): string {
+  const inches = mmToIn(mm);
+  return Number.isInteger(Math.round(inches * 100) / 100) ? String(Math.round(inches)) : inches.toFixed(2);
+}
+
+/** A figure the tire marks in inches, as marked, with millimetres beside it for metric readers: 12.50 in (318 mm). */
+export function formatInchesAsMarked(mm: number, units: UnitSystem): string {
+  return units === "metric" ? `${markedInches(mm)} in (${formatLength(mm, "metric")})` : `${markedInches(mm)} in`;
+}
+
+/** A figure the tire marks in millimetres, with the millimetres as marked beside inches for imperial readers: 8.9 in (225 mm). */
+export function formatMillimetresAsMarked(mm: number, units: UnitSystem): string {
+  return units === "metric" ? formatLength(mm, "metric") : `${formatLength(mm, "imperial")} (${formatLength(mm, "metric")})`;
+}
+
 /** A load, as the load tables print it: 1,360 kg or 2,998 lb (kg × 2.20462, rounded). */
 export function formatLoad(kg: number, units: UnitSystem): string {
   return units === "metric" ? `${formatInteger(kg)} kg` : `${formatInteger(kgToLb(kg))} lb`;

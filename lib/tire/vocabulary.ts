@@ -56,9 +56,9 @@ export const isSku = (text: string): boolean => SKU_PATTERN.test(text);
 export const ROLES = ["customer", "staff", "admin"] as const;
 export type Role = (typeof ROLES)[number];
 
-/** Roles are ordered: admin includes staff, staff includes customer. An unknown role grants nothing. */
-export function hasRole(userRole: string | null | undefined, needed: Role): boolean {
-  const rank = ROLES.indexOf(userRole as Role);
+/** Whether a role may do what `needed` may: admin includes staff, staff includes customer. An unknown role grants nothing. */
+export function hasRole(role: string | null | undefined, needed: Role): boolean {
+  const rank = ROLES.indexOf(role as Role);
   return rank >= 0 && rank >= ROLES.indexOf(needed);
 }
 

@@ -1,5 +1,6 @@
 import { expect, test, type Page } from "./helpers/test";
 import { expectNoAxeViolations } from "./helpers/axe";
+import { openMainNav } from "./helpers/main-nav";
 
 async function signIn(page: Page, email: string) {
   await page.getByLabel("E-mail").fill(email);
@@ -23,8 +24,12 @@ test.describe("accounts", () => {
     await signIn(page, "staff@sidewise.test");
     await expect(page).toHaveURL(/\/counter$/);
     await expect(page.getByRole("heading", { level: 1, name: "Counter" })).toBeVisible();
-    await page.getByRole("button", { name: "Sign out" }).click();
-    await expect(page.getByRole("link", { name: "Sign in" })).toBeVisible();
+    await (await openMainNav(page)).getByRole("button", { name: "Sign out" }).click();
+    await expect(page).toHaveURL(/\/$/);
+    const nav = await openMainNav(page);
+    await expect(nav.getByRole("link", { name: "Sign in" })).toBeVisible();
+    // The Counter leaves the navigation with the session.
+    await expect(nav.getByRole("link", { name: "Counter", exact: true })).toHaveCount(0);
   });
 
   test("a customer is refused the Counter but sees their account", async ({ page }) => {

@@ -13,6 +13,7 @@ const topics = [
 ];
 
 const tableRows = (page: Page) => page.locator("tbody tr[data-row]");
+const shownRows = (page: Page) => page.locator("tbody tr[data-row]:visible");
 const rowCount = (page: Page) => page.getByRole("status").filter({ hasText: "Showing" });
 
 test.describe("Sidewall school", () => {
@@ -37,17 +38,19 @@ test.describe("Sidewall school", () => {
     });
   }
 
-  test("the load-index table holds all 280 rows and its search finds 119 → 1,360 kg (ISO 4000-1 / ETRTO)", async ({ page }) => {
+  test("the load-index table holds all 280 rows, opens at 60–130 and its search finds 119 → 1,360 kg (ISO 4000-1 / ETRTO)", async ({ page }) => {
     await page.goto("/learn/load-index");
     await expect(tableRows(page)).toHaveCount(280);
-    await expect(rowCount(page)).toContainText("Showing 280 of 280");
+    // 60–130, the range common on cars and light trucks (common practice, content/learn/ranges.ts).
+    await expect(shownRows(page)).toHaveCount(71);
+    await expect(rowCount(page)).toContainText("Showing 71 of 280");
     await page.getByLabel("Find a load index or a weight").fill("119");
     await expect(tableRows(page)).toHaveCount(1);
     await expect(tableRows(page).first()).toContainText("carries 1,360 kg / 2,998 lb per tire");
     await expect(rowCount(page)).toContainText("Showing 1 of 280");
-    await page.getByLabel(/Common on cars and light trucks/).check();
     await page.getByLabel("Find a load index or a weight").fill("");
-    await expect(tableRows(page)).toHaveCount(71);
+    await page.getByLabel("Show all 280 load indices").check();
+    await expect(shownRows(page)).toHaveCount(280);
     await expectNoAxeViolations(page);
   });
 
@@ -70,9 +73,12 @@ test.describe("Sidewall school", () => {
 test.describe("Sidewall school without JavaScript", () => {
   test.use({ javaScriptEnabled: false });
 
-  test("every row of the load-index table is in the page", async ({ page }) => {
+  test("every row of the load-index table is in the page, and the rest of the table unfolds", async ({ page }) => {
     await page.goto("/learn/load-index");
     await expect(tableRows(page)).toHaveCount(280);
     await expect(page.locator('tbody tr[data-row="119"]')).toContainText("1,360 kg");
+    await expect(shownRows(page)).toHaveCount(71);
+    await page.getByLabel("Show all 280 load indices").check();
+    await expect(shownRows(page)).toHaveCount(280);
   });
 });

@@ -1,5 +1,6 @@
 import { expect, test } from "./helpers/test";
 import { expectNoAxeViolations } from "./helpers/axe";
+import { openMainNav } from "./helpers/main-nav";
 
 const shellPages = [
   { path: "/", heading: "What does your sidewall say?" },
@@ -24,14 +25,15 @@ test.describe("the app shell", () => {
 
   test("the main navigation leads to each screen and marks the current one", async ({ page }) => {
     await page.goto("/");
-    const nav = page.getByRole("navigation", { name: "Main" });
-    await nav.getByRole("link", { name: "Side-by-side" }).click();
+    await (await openMainNav(page)).getByRole("link", { name: "Side-by-side" }).click();
     await expect(page).toHaveURL(/\/compare$/);
-    await expect(nav.getByRole("link", { name: "Side-by-side" })).toHaveAttribute("aria-current", "page");
     await expect(page.getByRole("heading", { level: 1, name: "What a different size changes" })).toBeVisible();
+    const nav = await openMainNav(page);
+    await expect(nav.getByRole("link", { name: "Side-by-side" })).toHaveAttribute("aria-current", "page");
     await nav.getByRole("link", { name: "Sidewall school" }).click();
     await expect(page).toHaveURL(/\/learn$/);
-    await nav.getByRole("link", { name: "Sidewall reader" }).click();
+    await expect(page.getByRole("heading", { level: 1, name: "Sidewall school" })).toBeVisible();
+    await (await openMainNav(page)).getByRole("link", { name: "Sidewall reader" }).click();
     await expect(page.getByRole("heading", { level: 1, name: "What does your sidewall say?" })).toBeVisible();
   });
 

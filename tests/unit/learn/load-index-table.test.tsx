@@ -7,16 +7,17 @@ afterEach(cleanup);
 
 const rows = () => Array.from(document.querySelectorAll("tbody tr[data-row]"));
 const rowKeys = () => rows().map((row) => row.getAttribute("data-row"));
+const unfoldedKeys = () => rows().filter((row) => !row.hasAttribute("data-folded")).map((row) => row.getAttribute("data-row"));
 const count = () => screen.getByRole("status").textContent ?? "";
 const search = (text: string) => fireEvent.change(screen.getByLabelText("Find a load index or a weight"), { target: { value: text } });
 
 describe("the load-index table", () => {
-  it("lists all 280 load indices, 0 to 279, each saying what it carries (ISO 4000-1 / ETRTO load-index table)", () => {
+  it("holds all 280 load indices, 0 to 279, each saying what it carries (ISO 4000-1 / ETRTO load-index table)", () => {
     render(<LoadIndexTable />);
     expect(rows()).toHaveLength(280);
     expect(rowKeys()[0]).toBe("0");
     expect(rowKeys()[279]).toBe("279");
-    expect(count()).toContain("Showing 280 of 280");
+    expect(document.getElementById("load-index-150")?.getAttribute("data-row")).toBe("150");
     // Index 0 = 45 kg; index 279 = 136,000 kg (ISO 4000-1 table; lb = kg × 2.20462, rounded).
     expect(rows()[0]?.textContent).toContain("carries 45 kg / 99 lb per tire");
     expect(rows()[279]?.textContent).toContain("carries 136,000 kg / 299,828 lb per tire");
@@ -66,19 +67,23 @@ describe("the load-index table", () => {
     expect(document.querySelector("tbody")?.textContent).toContain("Nothing matches");
   });
 
-  it("narrows to the indices common on cars and light trucks, 60 to 130 (common practice), and back", () => {
+  it("opens at the indices common on cars and light trucks, 60 to 130 (common practice), the rest folded away until asked for", () => {
     render(<LoadIndexTable />);
-    fireEvent.click(screen.getByLabelText(/Common on cars and light trucks/));
-    expect(rows()).toHaveLength(71);
-    expect(rowKeys()[0]).toBe("60");
-    expect(rowKeys()[70]).toBe("130");
-    expect(count()).toContain("Showing 71 of 280");
+    const keys = unfoldedKeys();
+    expect(keys).toHaveLength(71);
+    expect(keys[0]).toBe("60");
+    expect(keys[70]).toBe("130");
+    expect(count()).toContain("Showing 71 of 280 load indices: those common on cars and light trucks");
+    fireEvent.click(screen.getByLabelText("Show all 280 load indices"));
+    expect(unfoldedKeys()).toHaveLength(280);
+    expect(count()).toContain("Showing 280 of 280");
+  });
+
+  it("searches every load index, not only the common range", () => {
+    render(<LoadIndexTable />);
     search("150");
-    expect(rows()).toHaveLength(0);
-    search("119");
-    expect(rowKeys()).toEqual(["119"]);
-    fireEvent.click(screen.getByLabelText(/^All/));
+    expect(unfoldedKeys()).toEqual(["150"]);
     search("");
-    expect(rows()).toHaveLength(280);
+    expect(unfoldedKeys()).toHaveLength(71);
   });
 });

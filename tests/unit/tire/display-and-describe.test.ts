@@ -1,7 +1,15 @@
 import { describe, expect, it } from "vitest";
 import { parseMarking, type Marking } from "@/lib/tire";
 import { describeMarking } from "@/lib/tire/describe";
-import { defaultUnitSystem, formatLength, formatLoad, formatSignedPercent, formatSpeed } from "@/lib/tire/display";
+import {
+  defaultUnitSystem,
+  formatInchesAsMarked,
+  formatLength,
+  formatLoad,
+  formatMillimetresAsMarked,
+  formatSignedPercent,
+  formatSpeed,
+} from "@/lib/tire/display";
 
 function read(text: string): Marking {
   const result = parseMarking(text, { today: new Date("2026-12-02T00:00:00Z") });
@@ -14,6 +22,15 @@ describe("display formatting", () => {
     expect(formatLength(793, "metric")).toBe("793 mm");
     expect(formatLength(793, "imperial")).toBe("31.2 in");
     expect(formatLength(2491.28, "metric")).toBe("2,491 mm");
+  });
+
+  it("keeps the figure printed on the tire beside the other unit (1 in = 25.4 mm exactly, by definition)", () => {
+    // 225 mm ÷ 25.4 = 8.86 in; 12.50 in × 25.4 = 317.5 mm.
+    expect(formatMillimetresAsMarked(225, "imperial")).toBe("8.9 in (225 mm)");
+    expect(formatMillimetresAsMarked(225, "metric")).toBe("225 mm");
+    expect(formatInchesAsMarked(317.5, "metric")).toBe("12.50 in (318 mm)");
+    expect(formatInchesAsMarked(317.5, "imperial")).toBe("12.50 in");
+    expect(formatInchesAsMarked(838.2, "imperial")).toBe("33 in");
   });
 
   it("shows loads as the load tables print them: kg and kg × 2.20462 rounded (common practice)", () => {
@@ -58,7 +75,8 @@ describe("describing a marking part by part", () => {
   it("reads each part in plain words, in the chosen units", () => {
     const parts = describeMarking(read("285/50R20 119S"), "imperial");
     const reading = Object.fromEntries(parts.map((part) => [part.key, part.reading]));
-    expect(reading.sectionWidth).toBe("11.2 in wide");
+    // 285 mm ÷ 25.4 = 11.22 in; the millimetres printed on the tire stay beside the inches.
+    expect(reading.sectionWidth).toBe("11.2 in (285 mm) wide");
     // A passenger size (no LT, ST or C): no dual rating (common practice).
     expect(reading.loadIndex).toBe("119: carries up to 2,998 lb per tire; no dual rating: not for dual wheels");
     expect(reading.speedSymbol).toBe("S: built for up to 112 mph");

@@ -40,7 +40,7 @@ export default async function EditItemPage({ params }: { params: Promise<{ sku: 
         ← Back to the catalog
       </Link>
       <PageIntro eyebrow={`Counter · SKU ${item.sku}`} title={`${item.brand} ${item.line} ${item.designation}`}>
-        <p>Change any field; the size is read again by the tire core when you save.</p>
+        <p>Change any field; the size is checked again when you save.</p>
       </PageIntro>
       <ItemForm brands={brands} initial={initial} sku={item.sku} />
       <ItemRetire sku={item.sku} />

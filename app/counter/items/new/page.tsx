@@ -23,7 +23,7 @@ export default async function NewItemPage() {
         ← Back to the catalog
       </Link>
       <PageIntro eyebrow="Counter · catalog" title="Add an item">
-        <p>A size of a line the catalog already has (new brands and lines are added on the Lines page). The size is read by the tire core as you type.</p>
+        <p>A size of a line the catalog already has (new brands and lines are added on the Lines page). The size is checked as you type.</p>
       </PageIntro>
       <ItemForm brands={brands} initial={EMPTY} />
     </section>
