@@ -1,10 +1,3 @@
-import { ROLES, type Role } from "@/lib/tire";
-
-/** Staff and admin: each role in ROLES includes the ones before it. */
-export function isStaffRole(role: string): boolean {
-  return ROLES.includes(role as Role) && ROLES.indexOf(role as Role) >= ROLES.indexOf("staff");
-}
-
 /** What ticking a result does, for who is looking: staff put it on a Fit card, a driver in a price request. */
 export const pickLabel = (staff: boolean): string => (staff ? "Add to a Fit card" : "Add to my price request");
 

@@ -1,7 +1,7 @@
 "use client";
 
 import { useBrowserSession } from "@/components/auth/use-browser-session";
-import { isStaffRole } from "./pick-words";
+import { hasRole } from "@/lib/tire";
 
 /**
  * Whether staff are looking, read in the browser so the finder is the same page for everyone on the
@@ -9,5 +9,5 @@ import { isStaffRole } from "./pick-words";
  */
 export function useStaffView(): boolean {
   const [session] = useBrowserSession();
-  return typeof session === "object" && isStaffRole(session.role);
+  return typeof session === "object" && hasRole(session.role, "staff");
 }
