@@ -12,10 +12,10 @@ export const safetyCautions = [
 ] as const;
 
 /**
- * The Plus planner's cautions: that page is about changing the wheel, so "keep the same rim diameter"
- * becomes what a new wheel and the tire on it must still meet.
+ * The cautions of the pages about changing size (Side-by-side, the Plus planner): "keep the same rim
+ * diameter" becomes what a new wheel and the tire on it must still meet.
  */
-export const plusPlannerCautions = [
+export const sizeChangeCautions = [
   "Follow the tire and loading information placard on your vehicle (usually on the driver's door jamb): the new tire's load index and speed symbol must still be at least what it specifies.",
   "A new wheel must be approved for the vehicle: bolt pattern, centre bore, offset and the wheel's own load rating. The TPMS sensors must suit the new wheels, or be moved over and checked.",
   "A new tire fits only a wheel of exactly its rim size. 16- and 16.5-inch tires and wheels (likewise 15 and 15.5, 17 and 17.5) never interchange: when buying a new wheel, match its diameter to the tire exactly, since a bead seated on the wrong rim can burst.",

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { SideBySide } from "@/components/compare/side-by-side";
 import { PageIntro } from "@/components/ui/page-intro";
 import { SafetyCautions } from "@/components/ui/safety-cautions";
+import { sizeChangeCautions } from "@/content/safety";
 import { MAX_COMPARED_SIZES } from "@/lib/compare/read-sizes";
 import { formatSize, sizeFromSlug } from "@/lib/tire";
 
@@ -26,7 +27,7 @@ export default async function SideBySidePage({ searchParams }: { searchParams: S
         <p>Up to four sizes drawn over each other to one scale. The first is the reference: the size your speedometer is set for.</p>
       </PageIntro>
       <SideBySide initialSizes={initialSizes.length > 0 ? initialSizes : ["", ""]} />
-      <SafetyCautions />
+      <SafetyCautions cautions={sizeChangeCautions} />
     </section>
   );
 }

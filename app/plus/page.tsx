@@ -7,7 +7,7 @@ import { PlusActions, PlusPicks } from "@/components/plus/plus-picks";
 import { PlusWidthRule } from "@/components/plus/plus-width-rule";
 import { PageIntro } from "@/components/ui/page-intro";
 import { SafetyCautions } from "@/components/ui/safety-cautions";
-import { plusPlannerCautions } from "@/content/safety";
+import { sizeChangeCautions } from "@/content/safety";
 import { readShopTolerance } from "@/lib/shop/tolerance";
 import { answerPlus, plusQuerySchema } from "@/lib/plus/plus-request";
 
@@ -62,7 +62,7 @@ export default async function PlusPlannerPage({ searchParams }: { searchParams: 
           </PlusPicks>
         </>
       ) : null}
-      <SafetyCautions cautions={plusPlannerCautions} />
+      <SafetyCautions cautions={sizeChangeCautions} />
     </section>
   );
 }

@@ -53,7 +53,12 @@ test.describe("Ask the shop and Fit cards on Side-by-side and the Plus planner",
     test.slow(); // an e-mail round trip and an accessibility scan with the form open
     await context.grantPermissions(["clipboard-read", "clipboard-write"]);
     await page.goto(COMPARE);
-    await expect(page.getByRole("row", { name: /Diameter change/ })).toBeVisible();
+    // A table row on a wide screen, a block per size on a phone.
+    await expect(page.getByText("Diameter change").filter({ visible: true }).first()).toBeVisible();
+    // Side-by-side is about changing size: its cautions speak of a new wheel, not of keeping the rim diameter.
+    const cautions = page.getByRole("complementary", { name: "Before you choose" });
+    await expect(cautions).toContainText("bolt pattern");
+    await expect(cautions).not.toContainText(/keep the same rim diameter/i);
     // The page writes its sizes back to the address (the comma percent-encoded); the link returns to them either way.
     await expectCopyLinkAndSignIn(page, /^\/sign-in\?next=%2Fcompare%3Fsizes%3D225-45R17(%2C|%252C)235-40R18$/);
     await page.getByRole("button", { name: "Copy link" }).click();
