@@ -18,9 +18,8 @@ export function CopyOrSignIn({ signedOut }: { signedOut: boolean }) {
   return (
     <div className="flex flex-col gap-2 print:hidden">
       <p className="text-ink-soft">
-        {signedOut
-          ? "This page's link holds what you see: copy it to come back later or to send it on. Sign in to save it as a Fit card."
-          : "This page's link holds what you see: copy it to come back later or to send it on. Your account cannot save Fit cards."}
+        This page&apos;s link holds what you see: copy it to come back later or to send it on.{" "}
+        {signedOut ? "Sign in to save it as a Fit card." : "Your account cannot save Fit cards."}
       </p>
       <div className="flex flex-wrap gap-2">
         <button type="button" onClick={() => copy(window.location.href)} className={button}>
