@@ -1,3 +1,4 @@
+import { availableParallelism } from "node:os";
 import { fileURLToPath } from "node:url";
 import react from "@vitejs/plugin-react";
 import { defineConfig } from "vitest/config";
@@ -10,6 +11,8 @@ export default defineConfig({
     include: ["tests/unit/**/*.test.{ts,tsx}", "tests/integration/**/*.test.{ts,tsx}", "tests/security/**/*.test.{ts,tsx}"],
     globalSetup: ["tests/integration/global-setup.ts"],
     reporters: process.env.CI ? ["verbose"] : ["default"],
+    // Every file opens its own database, so files run side by side on every core (the default leaves one idle).
+    maxWorkers: availableParallelism(),
     testTimeout: 30_000,
     hookTimeout: 60_000,
   },

@@ -62,3 +62,14 @@ export function formatTable(rows: readonly BenchRow[]): string {
 
 /** True when the module at `moduleUrl` is the script node was asked to run (not imported by `npm run bench`). */
 export const isMainModule = (moduleUrl: string): boolean => process.argv[1] !== undefined && pathToFileURL(process.argv[1]).href === moduleUrl;
+
+/**
+ * When the bench's module is the script being run (`npm run bench:x [-- --quick]`), runs it, prints its
+ * table and sets a failing exit code when a goal is missed; imported by `npm run bench`, does nothing.
+ */
+export async function runIfMain(moduleUrl: string, bench: Bench): Promise<void> {
+  if (!isMainModule(moduleUrl)) return;
+  const rows = await bench({ quick: process.argv.includes("--quick") });
+  console.log(`\n${formatTable(rows)}`);
+  process.exitCode = rows.some((row) => row.met === false) ? 1 : 0;
+}
