@@ -1,4 +1,5 @@
 // Plain JavaScript: Next.js loads its cache handler at run time, outside the compiled app.
+import { createRequire } from "node:module";
 //
 // The server's one cache of rendered pages, share images and cached reads (the shop's contact and
 // finder settings), held in memory and bounded in bytes (next.config.mjs `cacheMaxMemorySize`),
@@ -8,6 +9,7 @@
 // after the server starts, with the database as it is then.
 
 const TAGS_HEADER = "x-next-cache-tags";
+const NEXT_LIFETIMES_MODULE = "next/dist/server/lib/incremental-cache/shared-cache-controls.external.js";
 const FALLBACK_MAX_BYTES = 32 * 1024 * 1024;
 
 /** @param {{ length?: number } | undefined | null} buffer */
@@ -60,9 +62,13 @@ export class BoundedStore {
   revalidatedAt = new Map();
   bytes = 0;
 
-  /** @param {number} maxBytes */
-  constructor(maxBytes) {
+  /**
+   * @param {number} maxBytes
+   * @param {(key: string) => void} [forget] told of every key the store lets go of or refuses
+   */
+  constructor(maxBytes, forget = () => {}) {
     this.maxBytes = maxBytes;
+    this.forget = forget;
   }
 
   /** @param {string} key */
@@ -86,11 +92,13 @@ export class BoundedStore {
    * @param {{ tags?: string[], cacheControl?: unknown }} [context]
    */
   async set(key, value, context = {}) {
-    this.delete(key);
+    this.delete(key, { forget: false });
     const bytes = storedBytes(value);
-    if (bytes === null) return;
-    const size = key.length + bytes;
-    if (size > this.maxBytes) return;
+    const size = bytes === null ? null : key.length + bytes;
+    if (size === null || size > this.maxBytes) {
+      this.forget(key);
+      return;
+    }
     const tags = [...new Set([...tagsOf(value), ...(context.tags ?? [])])];
     this.entries.set(key, { lastModified: Date.now(), value, bytes: size, tags, cacheControl: context.cacheControl });
     this.bytes += size;
@@ -102,7 +110,8 @@ export class BoundedStore {
 
   /**
    * Expires at once whatever carries one of the tags, whatever lifetime the caller names: after a
-   * change, the next request reads the database again.
+   * change, the next request reads the database again. The entries go within this call (Next.js
+   * makes it before the answer to the change is sent), not later.
    * @param {string | string[]} tags
    */
   async revalidateTag(tags) {
@@ -114,13 +123,32 @@ export class BoundedStore {
     }
   }
 
-  /** @param {string} key */
-  delete(key) {
+  /** @param {string} key @param {{ forget?: boolean }} [options] */
+  delete(key, { forget = true } = {}) {
     const entry = this.entries.get(key);
+    if (forget) this.forget(key);
     if (!entry) return;
     this.entries.delete(key);
     this.bytes -= entry.bytes;
   }
+}
+
+/**
+ * Next.js also remembers, in a map of its own that never shrinks, the lifetime of every path it has
+ * rendered for the cache, a 404 for any string under /size/ included: about 250 bytes per path, so a
+ * crawler inventing paths would grow it without end. The store keeps it to the paths it holds (an
+ * entry it answers carries its lifetime back). If a version of Next.js moves the map, nothing breaks:
+ * it is left alone, as before.
+ * @returns {(key: string) => void}
+ */
+function forgetNextLifetime() {
+  try {
+    const lifetimes = createRequire(import.meta.url)(NEXT_LIFETIMES_MODULE).SharedCacheControls?.cacheControls;
+    if (lifetimes instanceof Map) return (key) => lifetimes.delete(key);
+  } catch {
+    // Not found in this version of Next.js.
+  }
+  return () => {};
 }
 
 /** @type {BoundedStore | undefined} */
@@ -132,7 +160,7 @@ let shared;
 export default class BoundedCacheHandler {
   /** @param {{ maxMemoryCacheSize?: number }} [context] */
   constructor(context = {}) {
-    shared ??= new BoundedStore(context.maxMemoryCacheSize || FALLBACK_MAX_BYTES);
+    shared ??= new BoundedStore(context.maxMemoryCacheSize || FALLBACK_MAX_BYTES, forgetNextLifetime());
     this.store = shared;
   }
 

@@ -64,6 +64,20 @@ describe("the bounded cache", () => {
     expect(store.bytes).toBe("/learn".length + 500 + 3);
   });
 
+  it("tells Next.js to forget the paths it refuses or lets go, and only those, so that nothing else grows per path", async () => {
+    const forgotten: string[] = [];
+    const store = new BoundedStore(2_500, (key) => forgotten.push(key));
+    await store.set("/size/not-a-size", page("<p>not found</p>", { status: 404 }));
+    await store.set("/size/285-50r20", page("", { status: 308 }));
+    await store.set("/size/285-50R20", page("x".repeat(1_000)));
+    await store.set("/size/245-35R21", page("x".repeat(1_000)));
+    expect(forgotten).toEqual(["/size/not-a-size", "/size/285-50r20"]);
+    await store.set("/size/225-45R17", page("x".repeat(1_000)));
+    expect(forgotten).toEqual(["/size/not-a-size", "/size/285-50r20", "/size/285-50R20"]);
+    await store.revalidateTag("shop");
+    expect(forgotten).toEqual(["/size/not-a-size", "/size/285-50r20", "/size/285-50R20", "/size/245-35R21", "/size/225-45R17"]);
+  });
+
   it("is one store for every handler Next.js makes (one per request), starting empty", async () => {
     const first = new BoundedCacheHandler({ maxMemoryCacheSize: 1024 * 1024 });
     expect(await first.get("/learn")).toBeNull();
