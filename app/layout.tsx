@@ -1,10 +1,9 @@
 import type { Metadata, Viewport } from "next";
 import localFont from "next/font/local";
 import type { ReactNode } from "react";
-import { connection } from "next/server";
 import { ShopContactLine } from "@/components/shell/shop-contact";
 import { SiteFooter } from "@/components/shell/site-footer";
-import { readShopContact } from "@/lib/shop/queries";
+import { readCachedShopContact } from "@/lib/shop/shop-cache";
 import { SiteHeader } from "@/components/shell/site-header";
 import { siteUrl } from "@/lib/env/site-url";
 import "./globals.css";
@@ -38,10 +37,10 @@ export const viewport: Viewport = {
   ],
 };
 
-// The contact line reads the database, so it waits for a request: the rest of the page does not wait for it.
+// The contact comes from the cache, refreshed when the shop's settings change: no page is rendered
+// per request for it, and pages that read nothing else stay static.
 async function FooterContact() {
-  await connection();
-  return <ShopContactLine contact={await readShopContact()} />;
+  return <ShopContactLine contact={await readCachedShopContact()} />;
 }
 
 export default function RootLayout({ children }: { children: ReactNode }) {

@@ -3,6 +3,7 @@ import { PageIntro } from "@/components/ui/page-intro";
 
 type SearchParams = Promise<Record<string, string | string[] | undefined>>;
 
+// Rendered per request: the text to read comes in the address (?q=), so a shared link opens with it.
 export default async function SidewallReaderPage({ searchParams }: { searchParams: SearchParams }) {
   const { q } = await searchParams;
   const initialText = typeof q === "string" ? q.slice(0, 2000) : "";

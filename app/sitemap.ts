@@ -1,6 +1,6 @@
 import type { MetadataRoute } from "next";
 import { siteUrl } from "@/lib/env/site-url";
-import { COMMON_SIZES, sizeFromSlug, sizeToSlug } from "@/lib/tire";
+import { commonSizeSlugs } from "@/lib/size-sheet/read-size-sheet";
 
 export default function sitemap(): MetadataRoute.Sitemap {
   const base = siteUrl();
@@ -8,9 +8,9 @@ export default function sitemap(): MetadataRoute.Sitemap {
     url: new URL(path, base).toString(),
     changeFrequency: "monthly" as const,
   }));
-  const sizeSheets = COMMON_SIZES.flatMap((designation) => {
-    const size = sizeFromSlug(designation);
-    return size ? [{ url: new URL(`/size/${sizeToSlug(size)}`, base).toString(), changeFrequency: "yearly" as const }] : [];
-  });
+  const sizeSheets = commonSizeSlugs().map((slug) => ({
+    url: new URL(`/size/${slug}`, base).toString(),
+    changeFrequency: "yearly" as const,
+  }));
   return [...pages, ...sizeSheets];
 }

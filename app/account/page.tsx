@@ -9,6 +9,7 @@ import { readShopTimeZone } from "@/lib/shop/queries";
 
 export const metadata: Metadata = { title: "Your account", robots: { index: false } };
 
+// Rendered per request: it is the signed-in person's own page, with their Fit cards.
 export default async function AccountPage() {
   const { user } = await requirePageUser("/account", "customer");
   const db = await getDb();

@@ -13,6 +13,7 @@ export const metadata: Metadata = {
 
 type SearchParams = Promise<Record<string, string | string[] | undefined>>;
 
+// Rendered per request: the sizes to compare come in the address.
 export default async function SideBySidePage({ searchParams }: { searchParams: SearchParams }) {
   const { sizes } = await searchParams;
   const typed = typeof sizes === "string" ? sizes.slice(0, 400).split(",").map((size) => size.trim()).filter(Boolean) : [];

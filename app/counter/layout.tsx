@@ -4,6 +4,7 @@ import { CounterNav } from "@/components/counter/counter-nav";
 import { hasRole } from "@/lib/auth/roles";
 import { getSessionUser } from "@/lib/auth/session";
 
+// Rendered per request, like every Counter page: it reads the session, and shows stock and requests as they are now.
 /** The Counter's section tabs, for staff and admins; each page still checks access itself. */
 export default async function CounterLayout({ children }: { children: ReactNode }) {
   const user = await getSessionUser(await headers());

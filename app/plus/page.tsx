@@ -18,6 +18,7 @@ export const metadata: Metadata = {
 
 type SearchParams = Promise<Record<string, string | string[] | undefined>>;
 
+// Rendered per request: the size and wheel come in the address, and the counts come from the stock, which changes with every sale.
 export default async function PlusPlannerPage({ searchParams }: { searchParams: SearchParams }) {
   await connection();
   const params = Object.fromEntries(Object.entries(await searchParams).map(([key, value]) => [key, Array.isArray(value) ? value[0] : value]));

@@ -6,7 +6,7 @@ import { StartForm } from "@/components/finder/start-form";
 import { PageIntro } from "@/components/ui/page-intro";
 import { SafetyCautions } from "@/components/ui/safety-cautions";
 import { readFinderQuery } from "@/lib/finder/finder-query";
-import { readShopTolerance } from "@/lib/shop/tolerance";
+import { readCachedShopTolerance } from "@/lib/shop/shop-cache";
 import { listBrandNames } from "@/lib/finder/queries";
 
 export const metadata: Metadata = {
@@ -16,12 +16,14 @@ export const metadata: Metadata = {
 
 type SearchParams = Promise<Record<string, string | string[] | undefined>>;
 
+// Rendered per request: the search lives in the address, and the brands listed come from the stock,
+// which changes with every sale. The shop's default tolerance comes from the cache.
 export default async function ReplacementFinderPage({ searchParams }: { searchParams: SearchParams }) {
   await connection();
   const query = readFinderQuery(await searchParams);
   const complete = Boolean(query.size && query.loadIndex !== undefined && query.speedSymbol);
   const db = await getDb();
-  const [brands, defaultTolerancePct] = await Promise.all([listBrandNames(db), readShopTolerance(db)]);
+  const [brands, defaultTolerancePct] = await Promise.all([listBrandNames(db), readCachedShopTolerance()]);
   return (
     <section className="flex flex-col gap-6">
       <PageIntro eyebrow="Replacement finder" title="Equal-or-better tires in stock">

@@ -7,6 +7,7 @@ import { PageIntro } from "@/components/ui/page-intro";
 // The address carries the reset token: keep it out of search results and out of Referer headers.
 export const metadata: Metadata = { title: "Choose a new password", robots: { index: false }, referrer: "no-referrer" };
 
+// Rendered per request: the reset token comes in the address.
 export default async function ResetPasswordPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const { token, error } = await searchParams;
   const parsedToken = resetTokenSchema.safeParse(token);

@@ -6,6 +6,7 @@ import { safeNextPath } from "@/lib/auth/next-path";
 
 export const metadata: Metadata = { title: "Sign in" };
 
+// Rendered per request: the page to return to comes in the address.
 export default async function SignInPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const { next: nextParam, reset, signedUp } = await searchParams;
   const next = safeNextPath(nextParam);

@@ -6,6 +6,7 @@ import { safeNextPath } from "@/lib/auth/next-path";
 
 export const metadata: Metadata = { title: "Create an account" };
 
+// Rendered per request: the page to return to comes in the address.
 export default async function SignUpPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const next = safeNextPath((await searchParams).next);
   return (

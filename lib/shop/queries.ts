@@ -1,6 +1,5 @@
 import type { Database } from "@/db/client";
 import { shop } from "@/db/schema";
-import { getDb } from "@/lib/database/app-database";
 import { DEFAULT_TIME_ZONE, LOCALE } from "@/lib/format/format";
 import { describeOpeningHours } from "./hours";
 
@@ -37,15 +36,6 @@ export interface ShopContact {
   email: string;
   /** The week's opening hours in one line, from the shop's hours. */
   openingHours: string;
-}
-
-/** The shop's contact for the footer of every page; null when the database cannot be reached, so no page fails for it. */
-export async function readShopContact(): Promise<ShopContact | null> {
-  try {
-    return await getShopContact(await getDb());
-  } catch {
-    return null;
-  }
 }
 
 /**

@@ -1,4 +1,4 @@
-import { formatLength, formatSize, type Geometry, type Marking, parseMarking, sizeFromSlug, sizeToSlug, type TireSize } from "@/lib/tire";
+import { COMMON_SIZES, formatLength, formatSize, type Geometry, type Marking, parseMarking, sizeFromSlug, sizeToSlug, type TireSize } from "@/lib/tire";
 
 export interface SizeSheetData {
   size: TireSize;
@@ -36,4 +36,17 @@ export function readSizeSheet(segment: string): SizeSheetData | null {
     `${formatLength(geometry.overallDiameterMm, "metric")} (${formatLength(geometry.overallDiameterMm, "imperial")}) tall, ` +
     `for ${size.rimDiameterIn}-inch wheels, ${Math.round(geometry.revsPerMile)} revolutions per mile.`;
   return { size, geometry, marking, designation, slug: sizeToSlug(size), summary };
+}
+
+/** The one URL spelling of each common size: the Size sheets the sitemap lists and the build renders. */
+export function commonSizeSlugs(): string[] {
+  return COMMON_SIZES.flatMap((designation) => {
+    const size = sizeFromSlug(designation);
+    return size ? [sizeToSlug(size)] : [];
+  });
+}
+
+/** generateStaticParams of the Size sheet and its share image: the common sizes, rendered at build. */
+export function commonSizeParams(): { size: string }[] {
+  return commonSizeSlugs().map((size) => ({ size }));
 }

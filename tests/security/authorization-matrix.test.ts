@@ -12,7 +12,7 @@ vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typ
 // on a page of the app's own origin (APP_ORIGIN of the helpers; a hoisted mock cannot import it).
 const actionCaller = vi.hoisted(() => ({ cookie: undefined as string | undefined }));
 vi.mock("next/headers", () => ({ headers: async () => new Headers({ origin: "http://localhost:3000", ...(actionCaller.cookie ? { cookie: actionCaller.cookie } : {}) }) }));
-vi.mock("next/cache", () => ({ revalidatePath: () => undefined }));
+vi.mock("next/cache", () => import("../integration/helpers/next-cache-outside-server"));
 
 type Handler = (request: NextRequest, context: { params: Promise<Record<string, string>> }) => Promise<Response>;
 

@@ -14,6 +14,7 @@ type Params = Promise<{ token: string }>;
 // The link is the driver's key: no search engine may keep it.
 export const metadata: Metadata = { title: "Your offer", robots: { index: false, follow: false } };
 
+// Rendered per request: an offer's status and free times change as the driver and the shop act on it.
 export default async function OfferPage({ params }: { params: Params }) {
   const { token } = await params;
   if (!offerTokenParamsSchema.safeParse({ token }).success) notFound();

@@ -17,6 +17,7 @@ type Params = Promise<{ slug: string }>;
 
 export const metadata: Metadata = { title: "Fit card", robots: { index: false } };
 
+// Rendered per request: a Fit card's prices and stock are read as they are now.
 export default async function FitCardPage({ params }: { params: Params }) {
   const { slug } = await params;
   if (!FIT_CARD_SLUG_PATTERN.test(slug)) notFound();

@@ -3,12 +3,20 @@ import { drawnTireOf } from "@/components/reader/drawn-tire";
 import { FactRows } from "@/components/share-image/fact-rows";
 import { TireSketch } from "@/components/share-image/tire-sketch";
 import { shareImageFonts, shareImageSize } from "@/lib/share-image/fonts";
-import { readSizeSheet } from "@/lib/size-sheet/read-size-sheet";
+import { commonSizeParams, readSizeSheet } from "@/lib/size-sheet/read-size-sheet";
 import { formatLength, formatRevolutions } from "@/lib/tire";
 
 export const size = shareImageSize;
 export const contentType = "image/png";
 export const alt = "The tire size drawn to scale with its overall diameter, width and revolutions per mile";
+
+// Like the Size sheet: the common sizes drawn at build, any other size at its first request, then
+// served from the server's cache; a 404 is never stored.
+export const dynamicParams = true;
+
+export function generateStaticParams(): { size: string }[] {
+  return commonSizeParams();
+}
 
 export default async function SizeShareImage({ params }: { params: Promise<{ size: string }> }) {
   const sheet = readSizeSheet((await params).size);

@@ -7,10 +7,19 @@ import { AskTheShop } from "@/components/quotes/ask-the-shop";
 import { MeasurementsTable } from "@/components/reader/measurements-table";
 import { PageIntro } from "@/components/ui/page-intro";
 import { SafetyCautions } from "@/components/ui/safety-cautions";
-import { readSizeSheet } from "@/lib/size-sheet/read-size-sheet";
+import { commonSizeParams, readSizeSheet } from "@/lib/size-sheet/read-size-sheet";
 import { NO_NOMINAL_DIAMETER } from "@/lib/tire";
 
 type Params = Promise<{ size: string }>;
+
+// Nothing here changes between requests: the common sizes are rendered at build, any other size at
+// its first request, and each is then served from the server's cache (bounded: next.config.mjs).
+// Only a size's one spelling is kept: a 404 or a redirect to the canonical spelling is never stored.
+export const dynamicParams = true;
+
+export function generateStaticParams(): { size: string }[] {
+  return commonSizeParams();
+}
 
 export async function generateMetadata({ params }: { params: Params }): Promise<Metadata> {
   const sheet = readSizeSheet((await params).size);

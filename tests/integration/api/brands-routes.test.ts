@@ -18,6 +18,7 @@ import { getDatabaseHandle, getDb } from "@/lib/database/app-database";
 import { callRoute, signIn } from "../helpers/auth-session";
 
 vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typeof import("next/server")>()), connection: async () => undefined }));
+vi.mock("next/cache", () => import("../helpers/next-cache-outside-server"));
 
 const cookies: Record<"staff" | "admin" | "customer", string> = { staff: "", admin: "", customer: "" };
 type Caller = keyof typeof cookies | "anonymous";

@@ -11,6 +11,7 @@ import { callRoute, signIn } from "../helpers/auth-session";
 import { checkContract } from "../helpers/contract";
 
 vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typeof import("next/server")>()), connection: async () => undefined }));
+vi.mock("next/cache", () => import("../helpers/next-cache-outside-server"));
 
 // Truck and inch-width sizes (TRA designations, common practice): the section width in inches, no
 // aspect ratio, and so no overall diameter from the marking alone; 1 in = 25.4 mm exactly.

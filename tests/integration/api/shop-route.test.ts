@@ -1,12 +1,15 @@
 import { desc, eq } from "drizzle-orm";
+import { revalidateTag } from "next/cache";
 import { afterAll, beforeAll, beforeEach, describe, expect, it, vi } from "vitest";
 import { GET, PATCH } from "@/app/api/v1/shop/route";
 import { auditEvent, shop } from "@/db/schema";
 import { getDatabaseHandle, getDb } from "@/lib/database/app-database";
 import { demoShop } from "@/lib/demo/shop";
+import { SHOP_CACHE_TAG } from "@/lib/shop/shop-cache";
 import { callRoute, signIn } from "../helpers/auth-session";
 
 vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typeof import("next/server")>()), connection: async () => undefined }));
+vi.mock("next/cache", () => import("../helpers/next-cache-outside-server"));
 
 const cookies = { customer: "", staff: "", admin: "" };
 
@@ -102,6 +105,18 @@ describe("PATCH /api/v1/shop", () => {
       taxRateBp: { from: 725, to: 800 },
     });
     expect(audit?.summary).toBe("Town “Halvering” → “Upper Halvering”; Saturday 08:00–14:00 → 08:00–12:00, 13:00–16:00; tax rate 7.25 % → 8 %");
+  });
+
+  it("expires the shop's cache (the footer's contact, the finder's defaults) once a change has been written, and only then", async () => {
+    vi.mocked(revalidateTag).mockClear();
+    expect((await change({ phone: "(555) 014-7788" })).status).toBe(200);
+    expect(vi.mocked(revalidateTag).mock.calls).toEqual([[SHOP_CACHE_TAG, { expire: 0 }]]);
+
+    vi.mocked(revalidateTag).mockClear();
+    expect((await change({ phone: "(555) 014-7788" })).status).toBe(200);
+    expect((await change({ phone: "call us" })).status).toBe(400);
+    expect((await change({ taxRateBp: 800 }, cookies.staff)).status).toBe(403);
+    expect(vi.mocked(revalidateTag), "a change of nothing, a refused change: nothing to expire").not.toHaveBeenCalled();
   });
 
   it("keeps closed dates in order, takes UTC and IANA names ICU lists under an older spelling, and audits nothing for no change", async () => {

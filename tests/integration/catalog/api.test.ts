@@ -11,6 +11,7 @@ import { estimateSet } from "@/lib/money/estimate";
 
 // Outside a Next.js request `connection()` throws; here every call is a request of its own.
 vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typeof import("next/server")>()), connection: async () => undefined }));
+vi.mock("next/cache", () => import("../helpers/next-cache-outside-server"));
 
 const TIRE_KEYS = [
   "sku", "brand", "line", "designation", "loadIndex", "loadIndexDual", "speedSymbol", "loadRange", "extraLoad",

@@ -5,6 +5,7 @@ import { getDatabaseHandle, getDb } from "@/lib/database/app-database";
 import { callRoute, signIn } from "../helpers/auth-session";
 
 vi.mock("next/server", async (importOriginal) => ({ ...(await importOriginal<typeof import("next/server")>()), connection: async () => undefined }));
+vi.mock("next/cache", () => import("../helpers/next-cache-outside-server"));
 
 // Rule 3 of the shop's contract: where the original has a dual index, or the Placard check asks for a
 // dual minimum, only a tire with a dual index at least that high qualifies. Passenger tires carry no
