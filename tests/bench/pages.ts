@@ -11,7 +11,7 @@ import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { ensureProductionBuild, startProductionServer } from "./production-server";
-import { type Bench, type BenchRow, formatTable, isMainModule, median, percentile, ratioRow } from "./report";
+import { type Bench, type BenchRow, isMainModule, median, percentile, ratioRow, runIfMain } from "./report";
 
 const FLOOR = "/api/health";
 const GOAL_PAGES = ["/size/285-50R20", "/learn", "/learn/load-index"];
@@ -95,7 +95,4 @@ function printDetails({ p50s, ratios }: Figures): void {
   console.log("");
 }
 
-if (isMainModule(import.meta.url)) {
-  const quick = process.argv.includes("--quick");
-  console.log(formatTable(await run({ quick })));
-}
+await runIfMain(import.meta.url, run);
