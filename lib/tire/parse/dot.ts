@@ -11,7 +11,18 @@ const NOT_TIN_SYMBOLS = /[GIOQSZ]/;
 const AFTER_TIN = new Set(["MAX", "MAXIMUM", "LOAD", "XL", "SL", "TREADWEAR", "TRACTION", "TEMPERATURE", "TEMP", "UTQG", "DOT", "TIN"]);
 
 const isAlnum = (c: number): boolean => isDigit(c) || isLetter(c);
-const allDigits = (s: string): boolean => /^\d+$/.test(s);
+
+function allDigits(s: string): boolean {
+  for (let i = 0; i < s.length; i++) if (!isDigit(s.charCodeAt(i))) return false;
+  return s.length > 0;
+}
+
+/** The symbols in [from, end) in capitals; most codes are typed in capitals already. */
+function symbolsAt(input: string, from: number, end: number): string {
+  const text = input.slice(from, end);
+  for (let i = from; i < end; i++) if (input.charCodeAt(i) >= 97) return text.toUpperCase();
+  return text;
+}
 
 interface Group {
   text: string;
@@ -27,7 +38,7 @@ function tinGroups(input: string, from: number): Group[] {
     let end = pos;
     while (end < input.length && isAlnum(input.charCodeAt(end))) end++;
     if (end === pos) break;
-    const text = input.slice(pos, end).toUpperCase();
+    const text = symbolsAt(input, pos, end);
     const after = input.charCodeAt(end);
     const closes = end === input.length || isSpace(after) || ",;.)".includes(input.charAt(end));
     if (!closes || symbols + text.length > TIN_MAX_SYMBOLS || AFTER_TIN.has(text)) break;
