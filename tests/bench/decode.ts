@@ -1,86 +1,94 @@
 /**
- * Decoding throughput: builds 100,000 mixed markings from a fixed seed, warms up, then decodes them all.
- * Run with `npm run bench:decode`.
+ * Decoding speed by CPU time: 100,000 mixed markings from a fixed seed (20,000 with `quick`), decoded
+ * by parseMarking, beside a floor measured in the same process on the same text: one exec of a plain
+ * metric size pattern per marking. The two sides alternate, which goes first changes every round, and
+ * each figure is the median of the rounds, so a busy moment on the machine weighs on both alike.
+ * Goals: at least 500,000 markings a second, and at most 10 × the pattern's time per marking.
+ *
+ *   npm run bench:decode
  */
 import { parseMarking } from "../../lib/tire/index";
+import { generateMarkings } from "./decode-markings";
+import { formatTable, isMainModule, median, ratioRow, type Bench, type BenchRow } from "./report";
 
-const COUNT = 100_000;
-const RUNS = 5;
+const GOAL_PER_SECOND = 500_000;
+const MAX_RATIO = 10;
+const WARM_UP_ROUNDS = 3;
+/** The pattern is fast: its side reads the markings this many times a round, so a round lasts long enough to measure. */
+const PATTERN_REPEATS = 10;
+const METRIC_SIZE = /(\d{3})\/(\d{2})\s*(Z?R)\s*(\d{2})/i;
 
-/** Small deterministic generator (mulberry32) so every run decodes the same text. */
-function random(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
-const rand = random(20_240_601);
-const pick = <T>(items: readonly T[]): T => items[Math.floor(rand() * items.length)] as T;
-const int = (min: number, max: number): number => min + Math.floor(rand() * (max - min + 1));
-
-const widths = [155, 175, 185, 195, 205, 215, 225, 235, 245, 255, 265, 275, 285, 295, 305, 315];
-const aspects = [30, 35, 40, 45, 50, 55, 60, 65, 70, 75, 80];
-const rims = [13, 14, 15, 16, 17, 18, 19, 20, 21, 22];
-const speeds = ["Q", "R", "S", "T", "H", "V", "W", "Y", "(Y)"];
-const garbage = ["hello", "asdf qwer", "tire", "1234567890", "???", "the quick brown fox", "", "   ", "R", "xl xl xl", "日本語"];
-
-function metric(): string {
-  return `${pick(["", "", "P", "LT"])}${pick(widths)}/${pick(aspects)}${pick(["R", "R", "ZR", "r"])}${pick(rims)}`;
-}
-
-function forgiving(): string {
-  const [w, a, r] = [pick(widths), pick(aspects), pick(rims)];
-  return pick([`${w} ${a} ${r}`, `${w}/${a}/${r}`, `${w}${a}R${r}`, `${w}-${a}R${r}`]);
-}
-
-function service(): string {
-  const li = int(70, 126);
-  return rand() < 0.2 ? `${li}/${li - 3}${pick(speeds)}` : `${li}${pick(speeds)}`;
-}
-
-function dot(): string {
-  const week = String(int(1, 52)).padStart(2, "0");
-  const year = String(int(0, 25)).padStart(2, "0");
-  return pick([`DOT AB CD EFG ${week}${year}`, `DOT 4BA 1KL2 3M ${week}${year}`, `dot XX ${week}${year}`, `DOT ZZ 9${week.slice(0, 1)}${int(1, 9)}`]);
-}
-
-function utqg(): string {
-  const tw = int(3, 40) * 20;
-  return pick([`TREADWEAR ${tw} TRACTION A TEMPERATURE B`, `${tw} A A`, `${tw}AA A`, `UTQG ${tw} B C`]);
-}
-
-function sidewall(): string {
-  const extras = [pick(["", " XL", " M+S", " 3PMSF", " LOAD RANGE E", " RF", " 10PR"]), rand() < 0.3 ? ` ${dot()}` : "", rand() < 0.2 ? ` ${utqg()}` : ""];
-  return `${metric()} ${service()}${extras.join("")}`;
-}
-
-const makers = [metric, metric, forgiving, sidewall, sidewall, sidewall, dot, utqg, () => pick(garbage), () => `${int(28, 37)}x${pick(["10.50", "11.50", "12.50"])}R${pick([15, 17, 20])}LT ${service()}`];
-const markings = Array.from({ length: COUNT }, () => pick(makers)());
-
-let sink = 0;
-const decodeAll = (): void => {
-  for (const m of markings) sink += parseMarking(m).ok ? 1 : 0;
+const cpuMs = (): number => {
+  const { user, system } = process.cpuUsage();
+  return (user + system) / 1000;
 };
 
-for (let i = 0; i < 3; i++) decodeAll();
-const times: number[] = [];
-const cpuStart = process.cpuUsage();
-for (let i = 0; i < RUNS; i++) {
-  const start = performance.now();
-  decodeAll();
-  times.push(performance.now() - start);
+/** Kept so that no result can be optimised away. */
+let sink = 0;
+
+/** CPU nanoseconds per marking for one pass of parseMarking. */
+function decodePass(markings: readonly string[]): number {
+  const start = cpuMs();
+  for (const marking of markings) if (parseMarking(marking).ok) sink++;
+  return ((cpuMs() - start) * 1e6) / markings.length;
 }
-const cpu = process.cpuUsage(cpuStart);
-const cpuMsPerRun = (cpu.user + cpu.system) / 1000 / RUNS;
-times.sort((a, b) => a - b);
-const median = times[Math.floor(RUNS / 2)] as number;
-const perSecond = Math.round((COUNT / median) * 1000);
-console.log(`decoded ${COUNT.toLocaleString("en-US")} markings in ${median.toFixed(1)} ms (median of ${RUNS} runs)`);
-console.log(`${perSecond.toLocaleString("en-US")} markings/second (target 500,000)`);
-console.log(`runs (ms): ${times.map((t) => t.toFixed(1)).join(", ")}; CPU time per run ${cpuMsPerRun.toFixed(1)} ms`);
-if (sink < 0) console.log(sink);
+
+/** CPU nanoseconds per marking for one exec of the metric size pattern on each marking. */
+function patternPass(markings: readonly string[]): number {
+  const start = cpuMs();
+  for (let repeat = 0; repeat < PATTERN_REPEATS; repeat++) {
+    for (const marking of markings) if (METRIC_SIZE.exec(marking) !== null) sink++;
+  }
+  return ((cpuMs() - start) * 1e6) / (markings.length * PATTERN_REPEATS);
+}
+
+interface DecodeFigures {
+  count: number;
+  decodeNs: number[];
+  patternNs: number[];
+}
+
+function measure(quick: boolean): DecodeFigures {
+  const markings = generateMarkings(quick ? 20_000 : 100_000);
+  const rounds = quick ? 7 : 11;
+  const figures: DecodeFigures = { count: markings.length, decodeNs: [], patternNs: [] };
+  for (let round = 0; round < WARM_UP_ROUNDS + rounds; round++) {
+    const patternFirst = round % 2 === 1;
+    const pattern = patternFirst ? patternPass(markings) : 0;
+    const decode = decodePass(markings);
+    const patternAfter = patternFirst ? pattern : patternPass(markings);
+    if (round < WARM_UP_ROUNDS) continue;
+    figures.decodeNs.push(decode);
+    figures.patternNs.push(patternAfter);
+  }
+  return figures;
+}
+
+const perSecond = (ns: number): number => 1e9 / ns;
+const range = (values: readonly number[], format: (value: number) => string): string =>
+  `${format(Math.min(...values))}–${format(Math.max(...values))}`;
+/** (max − min) ÷ median, in per cent. */
+const spreadPct = (values: readonly number[]): number => ((Math.max(...values) - Math.min(...values)) / median(values)) * 100;
+
+function rowsOf({ decodeNs, patternNs }: DecodeFigures): BenchRow[] {
+  const rate = perSecond(median(decodeNs));
+  return [
+    { figure: "parseMarking, markings/s by CPU time", value: rate, unit: "/s", goal: `≥ ${GOAL_PER_SECOND.toLocaleString("en-US")}/s`, met: rate >= GOAL_PER_SECOND },
+    ratioRow("parseMarking, CPU time a marking", median(decodeNs), "ns", { name: "size pattern exec", value: median(patternNs) }, MAX_RATIO),
+  ];
+}
+
+export const run: Bench = async ({ quick }) => rowsOf(measure(quick));
+
+if (isMainModule(import.meta.url)) {
+  const figures = measure(false);
+  const { count, decodeNs, patternNs } = figures;
+  const ratios = decodeNs.map((ns, round) => ns / (patternNs[round] as number));
+  const whole = (value: number) => Math.round(value).toLocaleString("en-US");
+  console.log(`${count.toLocaleString("en-US")} markings, ${decodeNs.length} rounds after ${WARM_UP_ROUNDS} to warm up; CPU time of this process`);
+  console.log(`parseMarking: median ${whole(perSecond(median(decodeNs)))}/s (${median(decodeNs).toFixed(0)} ns a marking); rounds ${range(decodeNs.map(perSecond), whole)}/s, spread ${spreadPct(decodeNs).toFixed(0)} %`);
+  console.log(`size pattern: median ${median(patternNs).toFixed(0)} ns a marking; rounds ${range(patternNs, (ns) => ns.toFixed(0))} ns, spread ${spreadPct(patternNs).toFixed(0)} %`);
+  console.log(`ratio round by round: ${range(ratios, (ratio) => ratio.toFixed(1))} ×, median ${median(ratios).toFixed(1)} ×`);
+  console.log(formatTable(rowsOf(figures)));
+  if (sink < 0) console.log(sink);
+}

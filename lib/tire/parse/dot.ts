@@ -6,12 +6,28 @@ const TIN_MAX_SYMBOLS = 13;
 /** 9 symbols before the date code make a 13-symbol TIN, which starts with a 3-symbol plant code. */
 const SYMBOLS_BEFORE_DATE_WITH_3_SYMBOL_PLANT = 9;
 /** TIN symbols never include G, I, O, Q, S or Z (49 CFR 574.5, from memory). */
-const NOT_TIN_SYMBOLS = /[GIOQSZ]/;
-/** Words that end a TIN when they follow it on the same line. */
+const NOT_TIN_SYMBOLS: ReadonlySet<number> = new Set([..."GIOQSZ"].map((letter) => letter.charCodeAt(0)));
+/** Words that end a TIN when they follow it on the same line; only groups starting with a letter are looked up. */
 const AFTER_TIN = new Set(["MAX", "MAXIMUM", "LOAD", "XL", "SL", "TREADWEAR", "TRACTION", "TEMPERATURE", "TEMP", "UTQG", "DOT", "TIN"]);
 
 const isAlnum = (c: number): boolean => isDigit(c) || isLetter(c);
-const allDigits = (s: string): boolean => /^\d+$/.test(s);
+
+function hasNotTinSymbol(s: string): boolean {
+  for (let i = 0; i < s.length; i++) if (NOT_TIN_SYMBOLS.has(s.charCodeAt(i))) return true;
+  return false;
+}
+
+function allDigits(s: string): boolean {
+  for (let i = 0; i < s.length; i++) if (!isDigit(s.charCodeAt(i))) return false;
+  return s.length > 0;
+}
+
+/** The symbols in [from, end) in capitals; most codes are typed in capitals already. */
+function symbolsAt(input: string, from: number, end: number): string {
+  const text = input.slice(from, end);
+  for (let i = from; i < end; i++) if (input.charCodeAt(i) >= 97) return text.toUpperCase();
+  return text;
+}
 
 interface Group {
   text: string;
@@ -27,10 +43,10 @@ function tinGroups(input: string, from: number): Group[] {
     let end = pos;
     while (end < input.length && isAlnum(input.charCodeAt(end))) end++;
     if (end === pos) break;
-    const text = input.slice(pos, end).toUpperCase();
+    const text = symbolsAt(input, pos, end);
     const after = input.charCodeAt(end);
     const closes = end === input.length || isSpace(after) || ",;.)".includes(input.charAt(end));
-    if (!closes || symbols + text.length > TIN_MAX_SYMBOLS || AFTER_TIN.has(text)) break;
+    if (!closes || symbols + text.length > TIN_MAX_SYMBOLS || (isLetter(input.charCodeAt(pos)) && AFTER_TIN.has(text))) break;
     groups.push({ text, end });
     symbols += text.length;
     pos = end;
@@ -123,7 +139,7 @@ export function readDot(r: Reader, i: number): number {
   if (threeDigit) {
     d.assumptions.push(`The three-digit date code ${found.date} is from before 2000 and gives only the last digit of the year: week ${week} of ${year} is assumed (it could be ${year - 10}).`);
   }
-  if (NOT_TIN_SYMBOLS.test(before)) {
+  if (hasNotTinSymbol(before)) {
     d.warnings.push(`The DOT code "${input.slice(t.start, found.end)}" contains a letter that TINs never use (G, I, O, Q, S or Z); check for a misread, such as O for 0.`);
   }
   d.spans.push({ part: "dot", start: t.start, end: found.end });

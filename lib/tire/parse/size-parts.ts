@@ -70,7 +70,8 @@ export interface SizeMatch {
   at: SizeTokens | null;
 }
 
-export const inRange = (value: number, [min, max]: readonly [number, number]): boolean => value >= min && value <= max;
+/** Indexed rather than destructured: this runs for every number a size reader looks at. */
+export const inRange = (value: number, bounds: readonly [number, number]): boolean => value >= bounds[0] && value <= bounds[1];
 export const metricExample = (width: number, aspect: number | null): string => `${width}/${aspect ?? 55}R17`;
 export const flotationExample = (diameter: Token, width: Token): string => `${diameter.text}x${width.text}R15LT`;
 export const RADIAL_ASSUMED = ": radial construction assumed";

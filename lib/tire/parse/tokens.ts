@@ -20,6 +20,41 @@ export const isSpace = (c: number): boolean => c <= 32 || c === 0xa0 || c === 0x
 const MULTIPLICATION_SIGN = 0xd7;
 const isDash = (c: number): boolean => (c >= 0x2010 && c <= 0x2015) || c === 0x2212;
 
+/**
+ * Texts of short words and numbers, made once: most tokens are one of these, and a shared string is
+ * not allocated again and keeps its hash for the look-ups that follow.
+ */
+const LETTERS = 26;
+/** The same texts as property names return them, which the engine keeps once each and compares by reference. */
+function internalized(texts: readonly string[]): string[] {
+  return Object.keys(Object.fromEntries(texts.map((text) => [text, true])));
+}
+const SHORT_WORDS: readonly string[] = internalized(
+  Array.from({ length: LETTERS + LETTERS * LETTERS }, (_, k) =>
+    k < LETTERS ? String.fromCharCode(65 + k) : String.fromCharCode(65 + Math.floor((k - LETTERS) / LETTERS), 65 + ((k - LETTERS) % LETTERS)),
+  ),
+);
+const NUMBER_TEXT_LIMIT = 10_000;
+const NUMBER_TEXTS: (string | undefined)[] = new Array<string | undefined>(NUMBER_TEXT_LIMIT).fill(undefined);
+
+const upperLetterIndex = (c: number): number => (c >= 97 ? c - 97 : c - 65);
+
+/** Upper-cased text of the letter run [start, end). */
+function wordText(input: string, start: number, end: number, lower: boolean): string {
+  const length = end - start;
+  if (length === 1) return SHORT_WORDS[upperLetterIndex(input.charCodeAt(start))] as string;
+  if (length === 2) return SHORT_WORDS[LETTERS + upperLetterIndex(input.charCodeAt(start)) * LETTERS + upperLetterIndex(input.charCodeAt(start + 1))] as string;
+  return lower ? input.slice(start, end).toUpperCase() : input.slice(start, end);
+}
+
+/** Text of the digits [start, end) with value `value`; shared when it has no leading zero. */
+function digitsText(input: string, start: number, end: number, value: number): string {
+  if (value >= NUMBER_TEXT_LIMIT || (end - start > 1 && input.charCodeAt(start) === 48)) return input.slice(start, end);
+  let text = NUMBER_TEXTS[value];
+  if (text === undefined) NUMBER_TEXTS[value] = text = input.slice(start, end);
+  return text;
+}
+
 function digitsEnd(input: string, i: number): number {
   while (i < input.length && isDigit(input.charCodeAt(i))) i++;
   return i;
@@ -48,13 +83,15 @@ export function tokenize(input: string): Token[] {
       value = 0;
       for (; i < n && isDigit(input.charCodeAt(i)); i++) value = value * 10 + input.charCodeAt(i) - 48;
       plain = true;
-      text = input.slice(start, i);
-      if (input.charCodeAt(i) === 46 && isDigit(input.charCodeAt(i + 1))) {
+      text = digitsText(input, start, i, value);
+      // Reading past the end is slow: the character after a number is looked at only inside the text.
+      const after = i < n ? input.charCodeAt(i) : 0;
+      if (after === 46 && isDigit(input.charCodeAt(i + 1))) {
         i = digitsEnd(input, i + 1);
         text = input.slice(start, i);
         plain = false;
         value = Number(text);
-      } else if (input.charCodeAt(i) === 44) {
+      } else if (after === 44) {
         // Thousands separators: "2,998" but not "205,55".
         while (input.charCodeAt(i) === 44 && digitsEnd(input, i + 1) === i + 4) {
           text += input.slice(i + 1, i + 4);
@@ -71,7 +108,7 @@ export function tokenize(input: string): Token[] {
         if (!isLetter(d)) break;
         lower ||= d >= 97;
       }
-      text = lower ? input.slice(start, i).toUpperCase() : input.slice(start, i);
+      text = wordText(input, start, i, lower);
     } else if (c === MULTIPLICATION_SIGN) {
       kind = "word";
       text = "X";
