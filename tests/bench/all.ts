@@ -8,6 +8,7 @@ import { ensureProductionBuild } from "./production-server";
 import { type Bench, type BenchRow, formatTable } from "./report";
 
 const benches: { name: string; load: () => Promise<{ run: Bench }> }[] = [
+  { name: "decode", load: () => import("./decode") },
   { name: "pages", load: () => import("./pages") },
   { name: "load", load: () => import("./load") },
   { name: "durability", load: () => import("./durability") },
