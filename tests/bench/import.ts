@@ -29,7 +29,7 @@ import { signInAsStaff } from "./sign-in";
 const actor = { id: "bench-staff", email: "bench@sidewise.test" };
 const NO_DB_PATH = "/api/v1/decode?q=225%2F45R17%2094W";
 const DB_READ_PATH = "/api/v1/alternatives?size=225%2F45R17&loadIndex=91&speedSymbol=V&limit=12";
-const PACE_MS = 20;
+const PACE_MS = 100;
 
 function importFile(rows: number, skuPrefix: string, priceCentsOffset = 0): string {
   const items = generatedCsvItems(rows, { seed: 31, skuPrefix }).map((item) => ({ ...item, priceCents: item.priceCents + priceCentsOffset }));
