@@ -78,7 +78,6 @@ function chunks<T>(items: readonly T[], toRecord: (item: T) => Record<string, un
 /** Resolves the fitments of a plan's rows and writes each statement's JSON, before any transaction starts. */
 export async function prepareWrites(db: Database, plan: ImportPlan): Promise<PreparedWrites> {
   const ids = await fitmentIds(db, [...plan.added, ...plan.updated.map((update) => update.row)]);
-  (globalThis as any).__phase = "json";
   const idOf = (row: NewStockItem) => ids.get(factsKey(row))!;
   return {
     inserts: chunks(plan.added, (row) => record(row, idOf(row))),
