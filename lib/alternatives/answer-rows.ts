@@ -9,11 +9,16 @@ const candidateRowSchema = tireSchema.omit({ inStock: true }).extend({
   serviceType: z.enum(SERVICE_TYPES),
   diffPct: z.number(),
   sortKey: z.number(),
-});
+}).strict();
 
-/** What the finder's one statement answers: a page of results, their total, the near misses. */
-export const finderAnswerSchema = z.object({
+/**
+ * What the finder's one statement answers: a page of results, their total, the near misses. The
+ * tests check the statement against it; the request path reads the answer as this type unchecked.
+ */
+export const finderAnswerSchema = z.strictObject({
   results: z.array(candidateRowSchema),
   total: z.number().int(),
   nearMisses: z.array(candidateRowSchema),
 });
+
+export type FinderAnswer = z.infer<typeof finderAnswerSchema>;

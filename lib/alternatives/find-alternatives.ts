@@ -2,7 +2,7 @@ import { z } from "zod";
 import type { Database } from "@/db/client";
 import type { FinderSort } from "@/lib/tire";
 import { encodeAlternativesCursor, type AlternativesCursor } from "./cursor";
-import { finderAnswerSchema } from "./answer-rows";
+import type { FinderAnswer } from "./answer-rows";
 import { finderStatement, NEAR_MISS_LIMIT } from "./statement";
 import { failedRuleWords, isNearMiss, judgeCandidate, noteWords, qualifyingReasonWords, type Verdict } from "@/lib/tire";
 import { judgedCandidate } from "./judged-candidate";
@@ -78,18 +78,26 @@ function confirmed<Row extends CandidateRow>(rows: Row[], verdictOf: (row: Row) 
 }
 
 /**
- * Equal-or-better tires from stock for one original (rules 1–7, applied in SQL and confirmed by the
- * judge): one keyset page of them, how many qualify in all, and the nearest tires that fail exactly
- * one of rules 2–5.
+ * The finder statement's answer for one search (a page plus one row, to tell whether more follow).
+ * It is built by the statement's own json_build_object, so it is taken as it comes; the tests hold
+ * it to finderAnswerSchema, and the judge confirms every row before it is shown.
  */
-export async function findAlternatives(db: Database, original: Original, options: AlternativesOptions): Promise<Alternatives> {
+export async function finderAnswer(db: Database, original: Original, options: AlternativesOptions): Promise<FinderAnswer> {
   const shape = finderShape(original, options, options.quantity);
   const values = finderValues(original, options.tolerancePct, options, options.quantity);
   const run = cachedStatement(db, `${options.sort} ${options.cursor ? "after" : "first"} ${JSON.stringify(shape)}`, () =>
     finderStatement(db, ruleSql(shape), options.sort, options.cursor !== null),
   );
-  const answer = await run({ ...values, ...cursorValues(options.cursor), limit: options.limit + 1, nearMissLimit: NEAR_MISS_LIMIT });
-  const { results: rows, total, nearMisses } = finderAnswerSchema.parse(answer);
+  return (await run({ ...values, ...cursorValues(options.cursor), limit: options.limit + 1, nearMissLimit: NEAR_MISS_LIMIT })) as FinderAnswer;
+}
+
+/**
+ * Equal-or-better tires from stock for one original (rules 1–7, applied in SQL and confirmed by the
+ * judge): one keyset page of them, how many qualify in all, and the nearest tires that fail exactly
+ * one of rules 2–5.
+ */
+export async function findAlternatives(db: Database, original: Original, options: AlternativesOptions): Promise<Alternatives> {
+  const { results: rows, total, nearMisses } = await finderAnswer(db, original, options);
 
   const verdictOf = (row: CandidateRow) => judgeCandidate(original, judgedCandidate(row), { tolerancePct: options.tolerancePct });
   const page = rows.slice(0, options.limit);

@@ -1,57 +1,33 @@
-import { isCheckViolation } from "@/lib/database/unique-violation";
-import { sql } from "drizzle-orm";
 import type { Database } from "@/db/client";
-import { stockItem, type NewStockItem } from "@/db/schema";
 import { recordAudit, type Actor } from "@/lib/audit/record";
+import { formatCount } from "@/lib/format/format";
 import type { CsvRefusal } from "./columns";
 import { planImport, readCatalogLines } from "./import-plan";
-import { judgeRowLines, lineJudge } from "./judge-lines";
 import type { CatalogImportReport, ImportMode } from "./import-report";
-import { readCatalogCsv } from "./read-file";
-import { formatCount } from "@/lib/format/format";
+import { applyWrites, CatalogMovedError, prepareWrites } from "./import-write";
+import { judgeRowLines, lineJudge } from "./judge-lines";
+import { readCatalogCsvInSteps } from "./read-file-in-steps";
 
 export type CatalogImportResult = { ok: true; report: CatalogImportReport } | { ok: false; message: string };
 
-// A few thousand rows per statement keep each JSON parameter to a megabyte or two.
-const ROWS_PER_STATEMENT = 5000;
-
-/** The columns an import writes: everything buildStockRow sets. */
-const WRITTEN_COLUMNS = [
-  "sku", "lineId", "designation", "sizeKind", "prefix", "sectionWidthMm", "aspectRatio", "rimDiameterIn", "construction", "zr",
-  "commercial", "runFlat", "loadIndex", "loadIndexDual", "speedSymbol", "speedRank", "loadRange", "loadRangePly", "extraLoad",
-  "serviceType", "overallDiameterMm", "priceCents", "quantityOnHand",
-] as const satisfies readonly (keyof NewStockItem)[];
-
-const snakeCase = (name: string) => name.replace(/[A-Z]/g, (letter) => `_${letter.toLowerCase()}`);
-const columnList = sql.raw(WRITTEN_COLUMNS.map((column) => `"${snakeCase(column)}"`).join(", "));
-const updateList = sql.raw(
-  [...WRITTEN_COLUMNS.filter((column) => column !== "sku").map((column) => `"${snakeCase(column)}" = excluded."${snakeCase(column)}"`), `"updated_at" = now()`].join(", "),
-);
-
-/**
- * Adds new SKUs and rewrites changed ones. The rows travel as one JSON parameter per statement,
- * which PGlite reads about three times faster than tens of thousands of separate parameters. A row
- * whose SKU was retired meanwhile is left alone: retired items keep their last state.
- */
-async function upsertStockRows(db: Database, rows: readonly NewStockItem[]): Promise<void> {
-  for (let start = 0; start < rows.length; start += ROWS_PER_STATEMENT) {
-    const records = rows
-      .slice(start, start + ROWS_PER_STATEMENT)
-      .map((row) => Object.fromEntries(WRITTEN_COLUMNS.map((column) => [snakeCase(column), row[column] ?? null])));
-    await db.execute(sql`
-      insert into ${stockItem} (${columnList})
-      select ${columnList} from json_populate_recordset(null::stock_item, ${JSON.stringify(records)}::json)
-      on conflict (sku) do update set ${updateList} where not "stock_item"."retired"`);
-  }
-}
-
 const byLine = (a: CsvRefusal, b: CsvRefusal) => a.line - b.line;
 
+// Planning again after the catalog changed underneath; more than this many changes in a row is a busy Counter, told to try again.
+const ATTEMPTS = 3;
+
+const CATALOG_BUSY = "The catalog changed while this file was imported, so nothing was written: import the file again.";
+
 /**
- * Imports a catalog CSV in one transaction. In all-or-nothing mode a single refused row means
- * nothing is written, and the report says what would have been; in valid-rows mode the rows that
- * pass are written. A wrong header refuses the whole file in either mode. One audit entry records
- * an import that wrote anything.
+ * Imports a catalog CSV. In all-or-nothing mode a single refused row means nothing is written, and
+ * the report says what would have been; in valid-rows mode the rows that pass are written. A wrong
+ * header refuses the whole file in either mode. One audit entry records an import that wrote anything.
+ *
+ * The file is read, judged and planned against the catalog in short steps with the site's other
+ * requests answered between them; only the write holds a transaction, in which every row is written
+ * (or none: the catalog changes all at once). The write changes only what the plan saw: should an
+ * item have changed or appeared since (a hold booked, a price edited), the transaction is undone and
+ * the file planned again. A row the plan found identical to its item is not written, so an edit made
+ * to it meanwhile stands, as if made just after the import.
  */
 export async function importCatalogCsv(
   db: Database,
@@ -59,29 +35,31 @@ export async function importCatalogCsv(
   mode: ImportMode,
   actor: Actor,
 ): Promise<CatalogImportResult> {
-  const read = readCatalogCsv(file.text);
+  const read = await readCatalogCsvInSteps(file.text);
   if (!read.ok) return read;
   if (read.headerRefused) return { ok: true, report: { added: 0, updated: 0, unchanged: 0, refused: read.refusals, written: false } };
 
-  // A hold booked between the plan and the write fails the held check (stock_item_held): plan again once, and the row is refused.
-  const importOnce = () => db.transaction(async (tx): Promise<CatalogImportReport> => {
-    const lines = judgeRowLines(read.rows, lineJudge(await readCatalogLines(tx)));
-    const plan = await planImport(tx, lines.lined);
+  for (let attempt = 1; attempt <= ATTEMPTS; attempt++) {
+    const lines = judgeRowLines(read.rows, lineJudge(await readCatalogLines(db)));
+    const plan = await planImport(db, lines.lined);
     const refused = [...read.refusals, ...lines.refusals, ...plan.refusals].sort(byLine);
-    const changes = [...plan.added, ...plan.updated];
-    const written = changes.length > 0 && (refused.length === 0 || mode === "valid-rows");
-    if (written) {
-      await upsertStockRows(tx, changes);
-      const summary =
-        `Imported ${formatCount(read.rowCount)} rows: ${formatCount(plan.added.length)} added, ${formatCount(plan.updated.length)} updated, ` +
-        `${formatCount(plan.unchanged)} unchanged, ${formatCount(new Set(refused.map((refusal) => refusal.line)).size)} refused`;
-      await recordAudit(tx, actor, [{ action: "catalog_import", subject: file.name, summary }]);
+    const written = plan.added.length + plan.updated.length > 0 && (refused.length === 0 || mode === "valid-rows");
+    const report = { added: plan.added.length, updated: plan.updated.length, unchanged: plan.unchanged, refused, written };
+    if (!written) return { ok: true, report };
+
+    const writes = await prepareWrites(db, plan);
+    const summary =
+      `Imported ${formatCount(read.rowCount)} rows: ${formatCount(plan.added.length)} added, ${formatCount(plan.updated.length)} updated, ` +
+      `${formatCount(plan.unchanged)} unchanged, ${formatCount(new Set(refused.map((refusal) => refusal.line)).size)} refused`;
+    try {
+      await db.transaction(async (tx) => {
+        await applyWrites(tx, writes);
+        await recordAudit(tx, actor, [{ action: "catalog_import", subject: file.name, summary }]);
+      });
+      return { ok: true, report };
+    } catch (error) {
+      if (!(error instanceof CatalogMovedError)) throw error;
     }
-    return { added: plan.added.length, updated: plan.updated.length, unchanged: plan.unchanged, refused, written };
-  });
-  const report = await importOnce().catch((error: unknown) => {
-    if (isCheckViolation(error, "stock_item_held")) return importOnce();
-    throw error;
-  });
-  return { ok: true, report };
+  }
+  return { ok: false, message: CATALOG_BUSY };
 }

@@ -1,5 +1,3 @@
-const UNQUOTED_RUN = /[^,\r\n]*/y;
-
 /**
  * A CSV's text as the readers expect it: no byte-order mark, and every line ending outside a quoted
  * cell written as LF. Spreadsheets write CRLF, editors LF, and a file edited in both holds a mix;
@@ -13,25 +11,23 @@ export function normalizeCsvText(text: string): string {
   if (!source.includes("\r")) return source;
   const pieces: string[] = [];
   let at = 0;
-  while (at < source.length) {
-    if (source[at] === '"') {
-      const end = closingQuote(source, at + 1);
-      pieces.push(source.slice(at, end));
-      at = end;
-    }
-    UNQUOTED_RUN.lastIndex = at;
-    UNQUOTED_RUN.test(source);
-    pieces.push(source.slice(at, UNQUOTED_RUN.lastIndex));
-    at = UNQUOTED_RUN.lastIndex;
-    if (source[at] === "\r") {
-      pieces.push("\n");
-      at += source[at + 1] === "\n" ? 2 : 1;
-    } else if (at < source.length) {
-      pieces.push(source[at]!);
-      at += 1;
-    }
+  for (;;) {
+    const quote = cellOpeningQuote(source, at);
+    pieces.push(source.slice(at, quote).replace(/\r\n?/g, "\n"));
+    if (quote === source.length) return pieces.join("");
+    at = closingQuote(source, quote + 1);
+    pieces.push(source.slice(quote, at));
   }
-  return pieces.join("");
+}
+
+const SEPARATORS = ",\r\n";
+
+/** The next double quote from `from` that opens a quoted cell (first in the file, or just after a separator); the end of the text when none does. */
+function cellOpeningQuote(source: string, from: number): number {
+  for (let quote = source.indexOf('"', from); quote >= 0; quote = source.indexOf('"', quote + 1)) {
+    if (quote === 0 || SEPARATORS.includes(source[quote - 1]!)) return quote;
+  }
+  return source.length;
 }
 
 /** Just past the quote that closes a quoted cell whose text starts at `from` (a doubled "" is a quote inside it); the end of the text when none does. */

@@ -44,22 +44,35 @@ export const isSkippedRow = (cells: readonly string[]) => isBlank(cells) || isCo
  * Pure, so the upload screen previews exactly what the server will do.
  */
 export function readCatalogCsv(fileText: string): CatalogCsvFile {
+  const opened = openCatalogCsv(fileText);
+  if ("read" in opened) return opened.read;
+  return { ok: true, ...readCatalogRows(opened.columns, opened.dataRows, FIRST_DATA_LINE, new Map()), headerRefused: false };
+}
+
+/** The file line of the first row under the header. */
+export const FIRST_DATA_LINE = 2;
+
+/**
+ * A catalog CSV split into cells, its header read: either the whole answer already (not a CSV, or a
+ * wrong header), or the header's columns and the data rows, for readCatalogRows to read at once or in batches.
+ */
+export function openCatalogCsv(fileText: string): { read: CatalogCsvFile } | { columns: string[]; dataRows: string[][] } {
   const text = normalizeCsvText(fileText);
-  if (text.trim() === "") return unreadable("This file is empty");
-  if (looksBinary(text)) return unreadable("This file is not a CSV (it looks like a picture, a workbook or another binary file)");
+  if (text.trim() === "") return { read: unreadable("This file is empty") };
+  if (looksBinary(text)) return { read: unreadable("This file is not a CSV (it looks like a picture, a workbook or another binary file)") };
 
   const parsed = Papa.parse<string[]>(text, { delimiter: ",", newline: "\n", skipEmptyLines: false });
   const unclosedQuote = parsed.errors.find((error) => error.type === "Quotes");
   if (unclosedQuote) {
-    return unreadable(`This file is not a CSV that can be read to the end (a quote opened on line ${(unclosedQuote.row ?? 0) + 1} never closes)`);
+    return { read: unreadable(`This file is not a CSV that can be read to the end (a quote opened on line ${(unclosedQuote.row ?? 0) + 1} never closes)`) };
   }
   const [headerCells = [], ...dataRows] = parsed.data;
   const header = readCatalogHeader(headerCells);
-  if (!header.ok) return unreadable(header.problem);
+  if (!header.ok) return { read: unreadable(header.problem) };
   if (header.refusals.length > 0) {
-    return { ok: true, rows: [], refusals: header.refusals, headerRefused: true, rowCount: dataRows.filter((cells) => !isSkippedRow(cells)).length };
+    return { read: { ok: true, rows: [], refusals: header.refusals, headerRefused: true, rowCount: dataRows.filter((cells) => !isSkippedRow(cells)).length } };
   }
-  return { ok: true, ...readCatalogRows(header.columns, dataRows, 2, new Map()), headerRefused: false };
+  return { columns: header.columns, dataRows };
 }
 
 export type CatalogCsvHeader =

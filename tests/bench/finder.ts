@@ -1,38 +1,40 @@
 /**
- * Replacement finder speed. Seeds 1,000 and 50,000 stock items into two fresh embedded databases and
- * times 500 alternatives searches (one page plus its total and near misses) for random originals, each
- * original searched in both. Then times 200 requests to GET /api/v1/alternatives beside 200 to
- * GET /api/health on the production server: the build in .next, started over a fresh embedded
- * database holding the demo shop and 50,000 items (or a server already running, with --server).
- * Targets: p95 ≤ 10 ms at 50,000 items, and p95(50,000) ÷ p95(1,000) ≤ 1.5. The same originals are then
- * searched for a set of four in stock (inStock=true, quantity 4), which counts the items of each
- * qualifying fitment rather than reading its counts, and timed apart.
+ * `npm run bench:finder`: Replacement finder speed.
  *
- *   npm run build && npm run bench:finder
- *   npm run bench:finder -- --server http://localhost:3000   # time the HTTP route of a running server instead
+ * In process: seeds 1,000 and 50,000 stock items into two fresh embedded databases and times 500
+ * alternatives searches (one page plus its total and near misses) for random originals, each original
+ * searched in both, in alternating order. Goals: p95 ≤ 10 ms at 50,000 items, and p95(50,000) ÷
+ * p95(1,000) ≤ 1.5. The same originals searched for a set of four in stock (inStock=true, quantity 4),
+ * which counts the items of each qualifying fitment rather than reading its counts, are reported apart.
+ *
+ * Over HTTP: the production build (built first if there is none) over a fresh embedded database with
+ * the demo shop and catalog; GET /api/v1/alternatives and GET /api/health in alternation, three rounds.
+ * Goal: the median round's alternatives p50 ≤ 1.5 × its health p50.
+ *
+ *   npm run bench:finder
+ *   npm run bench:finder -- --server http://localhost:3000   # time the HTTP routes of a running server instead
  */
 import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { sql } from "drizzle-orm";
 import { migrateDatabase, openDatabase, type Database } from "../../db/client";
-import { shop } from "../../db/schema";
 import { seedCatalog } from "../../lib/demo/catalog";
 import { SIZE_OFFERS, type SizeOffer } from "../../lib/demo/catalog-sizes";
 import { seededRandom, type Random } from "../../lib/demo/random";
-import { demoShop } from "../../lib/demo/shop";
 import { findAlternatives } from "../../lib/alternatives/find-alternatives";
 import { readOriginal, type Original, type OriginalInput } from "../../lib/alternatives/original";
 import { readFinderShopSettings } from "../../lib/shop/charges";
-import { hasProductionBuild, startProductionServer } from "./production-server";
+import { ensureProductionBuild, startProductionServer } from "./production-server";
+import { formatTable, isMainModule, median, percentile, ratioRow, type Bench, type BenchRow } from "./report";
 
-const SEARCHES = 500;
 const WARM_UP = 50;
-const HTTP_REQUESTS = 200;
-const CATALOG_SIZES = [1_000, 50_000] as const;
+const HTTP_ROUNDS = 3;
 
-function percentile(sorted: readonly number[], p: number): number {
-  return sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))] ?? Number.NaN;
+interface Sizes {
+  searches: number;
+  httpRequests: number;
+  catalogs: readonly [number, number];
 }
 
 /** An original as a customer would bring it: a stocked size, a load index near the usual, a common speed rating. */
@@ -68,21 +70,32 @@ async function openSeeded(itemCount: number) {
   return handle;
 }
 
+const items = (count: number) => `${count.toLocaleString("en-US")} items`;
+
 /**
  * Both catalogs are open at once and every original is searched in both, in alternating order, so
  * that a busy moment on the machine weighs on both sides of the ratio alike.
  */
-async function benchCatalogs(): Promise<void> {
-  const handles = [await openSeeded(CATALOG_SIZES[0]), await openSeeded(CATALOG_SIZES[1])] as const;
-  await benchSearches(handles, "", undefined);
-  await benchSearches(handles, "in stock for a set of four: ", true);
-  await Promise.all(handles.map((handle) => handle.close()));
+async function benchCatalogs(sizes: Sizes): Promise<BenchRow[]> {
+  const handles = [await openSeeded(sizes.catalogs[0]), await openSeeded(sizes.catalogs[1])] as const;
+  try {
+    const [small, large] = await benchSearches(handles, sizes, "", undefined);
+    const [smallInStock, largeInStock] = await benchSearches(handles, sizes, "in stock for a set of four: ", true);
+    const smallFloor = { name: `p95 at ${items(sizes.catalogs[0])}`, value: small };
+    return [
+      { figure: `finder p95, ${items(sizes.catalogs[1])}`, value: large, unit: "ms", goal: "≤ 10 ms", met: large <= 10 },
+      ratioRow(`finder p95, ${items(sizes.catalogs[1])} ÷ ${items(sizes.catalogs[0])}`, large, "ms", smallFloor, 1.5),
+      { ...ratioRow(`finder p95 in stock for a set of four, ${items(sizes.catalogs[1])}`, largeInStock, "ms", { ...smallFloor, value: smallInStock }, 1.5), goal: "reported", met: null },
+    ];
+  } finally {
+    await Promise.all(handles.map((handle) => handle.close()));
+  }
 }
 
-async function benchSearches(handles: readonly [{ db: Database }, { db: Database }], label: string, inStock: boolean | undefined): Promise<void> {
+async function benchSearches(handles: readonly [{ db: Database }, { db: Database }], sizes: Sizes, label: string, inStock: boolean | undefined) {
   const random = seededRandom(11);
   const times: [number[], number[]] = [[], []];
-  for (let i = 0; i < WARM_UP + SEARCHES; i++) {
+  for (let i = 0; i < WARM_UP + sizes.searches; i++) {
     const read = readOriginal(randomOriginal(random));
     if (!read.ok) throw new Error(read.message);
     const order = i % 2 === 0 ? ([0, 1] as const) : ([1, 0] as const);
@@ -92,77 +105,81 @@ async function benchSearches(handles: readonly [{ db: Database }, { db: Database
     }
   }
   const p95s = times.map((list, which) => {
-    list.sort((a, b) => a - b);
     const [p50, p95] = [percentile(list, 50), percentile(list, 95)];
-    console.log(
-      `${label}${CATALOG_SIZES[which]!.toLocaleString("en-US").padStart(6)} items: p50 ${p50.toFixed(2)} ms, p95 ${p95.toFixed(2)} ms, p95/p50 ${(p95 / p50).toFixed(2)} (${SEARCHES} searches)`,
-    );
+    console.log(`${label}${items(sizes.catalogs[which]!).padStart(12)}: p50 ${p50.toFixed(2)} ms, p95 ${p95.toFixed(2)} ms (${sizes.searches} searches)`);
     return p95;
   });
-  console.log(`${label}p95 at 50,000 ÷ p95 at 1,000 = ${(p95s[1]! / p95s[0]!).toFixed(2)} (target ≤ 1.5); p95 at 50,000 target ≤ 10 ms`);
+  return [p95s[0]!, p95s[1]!] as const;
 }
 
-async function timeRequests(urls: readonly string[]): Promise<number[]> {
-  const times: number[] = [];
-  for (const url of urls) {
-    const start = performance.now();
-    const response = await fetch(url);
-    await response.arrayBuffer();
-    if (!response.ok) throw new Error(`${url} answered ${response.status}`);
-    times.push(performance.now() - start);
-  }
-  return times.sort((a, b) => a - b);
+async function timeRequest(url: string): Promise<number> {
+  const start = performance.now();
+  const response = await fetch(url);
+  await response.arrayBuffer();
+  if (!response.ok) throw new Error(`${url} answered ${response.status}`);
+  return performance.now() - start;
 }
 
-async function benchServer(base: string): Promise<void> {
+/** Rounds of alternatives and health requests in alternation; the round with the median ratio of p50s is the figure. */
+async function benchServer(base: string, sizes: Sizes): Promise<BenchRow[]> {
   const random = seededRandom(13);
-  const alternatives = Array.from({ length: HTTP_REQUESTS }, () => {
+  const alternatives = Array.from({ length: sizes.httpRequests }, () => {
     const original = randomOriginal(random);
     const query = new URLSearchParams({ size: original.size, loadIndex: String(original.loadIndex), speedSymbol: original.speedSymbol ?? "T" });
     if (original.loadRange) query.set("loadRange", original.loadRange);
     return new URL(`/api/v1/alternatives?${query}`, base).toString();
   });
-  const health = Array.from({ length: HTTP_REQUESTS }, () => new URL("/api/health", base).toString());
-  await timeRequests([...alternatives.slice(0, 20), ...health.slice(0, 20)]);
-  const alternativesTimes = await timeRequests(alternatives);
-  const healthTimes = await timeRequests(health);
-  console.log(`${base}: GET /api/v1/alternatives p50 ${percentile(alternativesTimes, 50).toFixed(2)} ms, p95 ${percentile(alternativesTimes, 95).toFixed(2)} ms`);
-  console.log(`${base}: GET /api/health          p50 ${percentile(healthTimes, 50).toFixed(2)} ms, p95 ${percentile(healthTimes, 95).toFixed(2)} ms (${HTTP_REQUESTS} requests each)`);
-}
-
-/** An embedded database folder with the demo shop and a 50,000-item catalog, for the production server. */
-async function largeCatalogFolder(): Promise<string> {
-  const dataDir = path.join(mkdtempSync(path.join(tmpdir(), "sidewise-bench-")), "pglite");
-  const handle = await openDatabase({ dataDir });
-  await migrateDatabase(handle);
-  await handle.db.transaction(async (tx) => {
-    await tx.insert(shop).values(demoShop);
-    await seedCatalog(tx, { itemCount: CATALOG_SIZES[1], seed: 7 });
-  });
-  await handle.close();
-  return dataDir;
-}
-
-async function benchProductionBuild(): Promise<void> {
-  if (!hasProductionBuild()) {
-    console.log("HTTP route not timed: no production build in .next (run `npm run build` first, or pass --server URL).");
-    return;
+  const health = new URL("/api/health", base).toString();
+  for (const url of alternatives.slice(0, 20)) await Promise.all([timeRequest(url), timeRequest(health)]);
+  const rounds: { alternatives: number; health: number; ratio: number }[] = [];
+  for (let round = 0; round < HTTP_ROUNDS; round++) {
+    const times = { alternatives: [] as number[], health: [] as number[] };
+    for (const [i, url] of alternatives.entries()) {
+      if (i % 2 === 0) {
+        times.alternatives.push(await timeRequest(url));
+        times.health.push(await timeRequest(health));
+      } else {
+        times.health.push(await timeRequest(health));
+        times.alternatives.push(await timeRequest(url));
+      }
+    }
+    const p50s = { alternatives: percentile(times.alternatives, 50), health: percentile(times.health, 50) };
+    rounds.push({ ...p50s, ratio: p50s.alternatives / p50s.health });
+    console.log(`round ${round + 1}: GET /api/v1/alternatives p50 ${p50s.alternatives.toFixed(2)} ms, GET /api/health p50 ${p50s.health.toFixed(2)} ms (${sizes.httpRequests} each)`);
   }
-  const dataDir = await largeCatalogFolder();
+  const ratios = rounds.map((round) => round.ratio);
+  const middle = rounds.find((round) => round.ratio === median(ratios)) ?? rounds[0]!;
+  console.log(`alternatives ÷ health p50: median ${middle.ratio.toFixed(2)}, spread ${Math.min(...ratios).toFixed(2)}–${Math.max(...ratios).toFixed(2)} over ${HTTP_ROUNDS} rounds`);
+  return [ratioRow("GET /api/v1/alternatives p50, demo catalog", middle.alternatives, "ms", { name: "/api/health p50", value: middle.health }, 1.5)];
+}
+
+async function benchProductionBuild(sizes: Sizes): Promise<BenchRow[]> {
+  ensureProductionBuild();
+  const dataDir = path.join(mkdtempSync(path.join(tmpdir(), "sidewise-bench-finder-")), "pglite");
   const server = await startProductionServer(dataDir);
   try {
-    console.log(`production server over ${CATALOG_SIZES[1].toLocaleString("en-US")} items:`);
-    await benchServer(server.url);
+    return await benchServer(server.url, sizes);
   } finally {
     await server.stop();
     rmSync(path.dirname(dataDir), { recursive: true, force: true });
   }
 }
 
-const serverFlag = process.argv.indexOf("--server");
-const server = serverFlag >= 0 ? process.argv[serverFlag + 1] : undefined;
-if (serverFlag >= 0 && !server) throw new Error("--server needs a URL, e.g. --server http://localhost:3000");
+export const run: Bench = async ({ quick }) => {
+  const sizes: Sizes = quick
+    ? { searches: 150, httpRequests: 100, catalogs: [1_000, 10_000] }
+    : { searches: 500, httpRequests: 200, catalogs: [1_000, 50_000] };
+  return [...(await benchCatalogs(sizes)), ...(await benchProductionBuild(sizes))];
+};
 
-await benchCatalogs();
-if (server) await benchServer(server);
-else await benchProductionBuild();
+if (isMainModule(import.meta.url)) {
+  const serverFlag = process.argv.indexOf("--server");
+  const quick = process.argv.includes("--quick");
+  if (serverFlag >= 0) {
+    const server = process.argv[serverFlag + 1];
+    if (!server) throw new Error("--server needs a URL, e.g. --server http://localhost:3000");
+    console.log(`\n${formatTable(await benchServer(server, { searches: 0, httpRequests: 200, catalogs: [0, 0] }))}`);
+  } else {
+    console.log(`\n${formatTable(await run({ quick }))}`);
+  }
+}
