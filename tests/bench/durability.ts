@@ -11,6 +11,7 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { ensureProductionBuild, type RunningServer, startProductionServer } from "./production-server";
 import { type Bench, type BenchRow, runIfMain } from "./report";
+import { signInAsStaff } from "./sign-in";
 
 const CLIENTS = 16;
 const WRITES_BEFORE_KILL = 150;
@@ -19,16 +20,6 @@ const SERVER_ENV = { QUOTE_LIMIT_PER_ADDRESS: "100000", RESEND_BASE_URL: "", RES
 interface Acknowledged {
   skus: Set<string>;
   emails: Set<string>;
-}
-
-async function signInAsStaff(url: string): Promise<string> {
-  const response = await fetch(`${url}/api/auth/sign-in/email`, {
-    method: "POST",
-    headers: { origin: url, "content-type": "application/json", "x-forwarded-for": "10.99.0.1" },
-    body: JSON.stringify({ email: "staff@sidewise.test", password: "sidewise-demo" }),
-  });
-  if (!response.ok) throw new Error(`staff sign-in answered ${response.status}`);
-  return response.headers.getSetCookie().map((cookie) => cookie.split(";")[0]).join("; ");
 }
 
 /** A form token at least 3 s old, which the server then takes for a day. */

@@ -23,7 +23,7 @@ import { importCatalogCsv } from "../../lib/catalog-csv/import";
 import { writeCatalogCsv } from "../../lib/catalog-csv/write-file";
 import { generatedCsvItems } from "../fixtures/generated-csv-items";
 import { ensureProductionBuild, startProductionServer } from "./production-server";
-import { formatTable, isMainModule, median, percentile, type Bench, type BenchRow } from "./report";
+import { median, percentile, runIfMain, type Bench, type BenchRow } from "./report";
 import { signInAsStaff } from "./sign-in";
 
 const actor = { id: "bench-staff", email: "bench@sidewise.test" };
@@ -162,4 +162,4 @@ export const run: Bench = async ({ quick }) => {
   ];
 };
 
-if (isMainModule(import.meta.url)) console.log(`\n${formatTable(await run({ quick: process.argv.includes("--quick") }))}`);
+await runIfMain(import.meta.url, run);
