@@ -1,6 +1,9 @@
+import dynamic from "next/dynamic";
 import type { EmailSendRow } from "@/lib/email/queries";
-import { EmailCardForm } from "./email-card-form";
 import { EmailHistory } from "./email-history";
+
+// Its own chunk, fetched only when the panel is rendered (for staff), so no visitor downloads it.
+const EmailCardForm = dynamic(() => import("./email-card-form").then((module) => module.EmailCardForm));
 
 /** The Counter's tools under a Fit card: e-mail its link, and see who has. Rendered for staff only. */
 export function EmailCardPanel({ slug, sends, timeZone }: { slug: string; sends: EmailSendRow[]; timeZone: string }) {
