@@ -6,7 +6,10 @@ import { SpeedometerTable } from "@/components/compare/speedometer-table";
 import { ScaledTireDrawing } from "@/components/diagram/scaled-tire-drawing";
 import { UnitsToggle } from "@/components/units/units-toggle";
 import { useUnitSystem } from "@/components/units/use-unit-system";
-import { compareSizes, formatSize, measurableSizeFromSlug, sizeGeometry, type MeasurableSize } from "@/lib/tire";
+import { compareSizes } from "@/lib/tire/compare";
+import { formatSize } from "@/lib/tire/format";
+import { sizeGeometry, type MeasurableSize } from "@/lib/tire/geometry";
+import { measurableSizeFromSlug } from "@/lib/tire/slug";
 
 /** The card's sizes drawn over each other to one scale, with their differences, read-only. */
 export function FitCardComparison({ designations }: { designations: string[] }) {

@@ -3,7 +3,7 @@
 import { useEffect, useMemo, useState } from "react";
 import { UnitsToggle } from "@/components/units/units-toggle";
 import { useUnitSystem } from "@/components/units/use-unit-system";
-import { parseMarking } from "@/lib/tire";
+import { parseMarking } from "@/lib/tire/parse/parse-marking";
 import { describeMarking, type SidewallPartKey } from "@/lib/tire/describe";
 import { MarkedEcho } from "./marked-echo";
 import { MarkingInput } from "./marking-input";
