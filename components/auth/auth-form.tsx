@@ -1,7 +1,7 @@
 "use client";
 
 import { useState, type FormEvent, type ReactNode } from "react";
-import { fieldErrors, type FieldErrors } from "@/lib/auth/form-schemas";
+import { checkAccountForm, type FieldErrors } from "@/lib/auth/form-checks";
 import { authForms, type AuthFormKind } from "./form-kinds";
 import { postAuth } from "./post-auth";
 import { fieldClass, FormField } from "@/components/ui/form-field";
@@ -12,20 +12,20 @@ import { fieldClass, FormField } from "@/components/ui/form-field";
  * signing up: at sign-in, which then leads to `next`).
  */
 export function AuthForm({ kind, next, children }: { kind: AuthFormKind; next: string; children?: ReactNode }) {
-  const { fields, schema, endpoint, submitLabel, after } = authForms[kind];
+  const { fields, check, endpoint, submitLabel, after } = authForms[kind];
   const [errors, setErrors] = useState<FieldErrors>({});
   const [busy, setBusy] = useState(false);
 
   async function submit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
-    const parsed = schema.safeParse(Object.fromEntries(new FormData(event.currentTarget)));
-    if (!parsed.success) {
-      setErrors(fieldErrors(parsed.error));
+    const checked = checkAccountForm(check, new FormData(event.currentTarget));
+    if (!checked.ok) {
+      setErrors(checked.errors);
       return;
     }
     setErrors({});
     setBusy(true);
-    const result = await postAuth(endpoint, parsed.data);
+    const result = await postAuth(endpoint, checked.values);
     if (result.ok) {
       window.location.assign(after(next));
       return;

@@ -1,9 +1,8 @@
 "use client";
 
 import { useState, type FormEvent } from "react";
-import { fieldErrors, type FieldErrors } from "@/lib/auth/form-schemas";
+import { checkAccountForm, type FieldErrors } from "@/lib/auth/form-checks";
 import { RESET_LINK_LIFETIME_SECONDS } from "@/lib/email/account-emails";
-import { forgotPasswordSchema } from "./password-reset-schemas";
 import { postAuth } from "./post-auth";
 import { fieldClass, FormField } from "@/components/ui/form-field";
 
@@ -15,16 +14,16 @@ export function ForgotPasswordForm() {
 
   async function submit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
-    const parsed = forgotPasswordSchema.safeParse(Object.fromEntries(new FormData(event.currentTarget)));
-    if (!parsed.success) {
-      setErrors(fieldErrors(parsed.error));
+    const checked = checkAccountForm("forgotPassword", new FormData(event.currentTarget));
+    if (!checked.ok) {
+      setErrors(checked.errors);
       return;
     }
     setErrors({});
     setBusy(true);
-    const result = await postAuth("request-password-reset", { email: parsed.data.email, redirectTo: "/reset-password" });
+    const result = await postAuth("request-password-reset", { email: checked.values.email, redirectTo: "/reset-password" });
     setBusy(false);
-    if (result.ok) setSentTo(parsed.data.email);
+    if (result.ok) setSentTo(checked.values.email);
     else setErrors({ form: result.message });
   }
 

@@ -1,9 +1,7 @@
-import { signInSchema, signUpSchema } from "@/lib/auth/form-schemas";
-
 /** The two account forms: their fields, their checks, the sign-in service's endpoint each posts to and where each goes next. */
 export const authForms = {
   "sign-in": {
-    schema: signInSchema,
+    check: "signIn",
     endpoint: "sign-in/email",
     submitLabel: "Sign in",
     after: (next: string) => next,
@@ -13,7 +11,7 @@ export const authForms = {
     ],
   },
   "sign-up": {
-    schema: signUpSchema,
+    check: "signUp",
     endpoint: "sign-up/email",
     submitLabel: "Create account",
     // Sign-up signs no one in and answers a taken address like a new one, so it continues at sign-in.

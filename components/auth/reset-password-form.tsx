@@ -3,8 +3,7 @@
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState, type FormEvent } from "react";
-import { fieldErrors, type FieldErrors } from "@/lib/auth/form-schemas";
-import { resetPasswordSchema } from "./password-reset-schemas";
+import { checkAccountForm, type FieldErrors } from "@/lib/auth/form-checks";
 import { postAuth } from "./post-auth";
 import { fieldClass, FormField } from "@/components/ui/form-field";
 
@@ -17,14 +16,14 @@ export function ResetPasswordForm({ token }: { token: string }) {
 
   async function submit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
-    const parsed = resetPasswordSchema.safeParse(Object.fromEntries(new FormData(event.currentTarget)));
-    if (!parsed.success) {
-      setErrors(fieldErrors(parsed.error));
+    const checked = checkAccountForm("resetPassword", new FormData(event.currentTarget));
+    if (!checked.ok) {
+      setErrors(checked.errors);
       return;
     }
     setErrors({});
     setBusy(true);
-    const result = await postAuth("reset-password", { newPassword: parsed.data.newPassword, token });
+    const result = await postAuth("reset-password", { newPassword: checked.values.newPassword, token });
     if (result.ok) {
       router.push("/sign-in?reset=done");
       return;

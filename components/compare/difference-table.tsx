@@ -1,5 +1,6 @@
 import { Fragment, useId } from "react";
-import { type ComparedSize, formatLength, formatOneDecimal, formatSignedPercent, type UnitSystem } from "@/lib/tire";
+import { type ComparedSize } from "@/lib/tire/compare";
+import { formatLength, formatOneDecimal, formatSignedPercent, type UnitSystem } from "@/lib/tire/display";
 import { SizeHeading, SizeLabel } from "./size-label";
 
 function signedLength(mm: number, units: UnitSystem): string {

@@ -1,4 +1,4 @@
-import { LineSample } from "./size-list-editor";
+import { LineSample } from "./line-sample";
 
 /** A compared size as the tables name it: its line style, its designation and, for the first, that it is the reference. */
 export function SizeLabel({ designation, index }: { designation: string; index: number }) {

@@ -1,7 +1,7 @@
 "use client";
 
 import { MAX_COMPARED_SIZES } from "@/lib/compare/read-sizes";
-import { tireLineStyles } from "@/components/diagram/drawing-layout";
+import { LineSample } from "./line-sample";
 
 export interface SizeEntry {
   id: number;
@@ -71,15 +71,5 @@ export function SizeListEditor({ entries, onChange, onRemove, onMove, onAdd }: S
         <p className="text-sm text-ink-soft">Four sizes at most; remove one to add another.</p>
       )}
     </div>
-  );
-}
-
-/** A short stroke in the size's line style, so the drawing can be read without colour. */
-export function LineSample({ index }: { index: number }) {
-  const dash = tireLineStyles[index % tireLineStyles.length] ?? "none";
-  return (
-    <svg width="36" height="10" aria-hidden="true" className="shrink-0 text-ink">
-      <line x1="0" y1="5" x2="36" y2="5" stroke="currentColor" strokeWidth="2.5" strokeDasharray={dash === "none" ? undefined : dash.split(" ").map((n) => Number(n) / 3).join(" ")} />
-    </svg>
   );
 }

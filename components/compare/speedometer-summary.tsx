@@ -1,5 +1,7 @@
 import { useId } from "react";
-import { type ComparedSize, speedometerSentence, type UnitSystem } from "@/lib/tire";
+import { type ComparedSize } from "@/lib/tire/compare";
+import { type UnitSystem } from "@/lib/tire/display";
+import { speedometerSentence } from "@/lib/tire/speedometer-words";
 
 /** The speedometer's effect in one plain sentence per compared size, at 100 km/h or 65 mph. */
 export function SpeedometerSummary({ sizes, units }: { sizes: ComparedSize[]; units: UnitSystem }) {

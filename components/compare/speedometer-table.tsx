@@ -1,5 +1,8 @@
 import { Fragment, useId } from "react";
-import { type ComparedSize, formatSpeed, formatSpeedToTenth, R39_SOURCE, speedometerVerdict, type SpeedometerRow, type UnitSystem, VERDICT_MARK } from "@/lib/tire";
+import { type ComparedSize, type SpeedometerRow } from "@/lib/tire/compare";
+import { formatSpeed, formatSpeedToTenth, type UnitSystem } from "@/lib/tire/display";
+import { R39_SOURCE, speedometerVerdict } from "@/lib/tire/speedometer-check";
+import { VERDICT_MARK } from "@/lib/tire/speedometer-words";
 import { SizeHeading, SizeLabel } from "./size-label";
 
 interface Reading {

@@ -1,4 +1,4 @@
-import { m } from "framer-motion";
+import { useDrawingKit } from "./drawing-kit";
 
 interface DimensionProps {
   markerId: string;
@@ -20,6 +20,7 @@ export function Dimension({ markerId, part, orientation, at, from, to, label, fo
   const line = horizontal ? { x1: from, y1: at, x2: to, y2: at } : { x1: at, y1: from, x2: at, y2: to };
   const labelAt = horizontal ? { x: middle, y: at - fontSize * 0.45 } : { x: at + fontSize * 0.45, y: middle };
   const arrowSize = fontSize * 0.5;
+  const m = useDrawingKit();
   return (
     <g data-dimension={part} color={color} stroke="currentColor" fill="currentColor">
       <defs>
@@ -28,14 +29,12 @@ export function Dimension({ markerId, part, orientation, at, from, to, label, fo
         </marker>
       </defs>
       <m.line
-        initial={false}
         animate={line}
         strokeWidth={fontSize * 0.06}
         markerStart={`url(#${markerId}-${part})`}
         markerEnd={`url(#${markerId}-${part})`}
       />
       <m.text
-        initial={false}
         animate={{ attrX: labelAt.x, attrY: labelAt.y }}
         textAnchor={horizontal ? "middle" : "start"}
         dominantBaseline={horizontal ? "auto" : "middle"}

@@ -1,10 +1,11 @@
 "use client";
 
 import { useId, useState } from "react";
-import { activeFilterCount, setSizeOf, type FinderQuery } from "@/lib/finder/finder-query";
+import type { FinderQuery } from "@/lib/finder/finder-query";
+import { activeFilterCount, setSizeOf } from "@/lib/finder/finder-state";
 import { formatCount } from "@/lib/format/format";
 import { centsToDollarsText, parseDollars } from "@/lib/money/money";
-import { DEFAULT_SET_SIZE, FINDER_SORTS, SEASONS, SET_SIZE_CHOICES, TERRAINS } from "@/lib/tire";
+import { DEFAULT_SET_SIZE, FINDER_SORTS, SEASONS, SET_SIZE_CHOICES, TERRAINS } from "@/lib/tire/vocabulary";
 
 const setSizeLabels: Record<(typeof SET_SIZE_CHOICES)[number], string> = {
   1: "1 tire",

@@ -2,7 +2,7 @@
 
 import type { DrawnTire } from "@/components/diagram/drawing-layout";
 import type { UnitSystem } from "@/lib/tire";
-import { MAX_CARD_TIRES } from "@/lib/fit-cards/card-input";
+import { MAX_CARD_TIRES } from "@/lib/fit-cards/card-limits";
 import { AskBar } from "./ask-bar";
 import { ResultCard } from "./result-card";
 import type { useAlternatives } from "./use-alternatives";

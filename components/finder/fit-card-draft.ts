@@ -1,6 +1,7 @@
 import type { FitCardDraft } from "@/components/fit-card/save-fit-card-button";
 import type { Candidate } from "@/lib/finder/alternatives-response";
-import type { FinderQuery, PlacardMinimums } from "@/lib/finder/finder-query";
+import type { FinderQuery } from "@/lib/finder/finder-query";
+import type { PlacardMinimums } from "@/lib/finder/finder-state";
 import { MAX_COMPARED_SIZES } from "@/lib/compare/read-sizes";
 
 /**

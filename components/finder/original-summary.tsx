@@ -1,5 +1,9 @@
-import type { PlacardMinimums } from "@/lib/finder/finder-query";
-import { formatLength, formatLoad, formatServiceDescription, formatSize, formatSpeed, loadIndexKg, rimTwinCaution, type Marking, type UnitSystem } from "@/lib/tire";
+import type { PlacardMinimums } from "@/lib/finder/finder-state";
+import { formatLength, formatLoad, formatSpeed, type UnitSystem } from "@/lib/tire/display";
+import { formatServiceDescription, formatSize } from "@/lib/tire/format";
+import { loadIndexKg } from "@/lib/tire/load-index";
+import { rimTwinCaution } from "@/lib/tire/rim-twins";
+import type { Marking } from "@/lib/tire/types";
 
 const higher = (own: number | null, minimum: number | null) => (minimum !== null && (own === null || minimum > own) ? minimum : own);
 

@@ -4,7 +4,7 @@ import { useRouter } from "next/navigation";
 import { useId, useRef, useState, type FormEvent } from "react";
 import { fieldClass, FormField } from "@/components/ui/form-field";
 import { recordWalkIn } from "@/lib/quotes/actions";
-import { MAX_QUANTITY, MIN_QUANTITY } from "@/lib/quotes/quote-input";
+import { MAX_QUANTITY, MIN_QUANTITY } from "@/lib/quotes/quote-limits";
 
 const FIELDS = ["name", "email", "phone", "vehicle", "quantity", "tires"] as const;
 

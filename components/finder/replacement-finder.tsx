@@ -1,10 +1,12 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { useEffect, useMemo, useRef, useState } from "react";
 import { drawnTireOf } from "@/components/reader/drawn-tire";
 import { useUnitSystem } from "@/components/units/use-unit-system";
 import { UnitsToggle } from "@/components/units/units-toggle";
-import { alternativesSearch, type FinderQuery, finderSearch, setSizeOf } from "@/lib/finder/finder-query";
+import type { FinderQuery } from "@/lib/finder/finder-query";
+import { alternativesSearch, finderSearch, setSizeOf } from "@/lib/finder/finder-state";
 import { placardFor, readOriginalMarking } from "@/lib/finder/original-marking";
 import { SaveFitCard } from "@/components/fit-card/save-fit-card-button";
 import { AskTheShop, type AskTheShopHandle } from "@/components/quotes/ask-the-shop";
@@ -15,10 +17,12 @@ import { fitCardDraft } from "./fit-card-draft";
 import { FinderResults } from "./finder-results";
 import { OriginalSummary } from "./original-summary";
 import { pickLabel } from "./pick-words";
-import { RecordCustomer } from "./record-customer";
 import { PlacardForm } from "./placard-form";
 import { useAlternatives } from "./use-alternatives";
 import { useStaffView } from "./use-staff-view";
+
+// Staff only: fetched once the browser knows staff are looking, never by other visitors.
+const RecordCustomer = dynamic(() => import("./record-customer").then((module) => module.RecordCustomer));
 
 interface ReplacementFinderProps {
   initialQuery: FinderQuery;

@@ -1,7 +1,7 @@
 "use client";
 
 import { useBrowserSession } from "@/components/auth/use-browser-session";
-import { hasRole } from "@/lib/tire";
+import { hasRole } from "@/lib/tire/vocabulary";
 
 /**
  * Whether staff are looking, read in the browser so the finder is the same page for everyone on the

@@ -1,6 +1,6 @@
 import type { EmailSendRow } from "@/lib/email/queries";
-import { EmailCardForm } from "./email-card-form";
 import { EmailHistory } from "./email-history";
+import { LazyEmailCardForm } from "./lazy-email-card-form";
 
 /** The Counter's tools under a Fit card: e-mail its link, and see who has. Rendered for staff only. */
 export function EmailCardPanel({ slug, sends, timeZone }: { slug: string; sends: EmailSendRow[]; timeZone: string }) {
@@ -13,7 +13,7 @@ export function EmailCardPanel({ slug, sends, timeZone }: { slug: string; sends:
         </h2>
         <p className="text-ink-soft">The customer gets the card&apos;s link, its sizes and prices, your message and the shop&apos;s contact.</p>
       </div>
-      <EmailCardForm slug={slug} />
+      <LazyEmailCardForm slug={slug} />
       <EmailHistory sends={sends} timeZone={timeZone} />
     </section>
   );

@@ -6,12 +6,16 @@ import { SpeedometerTable } from "@/components/compare/speedometer-table";
 import { ScaledTireDrawing } from "@/components/diagram/scaled-tire-drawing";
 import { UnitsToggle } from "@/components/units/units-toggle";
 import { useUnitSystem } from "@/components/units/use-unit-system";
-import { compareSizes, formatSize, measurableSizeFromSlug, sizeGeometry, type MeasurableSize } from "@/lib/tire";
+import { compareSizes } from "@/lib/tire/compare";
+import { formatSize } from "@/lib/tire/format";
+import { sizeGeometry, type MeasurableSize } from "@/lib/tire/geometry";
 
-/** The card's sizes drawn over each other to one scale, with their differences, read-only. */
-export function FitCardComparison({ designations }: { designations: string[] }) {
+/**
+ * The card's sizes drawn over each other to one scale, with their differences, read-only. The sizes
+ * come read (`measurableSizeFromSlug`) by the server, so the page's scripts carry no marking reader.
+ */
+export function FitCardComparison({ sizes }: { sizes: MeasurableSize[] }) {
   const [units, setUnits] = useUnitSystem();
-  const sizes = useMemo(() => designations.map(measurableSizeFromSlug).filter((size): size is MeasurableSize => size !== null), [designations]);
   const compared = useMemo(() => compareSizes(sizes), [sizes]);
   const tires = sizes.map((size, index) => ({ id: `${index}-${formatSize(size)}`, label: formatSize(size), ...sizeGeometry(size) }));
   if (tires.length === 0) return null;

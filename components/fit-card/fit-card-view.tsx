@@ -5,7 +5,7 @@ import { SafetyCautions } from "@/components/ui/safety-cautions";
 import { originalServiceWords, placardMinimumWords } from "@/lib/fit-cards/original-words";
 import type { PublicFitCard } from "@/lib/fit-cards/read-card";
 import type { ShopContact } from "@/lib/shop/queries";
-import { seasonTireWords } from "@/lib/tire";
+import { measurableSizeFromSlug, seasonTireWords, type MeasurableSize } from "@/lib/tire";
 import { FitCardComparison } from "./fit-card-comparison";
 import { FitCardTires } from "./fit-card-tires";
 import { ShareActions } from "./share-actions";
@@ -39,7 +39,7 @@ export function FitCardView({ card, shop, url, timeZone }: { card: PublicFitCard
           <p className="mt-1 whitespace-pre-line">{card.note}</p>
         </section>
       ) : null}
-      <FitCardComparison designations={card.sizes} />
+      <FitCardComparison sizes={card.sizes.map(measurableSizeFromSlug).filter((size): size is MeasurableSize => size !== null)} />
       <FitCardTires tires={card.tires} needed={card.quantity} />
       <AskTheShop
         source="fit-card"

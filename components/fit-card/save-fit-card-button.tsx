@@ -3,7 +3,7 @@
 import dynamic from "next/dynamic";
 import { useState } from "react";
 import { useBrowserSession } from "@/components/auth/use-browser-session";
-import { hasRole, SAVE_FIT_CARD_ROLE } from "@/lib/tire";
+import { hasRole, SAVE_FIT_CARD_ROLE } from "@/lib/tire/vocabulary";
 import { CopyOrSignIn } from "./copy-or-sign-in";
 
 /** What a card is saved with; the finder fills in everything the judge reads about the original. */

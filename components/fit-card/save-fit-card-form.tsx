@@ -2,7 +2,7 @@
 
 import { useId, useState, type FormEvent } from "react";
 import { fieldClass, FormField } from "@/components/ui/form-field";
-import { MAX_NOTE_LENGTH } from "@/lib/fit-cards/card-input";
+import { MAX_NOTE_LENGTH } from "@/lib/fit-cards/card-limits";
 import { postFitCard, type SaveOutcome } from "./post-fit-card";
 import type { FitCardDraft } from "./save-fit-card-button";
 

@@ -1,4 +1,6 @@
-import { formatLoad, LOAD_INDEX_MAX, LOAD_INDEX_MIN, lbToKg, loadIndexKg, minimumLoadIndex } from "@/lib/tire";
+import { formatLoad } from "@/lib/tire/display";
+import { LOAD_INDEX_MAX, LOAD_INDEX_MIN, loadIndexKg, minimumLoadIndex } from "@/lib/tire/load-index";
+import { lbToKg } from "@/lib/tire/units";
 import { everyRow, noRow, readAmount, readServiceDescription, type SearchOutcome } from "./search-terms";
 
 export interface LoadIndexRow {

@@ -1,7 +1,7 @@
 "use client";
 
 import { CAR_LOAD_INDEX_RANGE } from "@/content/learn/ranges";
-import { formatLoad } from "@/lib/tire";
+import { formatLoad } from "@/lib/tire/display";
 import type { CommonRange } from "./common-range";
 import type { FinderColumn } from "./finder-table";
 import { loadIndexAnchor, loadIndexRows, searchLoadIndices, type LoadIndexRow } from "./load-index-search";

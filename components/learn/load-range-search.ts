@@ -1,4 +1,4 @@
-import { isLoadRange, LOAD_RANGES, loadRangeForPlyRating, LT_MAX_PRESSURE_PSI, plyRatingForLoadRange, type LoadRange } from "@/lib/tire";
+import { isLoadRange, LOAD_RANGES, loadRangeForPlyRating, LT_MAX_PRESSURE_PSI, plyRatingForLoadRange, type LoadRange } from "@/lib/tire/load-range";
 import { everyRow, noRow, readAmount, type SearchOutcome } from "./search-terms";
 
 export interface LoadRangeRow {

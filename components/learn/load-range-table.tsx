@@ -1,6 +1,7 @@
 "use client";
 
-import { formatPressure, psiToKpa } from "@/lib/tire";
+import { formatPressure } from "@/lib/tire/display";
+import { psiToKpa } from "@/lib/tire/units";
 import { loadRangeRows, searchLoadRanges, type LoadRangeRow } from "./load-range-search";
 import type { FinderColumn } from "./finder-table";
 import { TableFinder } from "./table-finder";

@@ -1,4 +1,6 @@
-import { formatSpeed, isSpeedSymbol, mphToKmh, SPEED_SYMBOLS, type SpeedSymbolInfo } from "@/lib/tire";
+import { formatSpeed } from "@/lib/tire/display";
+import { isSpeedSymbol, SPEED_SYMBOLS, type SpeedSymbolInfo } from "@/lib/tire/speed-symbols";
+import { mphToKmh } from "@/lib/tire/units";
 import { everyRow, noRow, readAmount, readServiceDescription, type SearchOutcome } from "./search-terms";
 
 export interface SpeedSymbolRow extends SpeedSymbolInfo {

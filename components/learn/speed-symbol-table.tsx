@@ -1,7 +1,8 @@
 "use client";
 
 import { SLOWEST_ROAD_SPEED_SYMBOL } from "@/content/learn/ranges";
-import { formatSpeed, speedSymbolRank } from "@/lib/tire";
+import { formatSpeed } from "@/lib/tire/display";
+import { speedSymbolRank } from "@/lib/tire/speed-symbols";
 import { searchSpeedSymbols, speedSymbolRows, type SpeedSymbolRow } from "./speed-symbol-search";
 import type { CommonRange } from "./common-range";
 import type { FinderColumn } from "./finder-table";

@@ -1,4 +1,5 @@
-import { HONEYPOT_FIELD, quoteFieldErrors, quoteRequestSchema } from "@/lib/quotes/quote-input";
+import { quoteFieldErrors, quoteRequestSchema } from "@/lib/quotes/quote-input";
+import { HONEYPOT_FIELD } from "@/lib/quotes/quote-limits";
 import type { QuoteSource } from "@/lib/tire";
 
 export type QuoteOutcome =

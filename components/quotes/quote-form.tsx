@@ -1,7 +1,7 @@
 "use client";
 
 import { useEffect, useId, useRef, useState, type FormEvent } from "react";
-import { DEFAULT_QUANTITY, HONEYPOT_FIELD, MAX_QUANTITY, MIN_QUANTITY, PREFERRED_DAY_MAX_AHEAD } from "@/lib/quotes/quote-input";
+import { DEFAULT_QUANTITY, HONEYPOT_FIELD, MAX_QUANTITY, MIN_QUANTITY, PREFERRED_DAY_MAX_AHEAD } from "@/lib/quotes/quote-limits";
 import { fetchFormToken, postQuoteRequest, type QuoteContext, type QuoteOutcome } from "./post-quote-request";
 import { fieldClass, FormField } from "@/components/ui/form-field";
 import { StockLine } from "@/components/ui/stock-line";

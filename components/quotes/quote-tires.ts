@@ -1,4 +1,4 @@
-import { describeTire, type ServiceDescribed } from "@/lib/tire";
+import { describeTire, type ServiceDescribed } from "@/lib/tire/describe-tire";
 
 /** What the finder sends: the tire on the car, then any tires picked from the results. */
 export function finderQuoteTires(original: ServiceDescribed, picked: readonly (ServiceDescribed & { brand: string; line: string })[]): string {

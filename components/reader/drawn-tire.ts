@@ -1,6 +1,8 @@
 import type { DrawnTire } from "@/components/diagram/drawing-layout";
 import { formatLength, type UnitSystem } from "@/lib/tire/display";
-import { formatSize, type Geometry, type TireSize } from "@/lib/tire";
+import { formatSize } from "@/lib/tire/format";
+import { type Geometry } from "@/lib/tire/geometry";
+import { type TireSize } from "@/lib/tire/types";
 
 export function drawnTireOf(size: TireSize, geometry: Geometry): DrawnTire {
   const label = formatSize(size);

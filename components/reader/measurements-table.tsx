@@ -1,4 +1,5 @@
-import { formatLength, formatRevolutions, type Geometry, type UnitSystem } from "@/lib/tire";
+import { formatLength, formatRevolutions, type UnitSystem } from "@/lib/tire/display";
+import { type Geometry } from "@/lib/tire/geometry";
 
 const unitHeading: Record<UnitSystem, string> = { metric: "Metric", imperial: "Imperial" };
 

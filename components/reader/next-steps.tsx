@@ -1,5 +1,8 @@
 import Link from "next/link";
-import { hasNominalDiameter, rimTwin, sizeToSlug, type Marking } from "@/lib/tire";
+import { sizeToSlug } from "@/lib/tire/format";
+import { hasNominalDiameter } from "@/lib/tire/geometry";
+import { rimTwin } from "@/lib/tire/rim-twins";
+import { type Marking } from "@/lib/tire/types";
 
 /** Where to go with a size that has been read, each link carrying everything already known. */
 export function NextSteps({ marking }: { marking: Marking }) {

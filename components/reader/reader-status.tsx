@@ -1,5 +1,5 @@
-import type { ParseResult } from "@/lib/tire";
-import { formatSize } from "@/lib/tire";
+import type { ParseResult } from "@/lib/tire/types";
+import { formatSize } from "@/lib/tire/format";
 
 /** What was read, or what is missing and how to fix it; announced politely as the text changes. */
 export function ReaderStatus({ text, result }: { text: string; result: ParseResult }) {

@@ -1,10 +1,9 @@
 "use client";
 
 import { useEffect, useMemo, useState } from "react";
-import { loadMotionFeatures } from "@/components/diagram/motion-features-loader";
 import { UnitsToggle } from "@/components/units/units-toggle";
 import { useUnitSystem } from "@/components/units/use-unit-system";
-import { parseMarking } from "@/lib/tire";
+import { parseMarking } from "@/lib/tire/parse/parse-marking";
 import { describeMarking, type SidewallPartKey } from "@/lib/tire/describe";
 import { MarkedEcho } from "./marked-echo";
 import { MarkingInput } from "./marking-input";
@@ -23,11 +22,6 @@ export function SidewallReader({ initialText }: { initialText: string }) {
   const marking = result.ok ? result : null;
   const parts = useMemo(() => (marking ? describeMarking(marking, units) : []), [marking, units]);
   const activeDimension = parts.find((part) => part.key === active)?.dimension ?? null;
-
-  // Fetch the animation engine once, right after the page loads, rather than in the middle of typing.
-  useEffect(() => {
-    void loadMotionFeatures();
-  }, []);
 
   useEffect(() => {
     const timer = window.setTimeout(() => {

@@ -1,4 +1,4 @@
-import { hasRole, type Role } from "@/lib/tire";
+import { hasRole, type Role } from "@/lib/tire/vocabulary";
 
 export interface NavItem {
   href: string;

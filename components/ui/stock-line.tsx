@@ -1,4 +1,4 @@
-import { stockWords } from "@/lib/tire";
+import { stockWords } from "@/lib/tire/stock-words";
 
 const tone = { enough: "text-ink", short: "font-semibold text-ink", none: "text-ink-soft" } as const;
 

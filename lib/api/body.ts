@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { CONTROL_CHARACTER_MESSAGE, findControlCharacters } from "@/lib/validation/text";
+import { CONTROL_CHARACTER_MESSAGE, findControlCharacters } from "@/lib/validation/text-rules";
 import { apiError } from "./errors";
 
 /** Largest JSON body a route reads. */

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { CONTROL_CHARACTER_MESSAGE, hasControlCharacters } from "@/lib/validation/text";
+import { CONTROL_CHARACTER_MESSAGE, hasControlCharacters } from "@/lib/validation/text-rules";
 import { apiError } from "./errors";
 
 /** Longest text parameter the API reads; anything longer answers 414. */

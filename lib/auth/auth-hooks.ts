@@ -1,7 +1,7 @@
 import { APIError, createAuthMiddleware, isAPIError } from "better-auth/api";
 import { z } from "zod";
 import type { Database } from "@/db/client";
-import { PASSWORD_LENGTH } from "./form-schemas";
+import { PASSWORD_LENGTH } from "./form-checks";
 import { clearSignInFailures, recordSignInFailure, signInWaitSeconds } from "./sign-in-throttle";
 
 const emailBody = z.object({ email: z.string() });

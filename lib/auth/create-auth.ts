@@ -10,7 +10,7 @@ import { siteUrl } from "@/lib/env/site-url";
 import { CLIENT_ADDRESS_HEADER } from "@/lib/security/client-address";
 import { readAuthEnv } from "./auth-env";
 import { afterAuthHook, beforeAuthHook } from "./auth-hooks";
-import { PASSWORD_LENGTH } from "./form-schemas";
+import { PASSWORD_LENGTH } from "./form-checks";
 import { ac, roles } from "./roles";
 import { clearSignInFailures } from "./sign-in-throttle";
 

@@ -1,6 +1,6 @@
 import type { NewStockItem } from "@/db/schema";
 import { isSku, SKU_RULE } from "@/lib/tire";
-import { hasControlCharacters } from "@/lib/validation/text";
+import { hasControlCharacters } from "@/lib/validation/text-rules";
 import { buildStockRow, type StockItemInput, type StockLine, type StockRowProblem } from "@/lib/stock/build-stock-row";
 import { isLoadRange, isSpeedSymbol, LOAD_INDEX_MAX, LOAD_INDEX_MIN } from "@/lib/tire";
 import type { CatalogCsvColumnName, CatalogCsvRecord, CsvRefusal } from "./columns";

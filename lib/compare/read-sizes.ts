@@ -1,4 +1,6 @@
-import { hasNominalDiameter, noDiameterMessage, notASizeMessage, sizeFromSlug, type MeasurableSize } from "@/lib/tire";
+import { hasNominalDiameter, type MeasurableSize } from "@/lib/tire/geometry";
+import { notASizeMessage } from "@/lib/tire/messages";
+import { noDiameterMessage, sizeFromSlug } from "@/lib/tire/slug";
 
 export const MAX_COMPARED_SIZES = 4;
 

@@ -1,4 +1,9 @@
-import { lbToKg, type Marking, parseMarking, placardCheck, serviceType, type UnitSystem } from "@/lib/tire";
+import { type UnitSystem } from "@/lib/tire/display";
+import { parseMarking } from "@/lib/tire/parse/parse-marking";
+import { placardCheck } from "@/lib/tire/placard";
+import { serviceType } from "@/lib/tire/service-type";
+import { type Marking } from "@/lib/tire/types";
+import { lbToKg } from "@/lib/tire/units";
 import type { FinderQuery } from "./finder-query";
 
 export type OriginalReading =

@@ -1,14 +1,13 @@
 import { z } from "zod";
-import { LOAD_RANGES, SEASONS } from "@/lib/tire";
+import { LOAD_RANGES } from "@/lib/tire/load-range";
+import { SEASONS } from "@/lib/tire/vocabulary";
 import { MAX_COMPARED_SIZES } from "@/lib/compare/read-sizes";
 import { skuSchema } from "@/lib/validation/sku";
 import { lineText, multiLineText } from "@/lib/validation/text";
-
-export const MAX_CARD_TIRES = 6;
+import { MAX_CARD_TIRES, MAX_NOTE_LENGTH } from "./card-limits";
 
 /** The shape of a slug (see slug.ts), to refuse anything else before touching the database. */
 export const FIT_CARD_SLUG_PATTERN = /^[A-Za-z0-9_-]{24}$/;
-export const MAX_NOTE_LENGTH = 1000;
 
 const loadIndexField = z.number().int().min(0).max(279);
 

@@ -1,7 +1,8 @@
 import { createHmac, timingSafeEqual } from "node:crypto";
 import { z } from "zod";
 import { readAuthEnv } from "@/lib/auth/auth-env";
-import { HONEYPOT_FIELD, MIN_FILL_MS } from "./quote-input";
+import { MIN_FILL_MS } from "./quote-input";
+import { HONEYPOT_FIELD } from "./quote-limits";
 
 /** A form older than this was not filled in by the person who opened it today. */
 export const MAX_FORM_AGE_MS = 86_400_000;

@@ -2,18 +2,13 @@ import { z } from "zod";
 import { QUOTE_SOURCES } from "@/db/schema/quotes";
 import { lineText, multiLineText } from "@/lib/validation/text";
 import { skuSchema } from "@/lib/validation/sku";
+import { DEFAULT_QUANTITY, HONEYPOT_FIELD, MAX_QUANTITY, MIN_QUANTITY, PREFERRED_DAY_MAX_AHEAD } from "./quote-limits";
 
-export const MIN_QUANTITY = 1;
-export const MAX_QUANTITY = 16;
-export const DEFAULT_QUANTITY = 4;
-export const PREFERRED_DAY_MAX_AHEAD = 90;
 /**
  * A person needs longer than this to fill in a name, an address and a vehicle; a script does not.
  * Measured from the server's signed `renderedAt`.
  */
 export const MIN_FILL_MS = 3000;
-/** The field no person sees: anything typed into it came from a script. */
-export const HONEYPOT_FIELD = "website";
 export const MAX_REPLY_LENGTH = 5000;
 /** At most as many catalog tires as a Fit card holds. */
 export const MAX_REQUEST_SKUS = 6;

@@ -1,73 +1,126 @@
 /**
- * First-load JavaScript of each page of the production build: the sum of the gzip -9 sizes of every
- * script the page's HTML references. Builds first when there is no build; serves it on a spare port.
- *   npm run bench:bundle [-- /path /other-path]
+ * First-load JavaScript of each public page of the production build beside a bare Next.js page built
+ * in the same run with the same next and react (bare-next-app.ts): the sum of the gzip -9 sizes of
+ * every script the page's HTML references. Goal: each page ≤ 1.15 × the bare page. Sizes do not vary
+ * from run to run, so one measurement per page is the figure. Builds the app first when there is no
+ * build; a Fit card for /s/{slug} is saved by the demo staff account.
+ *   npm run bench:bundle            # prints every page's largest scripts, then the table
  */
-import { spawn, spawnSync } from "node:child_process";
-import { existsSync, mkdtempSync } from "node:fs";
+import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { gzipSync } from "node:zlib";
+import { startBareNextApp } from "./bare-next-app";
+import { ensureProductionBuild, type RunningServer, startProductionServer } from "./production-server";
+import { type Bench, type BenchRow, formatTable, isMainModule, ratioRow } from "./report";
 
-const BARE_NEXT_PAGE_KB = 174;
-const budgets: Record<string, number> = { "/": BARE_NEXT_PAGE_KB * 1.25 };
-const defaultPages = ["/", "/compare", "/plus", "/replace", "/learn", "/counter"];
-const pages = process.argv.slice(2).filter((arg) => arg.startsWith("/"));
-const port = 3290;
-const base = `http://localhost:${port}`;
+const MAX_RATIO = 1.15;
+const FIT_CARD_PAGE = "/s/{slug}";
+export const PUBLIC_PAGES = [
+  "/",
+  "/size/285-50R20",
+  "/compare?sizes=265-70R17,285-70R17",
+  "/plus?size=285-50R20",
+  "/replace?size=285-50R20&loadIndex=119&speedSymbol=S",
+  "/learn",
+  FIT_CARD_PAGE,
+  "/sign-in",
+] as const;
 
-if (!existsSync(".next/BUILD_ID")) {
-  const build = spawnSync("npm", ["run", "build"], { stdio: "inherit" });
-  if (build.status !== 0) process.exit(build.status ?? 1);
+interface Script {
+  src: string;
+  gzipBytes: number;
 }
 
-const server = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-p", String(port)], {
-  env: { ...process.env, PGLITE_DATA_DIR: path.join(mkdtempSync(path.join(tmpdir(), "sidewise-bundle-")), "db") },
-  stdio: "ignore",
-});
+export interface FirstLoad {
+  bytes: number;
+  scripts: Script[];
+}
 
-async function waitForServer(): Promise<void> {
-  for (let attempt = 0; attempt < 120; attempt++) {
-    try {
-      if ((await fetch(`${base}/api/health`)).ok) return;
-    } catch {
-      // not listening yet
-    }
-    await new Promise((resolve) => setTimeout(resolve, 500));
+const gzipCache = new Map<string, Promise<number>>();
+
+const gzippedSize = (url: string): Promise<number> => {
+  let size = gzipCache.get(url);
+  if (!size) {
+    size = fetch(url).then(async (answer) => gzipSync(Buffer.from(await answer.arrayBuffer()), { level: 9 }).length);
+    gzipCache.set(url, size);
   }
-  throw new Error("the production server did not start");
-}
-
-const scriptCache = new Map<string, number>();
-
-async function gzippedSize(src: string): Promise<number> {
-  const cached = scriptCache.get(src);
-  if (cached !== undefined) return cached;
-  const body = Buffer.from(await (await fetch(new URL(src, base))).arrayBuffer());
-  const size = gzipSync(body, { level: 9 }).length;
-  scriptCache.set(src, size);
   return size;
-}
+};
 
-async function measure(page: string) {
-  const html = await (await fetch(`${base}${page}`)).text();
+/** Every script the page's HTML references (the `noModule` polyfill included), gzip -9. */
+export async function measureFirstLoad(base: string, page: string): Promise<FirstLoad> {
+  const answer = await fetch(`${base}${page}`);
+  if (!answer.ok) throw new Error(`${page} answered ${answer.status}`);
+  const html = await answer.text();
   const sources = [...new Set([...html.matchAll(/<script[^>]+src="([^"]+)"/g)].map((match) => match[1]!))];
-  const sizes = await Promise.all(sources.map(gzippedSize));
-  return { scripts: sources.length, kb: sizes.reduce((sum, size) => sum + size, 0) / 1024 };
+  const scripts = await Promise.all(sources.map(async (src) => ({ src, gzipBytes: await gzippedSize(new URL(src, base).href) })));
+  return { bytes: scripts.reduce((sum, script) => sum + script.gzipBytes, 0), scripts };
 }
 
-try {
-  await waitForServer();
-  let overBudget = false;
-  console.log("page".padEnd(28) + "scripts  first-load JS (gzip -9)  budget");
-  for (const page of pages.length > 0 ? pages : defaultPages) {
-    const { scripts, kb } = await measure(page);
-    const budget = budgets[page];
-    const verdict = budget === undefined ? "" : `${budget.toFixed(0)} KB ${kb <= budget ? "ok" : "OVER"}`;
-    if (budget !== undefined && kb > budget) overBudget = true;
-    console.log(`${page.padEnd(28)}${String(scripts).padStart(7)}  ${kb.toFixed(1).padStart(10)} KB            ${verdict}`);
+/** Signs the demo staff account in and saves a Fit card, for a real /s/{slug} page. */
+async function saveDemoFitCard(base: string): Promise<string> {
+  const headers = { origin: base, "content-type": "application/json", "x-forwarded-for": "198.51.100.77" };
+  const signIn = await fetch(`${base}/api/auth/sign-in/email`, {
+    method: "POST",
+    headers,
+    body: JSON.stringify({ email: "staff@sidewise.test", password: "sidewise-demo" }),
+  });
+  if (!signIn.ok) throw new Error(`the demo staff sign-in answered ${signIn.status}`);
+  const cookie = signIn.headers.getSetCookie().map((line) => line.split(";")[0]).join("; ");
+  const saved = await fetch(`${base}/api/v1/fit-cards`, {
+    method: "POST",
+    headers: { ...headers, cookie },
+    body: JSON.stringify({ sizes: ["285/50R20"], loadIndex: 119, speedSymbol: "S" }),
+  });
+  if (saved.status !== 201) throw new Error(`saving a Fit card answered ${saved.status}: ${await saved.text()}`);
+  const { slug } = (await saved.json()) as { slug: string };
+  return slug;
+}
+
+const kb = (bytes: number) => bytes / 1024;
+
+export async function measurePages(app: RunningServer, bareUrl: string): Promise<{ floor: FirstLoad; pages: [string, FirstLoad][] }> {
+  const floor = await measureFirstLoad(bareUrl, "/");
+  const slug = await saveDemoFitCard(app.url);
+  const pages: [string, FirstLoad][] = [];
+  for (const page of PUBLIC_PAGES) pages.push([page, await measureFirstLoad(app.url, page.replace("{slug}", slug))]);
+  return { floor, pages };
+}
+
+function printDetails(floor: FirstLoad, pages: [string, FirstLoad][]): void {
+  console.log(`bare Next.js page: ${floor.scripts.length} scripts, ${kb(floor.bytes).toFixed(1)} KB`);
+  for (const [page, load] of pages) {
+    console.log(`\n${page}: ${load.scripts.length} scripts, ${kb(load.bytes).toFixed(1)} KB; largest:`);
+    const largest = [...load.scripts].sort((a, b) => b.gzipBytes - a.gzipBytes).slice(0, 6);
+    for (const script of largest) console.log(`  ${kb(script.gzipBytes).toFixed(1).padStart(6)} KB  ${script.src}`);
   }
-  process.exitCode = overBudget ? 1 : 0;
-} finally {
-  server.kill();
+  console.log();
+}
+
+async function measure(print: boolean): Promise<BenchRow[]> {
+  ensureProductionBuild();
+  const bare = await startBareNextApp();
+  const dataFolder = mkdtempSync(path.join(tmpdir(), "sidewise-bundle-"));
+  let app: RunningServer | undefined;
+  try {
+    app = await startProductionServer(path.join(dataFolder, "db"));
+    const { floor, pages } = await measurePages(app, bare.server.url);
+    if (print) printDetails(floor, pages);
+    const floorRow = { name: "bare page", value: kb(floor.bytes) };
+    return pages.map(([page, load]) => ratioRow(`first-load JS ${page}`, kb(load.bytes), "KB", floorRow, MAX_RATIO));
+  } finally {
+    await app?.stop();
+    await bare.server.stop();
+    rmSync(dataFolder, { recursive: true, force: true });
+  }
+}
+
+/** Sizes do not change between runs, so quick and full measure the same once. */
+export const run: Bench = async () => measure(false);
+
+if (isMainModule(import.meta.url)) {
+  const rows = await measure(true);
+  console.log(formatTable(rows));
+  process.exitCode = rows.every((row) => row.met) ? 0 : 1;
 }

@@ -20,7 +20,8 @@ export function ensureProductionBuild(): void {
   if (build.status !== 0) process.exit(build.status ?? 1);
 }
 
-function freePort(): Promise<number> {
+/** A port nothing listens on now, for a server of the bench's own. */
+export function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {
     const probe = createServer();
     probe.once("error", reject);
@@ -31,17 +32,18 @@ function freePort(): Promise<number> {
   });
 }
 
-async function waitForHealth(url: string, timeoutMs: number): Promise<void> {
+/** Waits until `url` answers 2xx. */
+export async function waitForAnswer(url: string, timeoutMs: number): Promise<void> {
   const deadline = Date.now() + timeoutMs;
   while (Date.now() < deadline) {
     try {
-      if ((await fetch(`${url}/api/health`)).ok) return;
+      if ((await fetch(url)).ok) return;
     } catch {
       // Not listening yet.
     }
     await new Promise((resolve) => setTimeout(resolve, 250));
   }
-  throw new Error(`the production server at ${url} did not become healthy in ${timeoutMs / 1000} s`);
+  throw new Error(`${url} did not answer in ${timeoutMs / 1000} s`);
 }
 
 /**
@@ -66,7 +68,7 @@ export async function startProductionServer(dataDir: string, env: Record<string,
     await exited;
   };
   try {
-    await waitForHealth(url, 60_000);
+    await waitForAnswer(`${url}/api/health`, 60_000);
   } catch (error) {
     await stop();
     throw error;

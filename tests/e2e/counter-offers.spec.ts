@@ -1,7 +1,7 @@
 import { expect, test, type Page } from "./helpers/test";
 import { expectNoAxeViolations } from "./helpers/axe";
 import { emailsTo } from "./helpers/inbox";
-import { FINDER_PAGE_SIZE } from "../../lib/finder/finder-query";
+import { FINDER_PAGE_SIZE } from "../../lib/finder/finder-state";
 
 // A common size the demo shop stocks deeply. The test fits four of its best-stocked tire, so the
 // on-hand specs that run later still find that tire with a set or more.

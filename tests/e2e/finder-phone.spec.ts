@@ -1,4 +1,4 @@
-import { FINDER_PAGE_SIZE } from "../../lib/finder/finder-query";
+import { FINDER_PAGE_SIZE } from "../../lib/finder/finder-state";
 import { expect, test, type Locator, type Page } from "./helpers/test";
 import { expectNoAxeViolations } from "./helpers/axe";
 import { resultItems, resultsHeading, showFilters, signIn } from "./helpers/finder";

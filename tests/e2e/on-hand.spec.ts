@@ -1,7 +1,7 @@
 import { demoShopCharges } from "../../lib/demo/shop";
 import { estimateSet } from "../../lib/money/estimate";
 import { formatPrice } from "../../lib/money/money";
-import { FINDER_PAGE_SIZE } from "../../lib/finder/finder-query";
+import { FINDER_PAGE_SIZE } from "../../lib/finder/finder-state";
 import { expect, type Page, test } from "./helpers/test";
 import { expectNoAxeViolations } from "./helpers/axe";
 import { showFilters } from "./helpers/finder";

@@ -4,7 +4,8 @@ import { maxJsonBodyBytes, parseJsonBody, readBodyBytes } from "@/lib/api/body";
 import { parseQuery } from "@/lib/api/query";
 import { isWellFormedReply } from "@/lib/security/page-post";
 import { pathDecodes } from "@/lib/security/path-segments";
-import { hasControlCharacters, lineText, multiLineText } from "@/lib/validation/text";
+import { lineText, multiLineText } from "@/lib/validation/text";
+import { hasControlCharacters } from "@/lib/validation/text-rules";
 
 describe("the text rule", () => {
   it("refuses NUL, the other C0 controls, DEL and the C1 controls in a one-line field", () => {

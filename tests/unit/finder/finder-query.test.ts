@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { DEFAULT_PAGE_SIZE } from "@/lib/catalog/query-schema";
-import { activeFilterCount, alternativesSearch, FINDER_PAGE_SIZE, finderSearch, readFinderQuery, setSizeOf } from "@/lib/finder/finder-query";
+import { readFinderQuery } from "@/lib/finder/finder-query";
+import { activeFilterCount, alternativesSearch, FINDER_PAGE_SIZE, finderSearch, setSizeOf } from "@/lib/finder/finder-state";
 import { placardFor, readOriginalMarking } from "@/lib/finder/original-marking";
 
 describe("the finder's address", () => {

@@ -4,7 +4,8 @@ import { withRoute } from "@/lib/auth/guard";
 import { createQuoteRequest } from "@/lib/quotes/create-request";
 import { spamVerdict } from "@/lib/quotes/form-token";
 import { listQuoteRequests, requestListApiQuerySchema, type QuoteRequestList } from "@/lib/quotes/queries";
-import { HONEYPOT_FIELD, quoteRequestSchema, SPAM_REFUSAL_MESSAGE, type QuoteRequestCreated } from "@/lib/quotes/quote-input";
+import { quoteRequestSchema, SPAM_REFUSAL_MESSAGE, type QuoteRequestCreated } from "@/lib/quotes/quote-input";
+import { HONEYPOT_FIELD } from "@/lib/quotes/quote-limits";
 import { hitAddressLimit, hitEmailLimit } from "@/lib/quotes/request-limits";
 
 function tooMany(retryAfterSeconds: number) {

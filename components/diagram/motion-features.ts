@@ -1,3 +1,0 @@
-import { domAnimation } from "framer-motion";
-
-export default domAnimation;
