@@ -10,6 +10,8 @@ import { type Bench, type BenchRow, formatTable } from "./report";
 const benches: { name: string; load: () => Promise<{ run: Bench }> }[] = [
   { name: "decode", load: () => import("./decode") },
   { name: "pages", load: () => import("./pages") },
+  { name: "bundle", load: () => import("./bundle") },
+  { name: "lighthouse", load: () => import("./lighthouse") },
   { name: "finder", load: () => import("./finder") },
   { name: "import", load: () => import("./import") },
   { name: "load", load: () => import("./load") },
