@@ -23,16 +23,14 @@ interface FinderTableProps<Row extends { key: string }> {
   emptyHint: string;
 }
 
-// A folded row shows as soon as its anchor is the page's target, when the "show all" box is ticked (even
-// before the page is interactive) and on paper.
-const rowClass =
-  "scroll-mt-16 target:bg-accent-soft data-folded:hidden data-folded:target:table-row data-folded:group-has-[[data-show-all]:checked]/finder:table-row data-folded:print:table-row";
-
 export function FinderTable<Row extends { key: string }>({ id, caption, columns, rows, tags, folded, rowId, emptyHint }: FinderTableProps<Row>) {
   const visibility = (column: FinderColumn<Row>) => (column.wideOnly ? "hidden sm:table-cell" : "");
   const alignment = (column: FinderColumn<Row>) => (column.numeric ? "text-right font-mono" : "text-left");
+  // A body cell's look lives in the finder-table rules of globals.css, so that a 280-row table does not
+  // repeat it in every cell; only what differs by column is named here.
+  const cellClass = (column: FinderColumn<Row>) => [column.numeric && "numeric", column.wideOnly && "wide-only"].filter(Boolean).join(" ") || undefined;
   return (
-    <table id={id} className="w-full border-separate border-spacing-0 rounded border border-rule bg-sheet text-sm">
+    <table id={id} className="finder-table w-full border-separate border-spacing-0 rounded border border-rule bg-sheet text-sm">
       <caption className="mb-2 text-left text-xs tracking-wide text-ink-soft uppercase">{caption}</caption>
       <thead>
         <tr>
@@ -49,10 +47,10 @@ export function FinderTable<Row extends { key: string }>({ id, caption, columns,
       </thead>
       <tbody>
         {rows.map((row) => (
-          <tr key={row.key} id={rowId?.(row)} data-row={row.key} data-folded={folded.has(row.key) || undefined} className={rowClass}>
+          <tr key={row.key} id={rowId?.(row)} data-row={row.key} data-folded={folded.has(row.key) || undefined}>
             {columns.map((column, index) => {
               const tag = index === columns.length - 1 ? tags.get(row.key) : undefined;
-              const className = `border-t border-rule px-3 py-1.5 align-top ${alignment(column)} ${visibility(column)}`;
+              const className = cellClass(column);
               const content = (
                 <>
                   {column.cell(row)}
@@ -65,7 +63,7 @@ export function FinderTable<Row extends { key: string }>({ id, caption, columns,
                 </>
               );
               return column.isRowHeader ? (
-                <th key={column.label} scope="row" className={`${className} font-mono text-base font-semibold`}>
+                <th key={column.label} scope="row" className={className}>
                   {content}
                 </th>
               ) : (
