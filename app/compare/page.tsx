@@ -1,9 +1,10 @@
 import type { Metadata } from "next";
 import { SideBySide } from "@/components/compare/side-by-side";
+import { readSizeEntry } from "@/components/compare/size-entry";
 import { PageIntro } from "@/components/ui/page-intro";
 import { SafetyCautions } from "@/components/ui/safety-cautions";
 import { sizeChangeCautions } from "@/content/safety";
-import { MAX_COMPARED_SIZES } from "@/lib/compare/read-sizes";
+import { MAX_COMPARED_SIZES } from "@/lib/compare/compare-limits";
 import { formatSize, sizeFromSlug } from "@/lib/tire";
 
 export const metadata: Metadata = {
@@ -27,7 +28,7 @@ export default async function SideBySidePage({ searchParams }: { searchParams: S
       <PageIntro eyebrow="Side-by-side" title="What a different size changes">
         <p>Up to four sizes drawn over each other to one scale. The first is the reference: the size your speedometer is set for.</p>
       </PageIntro>
-      <SideBySide initialSizes={initialSizes.length > 0 ? initialSizes : ["", ""]} />
+      <SideBySide initialEntries={(initialSizes.length > 0 ? initialSizes : ["", ""]).map(readSizeEntry)} />
       <SafetyCautions cautions={sizeChangeCautions} />
     </section>
   );

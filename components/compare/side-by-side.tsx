@@ -8,25 +8,29 @@ import { UnitsToggle } from "@/components/units/units-toggle";
 import { useUnitSystem } from "@/components/units/use-unit-system";
 import { compareSizes } from "@/lib/tire/compare";
 import { formatSize, sizeToSlug } from "@/lib/tire/format";
-import { hasNominalDiameter, sizeGeometry, type MeasurableSize } from "@/lib/tire/geometry";
-import { measurableSizeFromSlug, noDiameterMessage, sizeFromSlug } from "@/lib/tire/slug";
+import { sizeGeometry, type MeasurableSize } from "@/lib/tire/geometry";
+import { useOnDemand } from "@/components/reader/use-on-demand";
 import { DifferenceTable } from "./difference-table";
-import { type SizeEntry, SizeListEditor } from "./size-list-editor";
+import type { SizeEntry } from "./size-entry";
+import { SizeListEditor } from "./size-list-editor";
 import { SpeedometerSummary } from "./speedometer-summary";
 import { SpeedometerTable } from "./speedometer-table";
 
-function entryOf(text: string, id: number): SizeEntry {
-  const size = sizeFromSlug(text);
-  const problem = !size ? "Not a size yet: type it like 275/55R20." : hasNominalDiameter(size) ? null : noDiameterMessage(size);
-  return { id, text, problem };
-}
+const fetchSizeReader = () => import("./size-entry");
 
-/** Up to four sizes drawn over each other to one scale, with their differences and the speedometer. */
-export function SideBySide({ initialSizes }: { initialSizes: string[] }) {
-  const [entries, setEntries] = useState<SizeEntry[]>(() => (initialSizes.length > 0 ? initialSizes : [""]).map(entryOf));
-  const nextId = useRef(entries.length);
+/**
+ * Up to four sizes drawn over each other to one scale, with their differences and the speedometer.
+ * The sizes in the address come read by the server; the reader for typed ones is fetched at the first
+ * focus or edit, and what was typed before it arrives is read then.
+ */
+export function SideBySide({ initialEntries }: { initialEntries: SizeEntry[] }) {
+  const [typed, setTyped] = useState(initialEntries);
+  const nextId = useRef(typed.length);
   const [units, setUnits] = useUnitSystem();
-  const sizes = useMemo(() => entries.map((entry) => measurableSizeFromSlug(entry.text)).filter((size): size is MeasurableSize => size !== null), [entries]);
+  const [reader, loadReader] = useOnDemand(fetchSizeReader);
+  // Until the reader arrives, an edited entry keeps its last reading for a moment.
+  const entries = useMemo(() => (reader ? typed.map((entry) => reader.readSizeEntry(entry.text, entry.id)) : typed), [reader, typed]);
+  const sizes = useMemo(() => entries.map((entry) => entry.size).filter((size): size is MeasurableSize => size !== null), [entries]);
   const compared = useMemo(() => compareSizes(sizes), [sizes]);
 
   useEffect(() => {
@@ -36,11 +40,14 @@ export function SideBySide({ initialSizes }: { initialSizes: string[] }) {
     window.history.replaceState(window.history.state, "", url);
   }, [sizes]);
 
-  const change = (id: number, text: string) => setEntries((list) => list.map((entry) => (entry.id === id ? entryOf(text, id) : entry)));
-  const remove = (id: number) => setEntries((list) => list.filter((entry) => entry.id !== id));
-  const add = () => setEntries((list) => [...list, entryOf("", nextId.current++)]);
+  const change = (id: number, text: string) => {
+    loadReader();
+    setTyped((list) => list.map((entry) => (entry.id === id ? { ...entry, text } : entry)));
+  };
+  const remove = (id: number) => setTyped((list) => list.filter((entry) => entry.id !== id));
+  const add = () => setTyped((list) => [...list, { id: nextId.current++, text: "", problem: null, size: null }]);
   const move = (id: number, offset: -1 | 1) =>
-    setEntries((list) => {
+    setTyped((list) => {
       const from = list.findIndex((entry) => entry.id === id);
       const to = from + offset;
       if (from < 0 || to < 0 || to >= list.length) return list;
@@ -55,7 +62,7 @@ export function SideBySide({ initialSizes }: { initialSizes: string[] }) {
   });
   return (
     <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,1.2fr)] lg:gap-10">
-      <div className="flex min-w-0 flex-col gap-4">
+      <div className="flex min-w-0 flex-col gap-4" onFocus={loadReader}>
         <SizeListEditor entries={entries} onChange={change} onRemove={remove} onMove={move} onAdd={add} />
         <div className="flex justify-end">
           <UnitsToggle units={units} onChange={setUnits} />

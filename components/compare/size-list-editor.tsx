@@ -1,14 +1,8 @@
 "use client";
 
-import { MAX_COMPARED_SIZES } from "@/lib/compare/read-sizes";
+import { MAX_COMPARED_SIZES } from "@/lib/compare/compare-limits";
 import { LineSample } from "./line-sample";
-
-export interface SizeEntry {
-  id: number;
-  text: string;
-  /** What is wrong with the text as a size to compare, or null when it compares. */
-  problem: string | null;
-}
+import type { SizeEntry } from "./size-entry";
 
 interface SizeListEditorProps {
   entries: SizeEntry[];

@@ -2,7 +2,7 @@ import type { FitCardDraft } from "@/components/fit-card/save-fit-card-button";
 import type { Candidate } from "@/lib/finder/alternatives-response";
 import type { FinderQuery } from "@/lib/finder/finder-query";
 import type { PlacardMinimums } from "@/lib/finder/finder-state";
-import { MAX_COMPARED_SIZES } from "@/lib/compare/read-sizes";
+import { MAX_COMPARED_SIZES } from "@/lib/compare/compare-limits";
 
 /**
  * A Fit card from the finder: the original's size first, then the picked tires' other sizes, with

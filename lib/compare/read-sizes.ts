@@ -1,8 +1,9 @@
 import { hasNominalDiameter, type MeasurableSize } from "@/lib/tire/geometry";
 import { notASizeMessage } from "@/lib/tire/messages";
 import { noDiameterMessage, sizeFromSlug } from "@/lib/tire/slug";
+import { MAX_COMPARED_SIZES } from "./compare-limits";
 
-export const MAX_COMPARED_SIZES = 4;
+export { MAX_COMPARED_SIZES };
 
 export type SizeListResult =
   | { ok: true; sizes: MeasurableSize[] }
