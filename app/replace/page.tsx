@@ -6,6 +6,7 @@ import { StartForm } from "@/components/finder/start-form";
 import { PageIntro } from "@/components/ui/page-intro";
 import { SafetyCautions } from "@/components/ui/safety-cautions";
 import { readFinderQuery } from "@/lib/finder/finder-query";
+import { readOriginalMarking } from "@/lib/finder/original-marking";
 import { readCachedShopTolerance } from "@/lib/shop/shop-cache";
 import { listBrandNames } from "@/lib/finder/queries";
 
@@ -34,6 +35,7 @@ export default async function ReplacementFinderPage({ searchParams }: { searchPa
         <ReplacementFinder
           key={`${query.size}|${query.loadIndex}|${query.loadIndexDual}|${query.speedSymbol}|${query.loadRange}`}
           initialQuery={query}
+          original={readOriginalMarking(query)}
           brands={brands}
           defaultTolerancePct={defaultTolerancePct}
         />

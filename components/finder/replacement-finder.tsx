@@ -7,7 +7,8 @@ import { useUnitSystem } from "@/components/units/use-unit-system";
 import { UnitsToggle } from "@/components/units/units-toggle";
 import type { FinderQuery } from "@/lib/finder/finder-query";
 import { alternativesSearch, finderSearch, setSizeOf } from "@/lib/finder/finder-state";
-import { placardFor, readOriginalMarking } from "@/lib/finder/original-marking";
+import type { OriginalReading } from "@/lib/finder/original-marking";
+import { placardFor } from "@/lib/finder/placard-for";
 import { SaveFitCard } from "@/components/fit-card/save-fit-card-button";
 import { AskTheShop, type AskTheShopHandle } from "@/components/quotes/ask-the-shop";
 import { finderQuoteTires, quoteCatalogTires } from "@/components/quotes/quote-tires";
@@ -26,15 +27,16 @@ const RecordCustomer = dynamic(() => import("./record-customer").then((module) =
 
 interface ReplacementFinderProps {
   initialQuery: FinderQuery;
+  /** The tire on the car, read by the page from the same address. */
+  original: OriginalReading;
   brands: string[];
   defaultTolerancePct: number;
 }
 
 /** Equal-or-better tires for the current one, fetched from the public API as filters change. */
-export function ReplacementFinder({ initialQuery, brands, defaultTolerancePct }: ReplacementFinderProps) {
+export function ReplacementFinder({ initialQuery, original, brands, defaultTolerancePct }: ReplacementFinderProps) {
   const [query, setQuery] = useState(initialQuery);
   const [units, setUnits] = useUnitSystem();
-  const original = useMemo(() => readOriginalMarking(query), [query]);
   const placard = useMemo(() => (original.ok ? placardFor(query, original.passengerTire, units) : null), [query, original, units]);
   const minimums = { loadIndex: placard?.minLoadIndex ?? null, loadIndexDual: placard?.minLoadIndexDual ?? null };
   const search = original.ok ? alternativesSearch(query, minimums) : null;

@@ -1,22 +1,18 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { useState } from "react";
-import { ScaledTireDrawing } from "@/components/diagram/scaled-tire-drawing";
 import type { DrawnTire } from "@/components/diagram/drawing-layout";
-import { drawnTireOf } from "@/components/reader/drawn-tire";
 import type { Candidate, NearMiss } from "@/lib/finder/alternatives-response";
 import { formatPrice } from "@/lib/money/money";
 import { formatSignedPercent, type UnitSystem } from "@/lib/tire/display";
 import { formatServiceDescription } from "@/lib/tire/format";
-import { parseMarking } from "@/lib/tire/parse/parse-marking";
 import { RuleNotes } from "@/components/ui/rule-notes";
 import { EstimateBreakdown } from "@/components/ui/estimate-breakdown";
 import { StockLine } from "@/components/ui/stock-line";
 
-function drawnFor(designation: string): DrawnTire | null {
-  const marking = parseMarking(designation);
-  return marking.ok && marking.size && marking.geometry ? drawnTireOf(marking.size, marking.geometry) : null;
-}
+// Fetched the first time a visitor asks for a drawing.
+const CandidateDrawing = dynamic(() => import("./candidate-drawing").then((module) => module.CandidateDrawing));
 
 interface ResultCardProps {
   tire: Candidate | NearMiss;
@@ -32,7 +28,6 @@ interface ResultCardProps {
 export function ResultCard({ tire, original, units, needed, pick }: ResultCardProps) {
   const [drawing, setDrawing] = useState(false);
   const lines = "reasons" in tire ? tire.reasons : tire.failed;
-  const candidate = drawing ? drawnFor(tire.designation) : null;
   const badges = [tire.extraLoad ? "XL" : null, tire.runFlat ? "Run-flat" : null, tire.loadRange ? `Load range ${tire.loadRange}` : null, tire.threePeak ? "3PMSF" : null];
   return (
     <article className="rounded border border-rule bg-sheet p-4" data-sku={tire.sku}>
@@ -85,16 +80,7 @@ export function ResultCard({ tire, original, units, needed, pick }: ResultCardPr
           {drawing ? "Hide the drawing" : "Draw it against the current tire"}
         </button>
       ) : null}
-      {original && candidate ? (
-        <div className="mt-2">
-          <ScaledTireDrawing
-            tires={[original, { ...candidate, id: `${candidate.id}-candidate` }]}
-            units={units}
-            title={`${original.label} and ${candidate.label} drawn to one scale`}
-            description={`The current tire in solid lines, ${candidate.label} dashed; its overall diameter differs by ${formatSignedPercent(tire.diameterDiffPct)}.`}
-          />
-        </div>
-      ) : null}
+      {original && drawing ? <CandidateDrawing original={original} designation={tire.designation} diameterDiffPct={tire.diameterDiffPct} units={units} /> : null}
     </article>
   );
 }

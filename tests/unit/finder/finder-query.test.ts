@@ -2,7 +2,8 @@ import { describe, expect, it } from "vitest";
 import { DEFAULT_PAGE_SIZE } from "@/lib/catalog/query-schema";
 import { readFinderQuery } from "@/lib/finder/finder-query";
 import { activeFilterCount, alternativesSearch, FINDER_PAGE_SIZE, finderSearch, setSizeOf } from "@/lib/finder/finder-state";
-import { placardFor, readOriginalMarking } from "@/lib/finder/original-marking";
+import { readOriginalMarking } from "@/lib/finder/original-marking";
+import { placardFor } from "@/lib/finder/placard-for";
 
 describe("the finder's address", () => {
   it("round-trips its state through the query string", () => {
