@@ -16,6 +16,17 @@ const forbidden = [
   { name: "@/lib/tire", why: "the tire core's index pulls in every reader; import each function from its own module" },
 ];
 
+/** The reader, Side-by-side and finder pages, which stay lighter still. */
+const typingPages = ["reader", "compare", "finder"].map((feature) => path.join(root, "components", feature) + path.sep);
+const onTypingPage = (entry: string) => typingPages.some((folder) => entry.startsWith(folder));
+
+/** What the typing pages' first loads leave out as well; the reader however it is reached (relative imports included). */
+const markingReader = {
+  folder: path.join(root, "lib", "tire", "parse") + path.sep,
+  why: "the server reads the address; the marking reader is fetched at the first edit (components/reader/use-on-demand.ts)",
+};
+const swrWhy = "the finder pages its results with a small fetch of its own (components/finder/use-alternatives.ts)";
+
 function sourceFiles(folder: string): string[] {
   return readdirSync(folder).flatMap((name) => {
     const full = path.join(folder, name);
@@ -62,6 +73,10 @@ function forbiddenChains(entry: string): string[] {
     const file = queue.shift()!;
     if (file !== entry && directive(file) === "server") continue;
     for (const specifier of codeImports(file)) {
+      if (onTypingPage(entry) && (specifier === "swr" || specifier.startsWith("swr/"))) {
+        chains.push(`${path.relative(root, file)} → ${specifier} (${swrWhy})`);
+        continue;
+      }
       const rule = forbidden.find(({ name }) => specifier === name || specifier.startsWith(`${name}/`) && name !== "@/lib/tire");
       if (rule) {
         const chain = [specifier];
@@ -70,6 +85,12 @@ function forbiddenChains(entry: string): string[] {
         continue;
       }
       const next = resolveLocal(file, specifier);
+      if (next && onTypingPage(entry) && next.startsWith(markingReader.folder)) {
+        const chain = [path.relative(root, next)];
+        for (let at: string | null | undefined = file; at; at = cameFrom.get(at)) chain.unshift(path.relative(root, at));
+        chains.push(`${chain.join(" → ")} (${markingReader.why})`);
+        continue;
+      }
       if (next && !cameFrom.has(next)) {
         cameFrom.set(next, file);
         queue.push(next);
@@ -94,7 +115,7 @@ describe("browser code of the public pages stays light", () => {
     expect(publicClientModules).toContain(path.join("components", "shell", "site-nav.tsx"));
   });
 
-  it.each(publicClientModules)("%s reaches no zod, no framer-motion and not the tire core's index", (file) => {
+  it.each(publicClientModules)("%s reaches no zod, no framer-motion, no SWR, not the tire core's index and not the marking reader", (file) => {
     expect(forbiddenChains(path.join(root, file))).toEqual([]);
   });
 });
