@@ -13,7 +13,9 @@ export default defineConfig({
     reporters: process.env.CI ? ["verbose"] : ["default"],
     // Every file opens its own database, so files run side by side on every core (the default leaves one idle).
     maxWorkers: availableParallelism(),
-    testTimeout: 30_000,
-    hookTimeout: 60_000,
+    // A wait, not a measure: a file that migrates a fresh database from nothing takes a few seconds alone
+    // and several times that on a busy 2-core machine; every test still ends as soon as it passes.
+    testTimeout: 90_000,
+    hookTimeout: 120_000,
   },
 });
