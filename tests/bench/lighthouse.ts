@@ -48,7 +48,8 @@ async function startChromium(): Promise<Chromium> {
   const stop = async () => {
     child.kill("SIGTERM");
     await exited;
-    rmSync(profile, { recursive: true, force: true });
+    // Chromium's helpers may still be writing to the profile for a moment after it exits.
+    rmSync(profile, { recursive: true, force: true, maxRetries: 10, retryDelay: 200 });
   };
   try {
     await waitForAnswer(`http://127.0.0.1:${port}/json/version`, 30_000);

@@ -68,7 +68,8 @@ export async function startProductionServer(dataDir: string, env: Record<string,
     await exited;
   };
   try {
-    await waitForAnswer(`${url}/api/health`, 60_000);
+    // A first start migrates and seeds a fresh database, which takes a while on a busy machine.
+    await waitForAnswer(`${url}/api/health`, 120_000);
   } catch (error) {
     await stop();
     throw error;
