@@ -15,7 +15,7 @@ import { signInAsStaff } from "./sign-in";
 
 const CLIENTS = 16;
 const WRITES_BEFORE_KILL = 150;
-const SERVER_ENV = { QUOTE_LIMIT_PER_ADDRESS: "100000", RESEND_BASE_URL: "", RESEND_API_KEY: "" };
+const SERVER_ENV = { QUOTE_LIMIT_PER_ADDRESS: "10000", RESEND_BASE_URL: "", RESEND_API_KEY: "" };
 
 interface Acknowledged {
   skus: Set<string>;

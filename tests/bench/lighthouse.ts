@@ -42,14 +42,15 @@ async function startChromium(): Promise<Chromium> {
   const child: ChildProcess = spawn(
     CHROMIUM,
     ["--headless=new", "--no-sandbox", "--disable-gpu", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync", `--remote-debugging-port=${port}`, `--user-data-dir=${profile}`, "about:blank"],
-    { stdio: "ignore" },
+    // Its own process group: Debian's chromium is a shell script, and the browser it starts must end with it.
+    { stdio: "ignore", detached: true },
   );
   const exited = new Promise<void>((resolve) => child.once("exit", () => resolve()));
   const stop = async () => {
-    child.kill("SIGTERM");
+    process.kill(-child.pid!, "SIGTERM");
     await exited;
-    // Chromium's helpers may still be writing to the profile for a moment after it exits.
-    rmSync(profile, { recursive: true, force: true, maxRetries: 10, retryDelay: 200 });
+    // Chromium's helpers may still be writing to the profile for a moment after the script exits.
+    rmSync(profile, { recursive: true, force: true, maxRetries: 20, retryDelay: 250 });
   };
   try {
     await waitForAnswer(`http://127.0.0.1:${port}/json/version`, 30_000);
