@@ -12,6 +12,7 @@ import path from "node:path";
 import { gzipSync } from "node:zlib";
 import { startBareNextApp } from "./bare-next-app";
 import { ensureProductionBuild, type RunningServer, startProductionServer } from "./production-server";
+import { signInAsStaff } from "./sign-in";
 import { type Bench, type BenchRow, formatTable, isMainModule, ratioRow } from "./report";
 
 const MAX_RATIO = 1.15;
@@ -60,17 +61,10 @@ export async function measureFirstLoad(base: string, page: string): Promise<Firs
 
 /** Signs the demo staff account in and saves a Fit card, for a real /s/{slug} page. */
 async function saveDemoFitCard(base: string): Promise<string> {
-  const headers = { origin: base, "content-type": "application/json", "x-forwarded-for": "198.51.100.77" };
-  const signIn = await fetch(`${base}/api/auth/sign-in/email`, {
-    method: "POST",
-    headers,
-    body: JSON.stringify({ email: "staff@sidewise.test", password: "sidewise-demo" }),
-  });
-  if (!signIn.ok) throw new Error(`the demo staff sign-in answered ${signIn.status}`);
-  const cookie = signIn.headers.getSetCookie().map((line) => line.split(";")[0]).join("; ");
+  const cookie = await signInAsStaff(base);
   const saved = await fetch(`${base}/api/v1/fit-cards`, {
     method: "POST",
-    headers: { ...headers, cookie },
+    headers: { origin: base, "content-type": "application/json", "x-forwarded-for": "10.99.0.1", cookie },
     body: JSON.stringify({ sizes: ["285/50R20"], loadIndex: 119, speedSymbol: "S" }),
   });
   if (saved.status !== 201) throw new Error(`saving a Fit card answered ${saved.status}: ${await saved.text()}`);

@@ -9,7 +9,7 @@
  */
 import { parseMarking } from "../../lib/tire/index";
 import { generateMarkings } from "./decode-markings";
-import { formatTable, isMainModule, median, ratioRow, type Bench, type BenchRow } from "./report";
+import { formatRange, formatTable, isMainModule, median, ratioRow, type Bench, type BenchRow } from "./report";
 
 const GOAL_PER_SECOND = 500_000;
 const MAX_RATIO = 10;
@@ -65,8 +65,6 @@ function measure(quick: boolean): DecodeFigures {
 }
 
 const perSecond = (ns: number): number => 1e9 / ns;
-const range = (values: readonly number[], format: (value: number) => string): string =>
-  `${format(Math.min(...values))}–${format(Math.max(...values))}`;
 /** (max − min) ÷ median, in per cent. */
 const spreadPct = (values: readonly number[]): number => ((Math.max(...values) - Math.min(...values)) / median(values)) * 100;
 
@@ -86,9 +84,9 @@ if (isMainModule(import.meta.url)) {
   const ratios = decodeNs.map((ns, round) => ns / (patternNs[round] as number));
   const whole = (value: number) => Math.round(value).toLocaleString("en-US");
   console.log(`${count.toLocaleString("en-US")} markings, ${decodeNs.length} rounds after ${WARM_UP_ROUNDS} to warm up; CPU time of this process`);
-  console.log(`parseMarking: median ${whole(perSecond(median(decodeNs)))}/s (${median(decodeNs).toFixed(0)} ns a marking); rounds ${range(decodeNs.map(perSecond), whole)}/s, spread ${spreadPct(decodeNs).toFixed(0)} %`);
-  console.log(`size pattern: median ${median(patternNs).toFixed(0)} ns a marking; rounds ${range(patternNs, (ns) => ns.toFixed(0))} ns, spread ${spreadPct(patternNs).toFixed(0)} %`);
-  console.log(`ratio round by round: ${range(ratios, (ratio) => ratio.toFixed(1))} ×, median ${median(ratios).toFixed(1)} ×`);
+  console.log(`parseMarking: median ${whole(perSecond(median(decodeNs)))}/s (${median(decodeNs).toFixed(0)} ns a marking); rounds ${formatRange(decodeNs.map(perSecond), whole)}/s, spread ${spreadPct(decodeNs).toFixed(0)} %`);
+  console.log(`size pattern: median ${median(patternNs).toFixed(0)} ns a marking; rounds ${formatRange(patternNs, (ns) => ns.toFixed(0))} ns, spread ${spreadPct(patternNs).toFixed(0)} %`);
+  console.log(`ratio round by round: ${formatRange(ratios, (ratio) => ratio.toFixed(1))} ×, median ${median(ratios).toFixed(1)} ×`);
   console.log(formatTable(rowsOf(figures)));
   if (sink < 0) console.log(sink);
 }

@@ -26,7 +26,7 @@ import { findAlternatives } from "../../lib/alternatives/find-alternatives";
 import { readOriginal, type Original, type OriginalInput } from "../../lib/alternatives/original";
 import { readFinderShopSettings } from "../../lib/shop/charges";
 import { ensureProductionBuild, startProductionServer } from "./production-server";
-import { formatTable, isMainModule, median, percentile, ratioRow, type Bench, type BenchRow } from "./report";
+import { formatRange, formatTable, isMainModule, median, percentile, ratioRow, type Bench, type BenchRow } from "./report";
 
 const WARM_UP = 50;
 const HTTP_ROUNDS = 3;
@@ -149,7 +149,7 @@ async function benchServer(base: string, sizes: Sizes): Promise<BenchRow[]> {
   }
   const ratios = rounds.map((round) => round.ratio);
   const middle = rounds.find((round) => round.ratio === median(ratios)) ?? rounds[0]!;
-  console.log(`alternatives ÷ health p50: median ${middle.ratio.toFixed(2)}, spread ${Math.min(...ratios).toFixed(2)}–${Math.max(...ratios).toFixed(2)} over ${HTTP_ROUNDS} rounds`);
+  console.log(`alternatives ÷ health p50: median ${middle.ratio.toFixed(2)}, spread ${formatRange(ratios, (ratio) => ratio.toFixed(2))} over ${HTTP_ROUNDS} rounds`);
   return [ratioRow("GET /api/v1/alternatives p50, demo catalog", middle.alternatives, "ms", { name: "/api/health p50", value: middle.health }, 1.5)];
 }
 

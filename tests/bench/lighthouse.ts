@@ -13,7 +13,7 @@ import path from "node:path";
 import lighthouse from "lighthouse";
 import { type BareNextApp, startBareNextApp } from "./bare-next-app";
 import { ensureProductionBuild, freePort, type RunningServer, startProductionServer, waitForAnswer } from "./production-server";
-import { type Bench, type BenchRow, formatTable, isMainModule, median } from "./report";
+import { type Bench, type BenchRow, formatRange, formatTable, isMainModule, median } from "./report";
 
 export const LIGHTHOUSE_PAGES = ["/", "/size/285-50R20", "/compare?sizes=265-70R17,285-70R17", "/replace?size=285-50R20&loadIndex=119&speedSymbol=S"] as const;
 const CATEGORIES = ["performance", "accessibility", "best-practices", "seo"] as const;
@@ -79,10 +79,7 @@ interface PageRuns {
 }
 
 const medianOf = (runs: Audit[], pick: (run: Audit) => number) => median(runs.map(pick));
-const spread = (runs: Audit[], pick: (run: Audit) => number) => {
-  const values = runs.map(pick);
-  return `${Math.min(...values)}–${Math.max(...values)}`;
-};
+const spread = (runs: Audit[], pick: (run: Audit) => number) => formatRange(runs.map(pick));
 
 function rowsFor({ page, runs }: PageRuns, bare: Audit[]): BenchRow[] {
   const performance = medianOf(runs, (run) => run.scores.performance);

@@ -11,7 +11,7 @@ import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { ensureProductionBuild, startProductionServer } from "./production-server";
-import { type Bench, type BenchRow, isMainModule, median, percentile, ratioRow, runIfMain } from "./report";
+import { type Bench, type BenchRow, formatRange, isMainModule, median, percentile, ratioRow, runIfMain } from "./report";
 
 const FLOOR = "/api/health";
 const GOAL_PAGES = ["/size/285-50R20", "/learn", "/learn/load-index"];
@@ -59,10 +59,7 @@ async function measure(url: string, rounds: number, passes: number): Promise<Fig
 
 function rowsOf({ p50s, ratios }: Figures): BenchRow[] {
   const floor = { name: `${FLOOR} p50`, value: median(p50s.get(FLOOR)!) };
-  const spread = (address: string) => {
-    const values = ratios.get(address)!;
-    return `${Math.min(...values).toFixed(2)}–${Math.max(...values).toFixed(2)} ×`;
-  };
+  const spread = (address: string) => `${formatRange(ratios.get(address)!, (ratio) => ratio.toFixed(2))} ×`;
   return [
     ...GOAL_PAGES.map((address) => ({ ...ratioRow(`GET ${address} p50 (ratio spread ${spread(address)})`, median(p50s.get(address)!), "ms", floor, MAX_RATIO) })),
     ...REPORTED_PAGES.map((address) => {

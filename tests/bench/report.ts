@@ -36,6 +36,10 @@ export const percentile = (values: readonly number[], p: number): number => {
   return sorted[Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1))]!;
 };
 
+/** The spread of a few runs as "lowest–highest", each figure written by `format`. */
+export const formatRange = (values: readonly number[], format: (value: number) => string = String): string =>
+  `${format(Math.min(...values))}–${format(Math.max(...values))}`;
+
 /** A row whose goal is a ratio to a floor measured in the same run. */
 export function ratioRow(figure: string, value: number, unit: string, floor: { name: string; value: number }, maxRatio: number): BenchRow {
   const ratio = value / floor.value;
