@@ -1,9 +1,10 @@
 import { LOAD_INDEX_MAX, loadIndexKg, loadIndexLb } from "../load-index";
-import { speedSymbolInfo } from "../speed-symbols";
+import { speedSymbolInfo, type SpeedSymbolInfo } from "../speed-symbols";
+import type { ServiceDescription } from "../types";
 import { addDetail, addSpan, endsChunk, glued, numAt, punctAt, textOf, wordAt, type Reader } from "./reader";
 import type { Token } from "./tokens";
 
-const MAX_DUAL_GAP = 20;
+export const MAX_DUAL_GAP = 20;
 const SPEED_HINT = "Speed symbols are A1–A8, B to H, J to N, P to W, Y and (Y); Z is marked inside the size, as ZR.";
 
 function loadIndexToken(r: Reader, i: number): Token | undefined {
@@ -27,6 +28,19 @@ function speedAt(r: Reader, j: number, inBrackets: boolean) {
     next++;
   }
   return { letters: symbol, bracketed: inBrackets, spaced: !glued(r, j), next };
+}
+
+export function serviceDescription(loadIndex: number, loadIndexDual: number | null, info: SpeedSymbolInfo): ServiceDescription {
+  return {
+    loadIndex,
+    loadIndexDual,
+    speedSymbol: info.symbol,
+    loadKg: loadIndexKg(loadIndex) ?? Number.NaN,
+    loadLb: loadIndexLb(loadIndex) ?? Number.NaN,
+    speedKmh: info.kmh,
+    speedMph: info.mph,
+    speedAbove: info.above,
+  };
 }
 
 /**
@@ -83,16 +97,7 @@ export function readService(r: Reader, i: number): number {
   if (dual && dual.value > single.value) {
     d.warnings.push(`The dual load index ${dual.value} is higher than the single ${single.value}; it is normally lower. Check the marking.`);
   }
-  d.service = {
-    loadIndex: single.value,
-    loadIndexDual: dual ? dual.value : null,
-    speedSymbol: info.symbol,
-    loadKg: loadIndexKg(single.value) ?? Number.NaN,
-    loadLb: loadIndexLb(single.value) ?? Number.NaN,
-    speedKmh: info.kmh,
-    speedMph: info.mph,
-    speedAbove: info.above,
-  };
+  d.service = serviceDescription(single.value, dual ? dual.value : null, info);
   addSpan(r, "service", i, end);
   addDetail(r, "loadIndex", first, first + 1);
   if (dual) addDetail(r, "loadIndexDual", first + 2, first + 3);

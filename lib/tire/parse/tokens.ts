@@ -17,7 +17,7 @@ export interface Token {
 export const isDigit = (c: number): boolean => c >= 48 && c <= 57;
 export const isLetter = (c: number): boolean => (c >= 65 && c <= 90) || (c >= 97 && c <= 122);
 export const isSpace = (c: number): boolean => c <= 32 || c === 0xa0 || c === 0x3000 || (c >= 0x2000 && c <= 0x200b);
-const MULTIPLICATION_SIGN = 0xd7;
+export const MULTIPLICATION_SIGN = 0xd7;
 const isDash = (c: number): boolean => (c >= 0x2010 && c <= 0x2015) || c === 0x2212;
 
 /**
@@ -55,17 +55,17 @@ function digitsText(input: string, start: number, end: number, value: number): s
   return text;
 }
 
-function digitsEnd(input: string, i: number): number {
+export function digitsEnd(input: string, i: number): number {
   while (i < input.length && isDigit(input.charCodeAt(i))) i++;
   return i;
 }
 
-/** Splits text into numbers, ASCII letter runs, single punctuation marks and runs of anything else. */
-export function tokenize(input: string): Token[] {
+/** Splits text from `from` on into numbers, ASCII letter runs, single punctuation marks and runs of anything else. */
+export function tokenize(input: string, from = 0): Token[] {
   const tokens: Token[] = [];
   const n = input.length;
   let gap = false;
-  let i = 0;
+  let i = from;
   while (i < n) {
     const c = input.charCodeAt(i);
     if (isSpace(c)) {

@@ -1,7 +1,7 @@
 import type { TemperatureGrade, TractionGrade } from "../types";
 import { addSpan, endsChunk, glued, numAt, skipPunct, wordAt, type Reader } from "./reader";
 
-const TRACTION: ReadonlySet<string> = new Set<TractionGrade>(["AA", "A", "B", "C"]);
+export const TRACTION: ReadonlySet<string> = new Set<TractionGrade>(["AA", "A", "B", "C"]);
 const TEMPERATURE: ReadonlySet<string> = new Set<TemperatureGrade>(["A", "B", "C"]);
 
 function set<K extends "treadwear" | "traction" | "temperature">(r: Reader, key: K, value: NonNullable<Reader["draft"][K]>, label: string): void {

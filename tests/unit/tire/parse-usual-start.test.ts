@@ -1,0 +1,92 @@
+/**
+ * The shortcut that reads the usual start of a marking (a standard metric size, perhaps a service
+ * description) straight from the characters must read exactly what the token readers read: the same
+ * result, key order included, on every text, whether the shortcut takes it or leaves it.
+ */
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import { parseMarking, parseMarkingByTokens } from "@/lib/tire/parse/parse-marking";
+import { newDraft } from "@/lib/tire/parse/reader";
+import { readUsualStart } from "@/lib/tire/parse/usual-start";
+import { generateMarkings } from "../../bench/decode-markings";
+
+const TODAY = new Date("2026-06-01T00:00:00Z");
+
+const digits = (min: number, max: number) => fc.stringMatching(new RegExp(`^\\d{${min},${max}}$`));
+/** Mostly `usual`, sometimes `odd`. */
+const mostly = <T>(usual: fc.Arbitrary<T>, odd: fc.Arbitrary<T>) => fc.oneof({ arbitrary: usual, weight: 5 }, { arbitrary: odd, weight: 1 });
+const number = (min: number, max: number, width: number) => fc.integer({ min, max }).map((n) => String(n).padStart(width, "0"));
+const spaces = fc.constantFrom("", " ", "  ", "\t", "\u00a0");
+const prefix = mostly(fc.constantFrom("", "P", "p", "LT", "lt", "ST", "T"), fc.constantFrom("Lt", "t", "L", "S", "X", "PP"));
+const construction = mostly(fc.constantFrom("R", "r", "ZR", "zr"), fc.constantFrom("Zr", "RF", "ZRF", "D", "B", "-", "/", " ", "Z", "RR"));
+const rim = mostly(number(8, 30, 2), fc.oneof(digits(1, 3), fc.constantFrom("16.5", "22.5", "20,5", "2O")));
+const size = fc
+  .tuple(spaces, prefix, mostly(number(60, 499, 3), digits(2, 4)), mostly(fc.constant("/"), fc.constantFrom("-", " ", "")), mostly(number(20, 95, 2), digits(1, 3)), construction, rim)
+  .map((pieces) => pieces.join(""));
+/** Speed symbols, letters that are not ones, and the letters that are also construction codes or UTQG grades. */
+const speed = mostly(
+  fc.constantFrom("S", "T", "H", "V", "W", "Y", "R", "D", "B", "C", "Q", "s", "h", "(Y)", "(y)"),
+  fc.constantFrom("A", "A8", "X", "Z", "(V)", "( Y)", "(Y", ""),
+);
+const loadIndex = mostly(number(60, 130, 1), fc.oneof(digits(1, 4), number(260, 300, 1)));
+const dualIndex = (single: string) => mostly(fc.integer({ min: 0, max: 4 }).map((below) => String(Number(single) - below)), loadIndex);
+const service = fc
+  .tuple(mostly(fc.constantFrom(" ", "  "), fc.constant("")), loadIndex, fc.boolean(), mostly(fc.constant(""), fc.constant(" ")), speed)
+  .chain(([gap, single, dual, speedGap, symbol]) =>
+    (dual ? dualIndex(single).map((d) => `/${d}`) : fc.constant("")).map((slashDual) => `${gap}${single}${slashDual}${speedGap}${symbol}`),
+  );
+/** What may follow, chosen to reach the readers whose reading depends on the text before them. */
+const tail = fc
+  .array(
+    fc.tuple(
+      mostly(fc.constant(" "), fc.constant("")),
+      fc.constantFrom(
+        "XL", "RF", "M+S", "M", "S", "3PMSF", "10PR", "10", "17", "16.5", "B", "C", "A", "E", "D", "LT", "LTE", "lt", "×", "x", "X",
+        "LOAD RANGE E", "DOT U2LL LMLR 3208", "500 A A", "460AA A", "TREADWEAR 500", "(", ")", "/", "-", ",", ".", "日本", "R", "ZR", "20", "116T", "99(Y)",
+      ),
+    ),
+    { maxLength: 6 },
+  )
+  .map((pieces) => pieces.map(([gap, piece]) => gap + piece).join(""));
+const usualStart = fc.tuple(size, fc.option(service, { freq: 4 }), tail).map(([s, sd, t]) => `${s}${sd ?? ""}${t}`);
+
+function readsAlike(text: string): void {
+  expect(JSON.stringify(parseMarking(text))).toBe(JSON.stringify(parseMarkingByTokens(text)));
+  expect(JSON.stringify(parseMarking(text, { today: TODAY }))).toBe(JSON.stringify(parseMarkingByTokens(text, { today: TODAY })));
+}
+
+describe("the shortcut for the usual start reads what the token readers read", () => {
+  it("on generated sizes with and without service descriptions and what may follow them", () => {
+    fc.assert(fc.property(usualStart, readsAlike), { numRuns: 20_000 });
+  });
+
+  it("on the bench's mixed markings", () => {
+    for (const text of generateMarkings(20_000, 11)) readsAlike(text);
+  });
+
+  it("takes a good share of the generated texts, so the check above is not empty", () => {
+    const texts = fc.sample(usualStart, { numRuns: 4_000, seed: 1 });
+    const taken = texts.filter((text) => readUsualStart(text, newDraft()) >= 0);
+    const withService = texts.filter((text) => {
+      const draft = newDraft();
+      return readUsualStart(text, draft) >= 0 && draft.service !== null;
+    });
+    expect(taken.length).toBeGreaterThan(texts.length / 4);
+    expect(withService.length).toBeGreaterThan(texts.length / 10);
+  });
+
+  it.each([
+    ["285/50R20 119S", "285/50R20 119S".length],
+    ["LT265/70R17 121/118S M+S", "LT265/70R17 121/118S".length],
+    ["235/35ZR19 99(Y)", "235/35ZR19 99(Y)".length],
+    ["285/50R20 116 T", "285/50R20".length],
+    ["285/50R20 100B C", "285/50R20".length],
+    ["285/50R20 116R 17", "285/50R20".length],
+    ["LT265/75R16 E", -1],
+    ["285/50R20C", -1],
+    ["285 50 20", -1],
+  ])("%s: the token readers read on from character %i (-1: from the start)", (text, restFrom) => {
+    expect(readUsualStart(text, newDraft())).toBe(restFrom);
+    readsAlike(text);
+  });
+});
