@@ -123,9 +123,9 @@ export function textOf(r: Reader, from: number, to: number): string {
 }
 
 /** Records text that looked like a part but was not one: a warning, and the error should nothing else be read. */
-export function addMiss(r: Reader, message: string, suggestion: string): void {
-  r.draft.misses.push({ message, suggestion });
-  r.draft.warnings.push(`${message} ${suggestion}`);
+export function addMiss(d: Draft, message: string, suggestion: string): void {
+  d.misses.push({ message, suggestion });
+  d.warnings.push(`${message} ${suggestion}`);
 }
 
 /** Records that tokens [from, to) form one piece of a size or service description. */

@@ -52,7 +52,7 @@ export function readSize(r: Reader, i: number): number {
 export function diagnoseSize(r: Reader, i: number): number {
   const m = matchSize(r, i);
   if (!m?.problem) return 0;
-  addMiss(r, `"${textOf(r, i, m.end)}" is not a complete size: ${m.problem.message}.`, m.problem.suggestion);
+  addMiss(r.draft, `"${textOf(r, i, m.end)}" is not a complete size: ${m.problem.message}.`, m.problem.suggestion);
   addSpan(r, "unread", i, m.end);
   return m.end;
 }
@@ -63,7 +63,7 @@ export function diagnoseBareRim(r: Reader, i: number): number {
   const rim = numAt(r, i + 1);
   if (!CONSTRUCTION_CODES.has(code ?? "") || !rim?.plain || !endsChunk(r, i + 2)) return 0;
   addMiss(
-    r,
+    r.draft,
     `"${textOf(r, i, i + 2)}" is not a complete size: the section width and aspect ratio are missing.`,
     `Type the whole size as marked, e.g. 205/55${code}${rim.text}.`,
   );

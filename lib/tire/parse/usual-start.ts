@@ -1,6 +1,7 @@
 import { LOAD_INDEX_MAX } from "../load-index";
 import { speedSymbolInfo } from "../speed-symbols";
 import type { SizePrefix } from "../types";
+import { dotKeywordAt, readDotChunk } from "./dot";
 import type { Draft } from "./reader";
 import { MAX_DUAL_GAP, serviceDescription } from "./service";
 import { CONSTRUCTION_CODES, inRange, makeSize, RADIAL, SIZE_BOUNDS, type ConstructionCode } from "./size-parts";
@@ -77,14 +78,8 @@ function readService(input: string, d: Draft, at: number): number {
   return end;
 }
 
-/**
- * Reads the start most markings share straight from the characters: a metric size in the standard
- * form ("285/50R20", "LT265/70ZR17"), perhaps followed by a service description ("119S", "121/118S",
- * "99(Y)"). It records exactly what the size and service readers would and returns where the rest of
- * the text starts, for the token readers; -1 (nothing recorded) when the text starts otherwise.
- */
-export function readUsualStart(input: string, d: Draft): number {
-  const start = spacesEnd(input, 0);
+/** A standard metric size at `start`, recorded as the size reader would; the index after it, or -1. */
+function readSize(input: string, d: Draft, start: number): number {
   const first = upper(codeAt(input, start));
   const twoLetters = upper(codeAt(input, start + 1)) === T && (first === L || first === S);
   const prefix: SizePrefix | null = first === P ? "P" : first === T ? "T" : twoLetters ? (first === L ? "LT" : "ST") : null;
@@ -94,7 +89,7 @@ export function readUsualStart(input: string, d: Draft): number {
   const rimAt = aspectAt + (zr ? 4 : 3);
   const sizeEnd = rimAt + 2;
   const shape =
-    digitsEnd(input, widthAt) === widthAt + 3 && codeAt(input, widthAt + 3) === SLASH && digitsEnd(input, aspectAt) === aspectAt + 2 &&
+    codeAt(input, widthAt + 3) === SLASH && digitsEnd(input, widthAt) === widthAt + 3 && digitsEnd(input, aspectAt) === aspectAt + 2 &&
     upper(codeAt(input, rimAt - 1)) === R && digitsEnd(input, rimAt) === sizeEnd && (sizeEnd === input.length || isSpace(input.charCodeAt(sizeEnd)));
   if (!shape) return -1;
   const width = valueOf(input, widthAt, widthAt + 3);
@@ -107,11 +102,26 @@ export function readUsualStart(input: string, d: Draft): number {
   d.size = makeSize("metric", prefix, width, aspect, zr ? ZR : RADIAL, rim, null);
   d.spans.push({ part: "size", start, end: sizeEnd });
   if (prefix !== null) d.details.push({ detail: "prefix", start, end: widthAt });
-  d.details.push(
-    { detail: "sectionWidth", start: widthAt, end: widthAt + 3 },
-    { detail: "aspectRatio", start: aspectAt, end: aspectAt + 2 },
-    { detail: "construction", start: aspectAt + 2, end: rimAt },
-    { detail: "rimDiameter", start: rimAt, end: sizeEnd },
-  );
-  return (restAt > sizeEnd && readService(input, d, restAt)) || sizeEnd;
+  // One push each: a push of several items at once takes a slow path in V8.
+  d.details.push({ detail: "sectionWidth", start: widthAt, end: widthAt + 3 });
+  d.details.push({ detail: "aspectRatio", start: aspectAt, end: aspectAt + 2 });
+  d.details.push({ detail: "construction", start: aspectAt + 2, end: rimAt });
+  d.details.push({ detail: "rimDiameter", start: rimAt, end: sizeEnd });
+  return sizeEnd;
+}
+
+/**
+ * Reads the start most markings share straight from the characters: a metric size in the standard
+ * form ("285/50R20", "LT265/70ZR17"), perhaps followed by a service description ("119S", "121/118S",
+ * "99(Y)"), and a DOT code there or at the start. It records exactly what the token readers would and
+ * returns where the rest of the text starts, for them; -1 (nothing recorded) when the text starts otherwise.
+ */
+export function readUsualStart(input: string, d: Draft): number {
+  const start = spacesEnd(input, 0);
+  const sizeEnd = readSize(input, d, start);
+  const serviceAt = sizeEnd < 0 ? sizeEnd : spacesEnd(input, sizeEnd);
+  const end = (serviceAt > sizeEnd && readService(input, d, serviceAt)) || sizeEnd;
+  const next = end < 0 ? start : spacesEnd(input, end);
+  if (next === end || !dotKeywordAt(input, next)) return end;
+  return readDotChunk(input, d, next) || end;
 }

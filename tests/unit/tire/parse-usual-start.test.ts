@@ -1,12 +1,12 @@
 /**
  * The shortcut that reads the usual start of a marking (a standard metric size, perhaps a service
- * description) straight from the characters must read exactly what the token readers read: the same
+ * description, a DOT code) straight from the characters must read exactly what the token readers read: the same
  * result, key order included, on every text, whether the shortcut takes it or leaves it.
  */
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { parseMarking, parseMarkingByTokens } from "@/lib/tire/parse/parse-marking";
-import { newDraft } from "@/lib/tire/parse/reader";
+import { newDraft, type Draft } from "@/lib/tire/parse/reader";
 import { readUsualStart } from "@/lib/tire/parse/usual-start";
 import { generateMarkings } from "../../bench/decode-markings";
 
@@ -42,13 +42,24 @@ const tail = fc
       mostly(fc.constant(" "), fc.constant("")),
       fc.constantFrom(
         "XL", "RF", "M+S", "M", "S", "3PMSF", "10PR", "10", "17", "16.5", "B", "C", "A", "E", "D", "LT", "LTE", "lt", "×", "x", "X",
-        "LOAD RANGE E", "DOT U2LL LMLR 3208", "500 A A", "460AA A", "TREADWEAR 500", "(", ")", "/", "-", ",", ".", "日本", "R", "ZR", "20", "116T", "99(Y)",
+        "LOAD RANGE E", "DOT U2LL LMLR 3208", "DOT 3208", "dot XX 1611", "TIN 5508", "500 A A", "460AA A", "TREADWEAR 500", "(", ")", "/", "-", ",", ".", "日本", "R", "ZR", "20", "116T", "99(Y)",
       ),
     ),
     { maxLength: 6 },
   )
   .map((pieces) => pieces.map(([gap, piece]) => gap + piece).join(""));
-const usualStart = fc.tuple(size, fc.option(service, { freq: 4 }), tail).map(([s, sd, t]) => `${s}${sd ?? ""}${t}`);
+/** DOT codes that read, and some that do not: a bad week, no date, a date that runs on, a dotless ı. */
+const dotCode = fc
+  .tuple(
+    spaces,
+    mostly(fc.constantFrom("DOT ", "dot ", "DOT", "Dot: ", "TIN ", "DOT# "), fc.constantFrom("TINA ", "tın ", "DO T ", "DOTS ")),
+    mostly(fc.constantFrom("U2LL LMLR ", "4BA 1KL2 3M ", "XX ", "ZZ ", "", "U2LLLMLR"), fc.constantFrom("GIOQ ", "1234567890123 ", "AB-CD ")),
+    mostly(number(1, 53, 2).chain((week) => number(0, 25, 2).map((year) => week + year)), fc.constantFrom("5508", "0008", "328", "3208.5", "3208,", "32", "")),
+  )
+  .map((pieces) => pieces.join(""));
+const usualStart = fc
+  .tuple(fc.oneof({ arbitrary: fc.tuple(size, fc.option(service, { freq: 4 })).map(([s, sd]) => s + (sd ?? "")), weight: 3 }, dotCode), tail)
+  .map(([start, rest]) => start + rest);
 
 function readsAlike(text: string): void {
   expect(JSON.stringify(parseMarking(text))).toBe(JSON.stringify(parseMarkingByTokens(text)));
@@ -65,14 +76,14 @@ describe("the shortcut for the usual start reads what the token readers read", (
   });
 
   it("takes a good share of the generated texts, so the check above is not empty", () => {
-    const texts = fc.sample(usualStart, { numRuns: 4_000, seed: 1 });
-    const taken = texts.filter((text) => readUsualStart(text, newDraft()) >= 0);
-    const withService = texts.filter((text) => {
+    const drafts = fc.sample(usualStart, { numRuns: 4_000, seed: 1 }).map((text) => {
       const draft = newDraft();
-      return readUsualStart(text, draft) >= 0 && draft.service !== null;
+      return readUsualStart(text, draft) >= 0 ? draft : null;
     });
-    expect(taken.length).toBeGreaterThan(texts.length / 4);
-    expect(withService.length).toBeGreaterThan(texts.length / 10);
+    const share = (read: (draft: Draft) => boolean) => drafts.filter((draft) => draft !== null && read(draft)).length / drafts.length;
+    expect(share(() => true)).toBeGreaterThan(0.25);
+    expect(share((draft) => draft.service !== null)).toBeGreaterThan(0.05);
+    expect(share((draft) => draft.dot !== null)).toBeGreaterThan(0.05);
   });
 
   it.each([
@@ -85,6 +96,9 @@ describe("the shortcut for the usual start reads what the token readers read", (
     ["LT265/75R16 E", -1],
     ["285/50R20C", -1],
     ["285 50 20", -1],
+    ["DOT U2LL LMLR 3208 XL", "DOT U2LL LMLR 3208".length],
+    ["285/50R20 116T DOT 3208", "285/50R20 116T DOT 3208".length],
+    ["DOT 3208.5", -1],
   ])("%s: the token readers read on from character %i (-1: from the start)", (text, restFrom) => {
     expect(readUsualStart(text, newDraft())).toBe(restFrom);
     readsAlike(text);
