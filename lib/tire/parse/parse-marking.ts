@@ -3,7 +3,7 @@ import { readDot } from "./dot";
 import { finish } from "./finish";
 import { readLoadRange, readLoadType, readLoneLoadRange, readMudAndSnow, readPlyRating, readRunFlat, readThreePeak } from "./marks";
 import { readMaxRating, readPressureThenLabel } from "./max-ratings";
-import { addSpan, newDraft, textOf, type PartReader, type Reader } from "./reader";
+import { addSpan, newDraft, textOf, type Draft, type PartReader, type Reader } from "./reader";
 import { readService } from "./service";
 import { diagnoseBareRim, diagnoseSize, readSize } from "./size";
 import { tokenize } from "./tokens";
@@ -40,11 +40,9 @@ function reportUnread(r: Reader, from: number, to: number): void {
   r.draft.warnings.push(`Not read: "${textOf(r, from, to)}".`);
 }
 
-function readMarking(text: string, options: ParseOptions, usualStart: boolean): ParseResult {
-  const input = typeof text === "string" ? text : "";
-  const draft = newDraft();
-  const restFrom = usualStart ? readUsualStart(input, draft) : -1;
-  const r: Reader = { input, tokens: tokenize(input, Math.max(restFrom, 0)), draft };
+/** Reads the text from character `from` on, token by token, into what `draft` holds already. */
+function readTokens(input: string, draft: Draft, from: number, options: ParseOptions): ParseResult {
+  const r: Reader = { input, tokens: tokenize(input, from), draft };
   const n = r.tokens.length;
   // Tokens no reader took, gathered into runs so that a warning names "ACME Trailmaster" once.
   let unreadFrom = -1;
@@ -74,10 +72,12 @@ function readMarking(text: string, options: ParseOptions, usualStart: boolean): 
  * Never throws. Pass `today` to have the DOT code's age worked out.
  */
 export function parseMarking(text: string, options: ParseOptions = {}): ParseResult {
-  return readMarking(text, options, true);
+  const input = typeof text === "string" ? text : "";
+  const draft = newDraft();
+  return readTokens(input, draft, Math.max(readUsualStart(input, draft), 0), options);
 }
 
 /** The same reading token by token, without the shortcut for the usual start: tests hold the two equal. */
 export function parseMarkingByTokens(text: string, options: ParseOptions = {}): ParseResult {
-  return readMarking(text, options, false);
+  return readTokens(typeof text === "string" ? text : "", newDraft(), 0, options);
 }

@@ -1,7 +1,7 @@
 /**
- * The shortcut that reads the usual start of a marking (a standard metric size, perhaps a service
- * description, a DOT code) straight from the characters must read exactly what the token readers read: the same
- * result, key order included, on every text, whether the shortcut takes it or leaves it.
+ * The shortcut that reads the usual start of a marking (a standard metric or flotation size, perhaps
+ * a service description, a DOT code) straight from the characters must read exactly what the token
+ * readers read: the same result, key order included, on every text, whether it takes the text or not.
  */
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
@@ -22,6 +22,20 @@ const construction = mostly(fc.constantFrom("R", "r", "ZR", "zr"), fc.constantFr
 const rim = mostly(number(8, 30, 2), fc.oneof(digits(1, 3), fc.constantFrom("16.5", "22.5", "20,5", "2O")));
 const size = fc
   .tuple(spaces, prefix, mostly(number(60, 499, 3), digits(2, 4)), mostly(fc.constant("/"), fc.constantFrom("-", " ", "")), mostly(number(20, 95, 2), digits(1, 3)), construction, rim)
+  .map((pieces) => pieces.join(""));
+const flotationSize = fc
+  .tuple(
+    spaces,
+    mostly(number(28, 37, 2), digits(1, 3)),
+    mostly(fc.constantFrom("x", "X", "×"), fc.constantFrom("*", " x", "")),
+    mostly(
+      fc.oneof(fc.constantFrom("10.50", "11.50", "12.50", "9.5", "13"), fc.integer({ min: 500, max: 2500 }).map((hundredths) => (hundredths / 100).toFixed(hundredths % 3))),
+      fc.constantFrom("12.505", "4.50", "26.00", "12.", "1,250"),
+    ),
+    mostly(fc.constantFrom("R", "r"), fc.constantFrom("ZR", "-", "D", " R")),
+    mostly(number(15, 22, 2), fc.constantFrom("16.5", "08", "35", "7")),
+    mostly(fc.constantFrom("LT", "lt", ""), fc.constantFrom("LTE", "C", "E", "L", "LTX")),
+  )
   .map((pieces) => pieces.join(""));
 /** Speed symbols, letters that are not ones, and the letters that are also construction codes or UTQG grades. */
 const speed = mostly(
@@ -58,7 +72,7 @@ const dotCode = fc
   )
   .map((pieces) => pieces.join(""));
 const usualStart = fc
-  .tuple(fc.oneof({ arbitrary: fc.tuple(size, fc.option(service, { freq: 4 })).map(([s, sd]) => s + (sd ?? "")), weight: 3 }, dotCode), tail)
+  .tuple(fc.oneof({ arbitrary: fc.tuple(fc.oneof({ arbitrary: size, weight: 3 }, flotationSize), fc.option(service, { freq: 4 })).map(([s, sd]) => s + (sd ?? "")), weight: 3 }, dotCode), tail)
   .map(([start, rest]) => start + rest);
 
 function readsAlike(text: string): void {
@@ -84,6 +98,7 @@ describe("the shortcut for the usual start reads what the token readers read", (
     expect(share(() => true)).toBeGreaterThan(0.25);
     expect(share((draft) => draft.service !== null)).toBeGreaterThan(0.05);
     expect(share((draft) => draft.dot !== null)).toBeGreaterThan(0.05);
+    expect(share((draft) => draft.size?.kind === "flotation")).toBeGreaterThan(0.05);
   });
 
   it.each([
@@ -99,6 +114,8 @@ describe("the shortcut for the usual start reads what the token readers read", (
     ["DOT U2LL LMLR 3208 XL", "DOT U2LL LMLR 3208".length],
     ["285/50R20 116T DOT 3208", "285/50R20 116T DOT 3208".length],
     ["DOT 3208.5", -1],
+    ["33x12.50R15LT 108Q E", "33x12.50R15LT 108Q".length],
+    ["33x12.50R15 E", -1],
   ])("%s: the token readers read on from character %i (-1: from the start)", (text, restFrom) => {
     expect(readUsualStart(text, newDraft())).toBe(restFrom);
     readsAlike(text);
