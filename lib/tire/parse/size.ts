@@ -1,5 +1,5 @@
 import { formatSize } from "../format";
-import type { DetailKind } from "../types";
+import type { DetailKind, TireSize } from "../types";
 import { setLoadRange } from "./marks";
 import { addDetail, addMiss, addSpan, endsChunk, numAt, textOf, wordAt, type Reader } from "./reader";
 import { matchSize } from "./size-match";
@@ -30,6 +30,11 @@ function addSizeDetails(r: Reader, at: SizeTokens, flotation: boolean): void {
   if (at.suffix >= 0) addDetail(r, wordAt(r, at.suffix) === "C" ? "commercial" : "prefix", at.suffix, at.suffix + 1);
 }
 
+/** How a size typed in a forgiving form was read: `Read "28550R20" as 285/50R20.` */
+export function readAsNote(text: string, size: TireSize, how: string): string {
+  return `Read "${text}" as ${formatSize(size)}${how}.`;
+}
+
 /** Reads a tire size; the first size found is the one described, later ones are reported. */
 export function readSize(r: Reader, i: number): number {
   const m = matchSize(r, i);
@@ -41,7 +46,7 @@ export function readSize(r: Reader, i: number): number {
     return m.end;
   }
   d.size = m.size;
-  if (m.assumed !== null) d.assumptions.push(`Read "${textOf(r, i, m.sizeEnd)}" as ${formatSize(m.size)}${m.assumed}.`);
+  if (m.assumed !== null) d.assumptions.push(readAsNote(textOf(r, i, m.sizeEnd), m.size, m.assumed));
   addSpan(r, "size", i, m.sizeEnd);
   addSizeDetails(r, m.at, m.size.kind === "flotation");
   if (m.loadRangeLetter !== null) setLoadRange(r, m.loadRangeLetter, m.sizeEnd, m.end);

@@ -1,6 +1,6 @@
 /**
- * The shortcut that reads the usual start of a marking (a standard metric or flotation size, perhaps
- * a service description, a DOT code) straight from the characters must read exactly what the token
+ * The shortcut that reads the usual start of a marking (a metric size, standard or forgiving, or a
+ * flotation size, perhaps a service description, a DOT code) straight from the characters must read exactly what the token
  * readers read: the same result, key order included, on every text, whether it takes the text or not.
  */
 import fc from "fast-check";
@@ -19,10 +19,17 @@ const number = (min: number, max: number, width: number) => fc.integer({ min, ma
 const spaces = fc.constantFrom("", " ", "  ", "\t", "\u00a0");
 const prefix = mostly(fc.constantFrom("", "P", "p", "LT", "lt", "ST", "T"), fc.constantFrom("Lt", "t", "L", "S", "X", "PP"));
 const construction = mostly(fc.constantFrom("R", "r", "ZR", "zr"), fc.constantFrom("Zr", "RF", "ZRF", "D", "B", "-", "/", " ", "Z", "RR"));
+/** The separators after the width and the aspect ratio: the standard form, the forgiving ones, and some that are neither. */
+const separators = fc.oneof(
+  { arbitrary: fc.tuple(fc.constant("/"), construction), weight: 4 },
+  fc.tuple(fc.constantFrom("-", ""), construction),
+  fc.tuple(fc.constantFrom("/", "-", ""), fc.constantFrom("/", "-", " ")),
+  fc.tuple(fc.constantFrom(" ", "  ", "\t"), fc.constantFrom(" ", "  ", "\u00a0", "R", "/")),
+);
 const rim = mostly(number(8, 30, 2), fc.oneof(digits(1, 3), fc.constantFrom("16.5", "22.5", "20,5", "2O")));
 const size = fc
-  .tuple(spaces, prefix, mostly(number(60, 499, 3), digits(2, 4)), mostly(fc.constant("/"), fc.constantFrom("-", " ", "")), mostly(number(20, 95, 2), digits(1, 3)), construction, rim)
-  .map((pieces) => pieces.join(""));
+  .tuple(spaces, prefix, mostly(number(60, 499, 3), digits(2, 4)), separators, mostly(number(20, 95, 2), digits(1, 3)), rim)
+  .map(([gap, letters, width, [afterWidth, afterAspect], aspect, rimDigits]) => gap + letters + width + afterWidth + aspect + afterAspect + rimDigits);
 const flotationSize = fc
   .tuple(
     spaces,
@@ -99,6 +106,7 @@ describe("the shortcut for the usual start reads what the token readers read", (
     expect(share((draft) => draft.service !== null)).toBeGreaterThan(0.05);
     expect(share((draft) => draft.dot !== null)).toBeGreaterThan(0.05);
     expect(share((draft) => draft.size?.kind === "flotation")).toBeGreaterThan(0.05);
+    expect(share((draft) => draft.assumptions.length > 0)).toBeGreaterThan(0.05);
   });
 
   it.each([
@@ -110,7 +118,9 @@ describe("the shortcut for the usual start reads what the token readers read", (
     ["285/50R20 116R 17", "285/50R20".length],
     ["LT265/75R16 E", -1],
     ["285/50R20C", -1],
-    ["285 50 20", -1],
+    ["285 50 20", "285 50 20".length],
+    ["28550R20 116T", "28550R20 116T".length],
+    ["285/50-20", -1],
     ["DOT U2LL LMLR 3208 XL", "DOT U2LL LMLR 3208".length],
     ["285/50R20 116T DOT 3208", "285/50R20 116T DOT 3208".length],
     ["DOT 3208.5", -1],
