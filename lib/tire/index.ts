@@ -26,3 +26,4 @@ export * from "./rules/words";
 export { rimTwin, rimTwinCaution } from "./rim-twins";
 export * from "./messages";
 export * from "./stock-words";
+export * from "./wear-match";
