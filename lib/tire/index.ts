@@ -27,3 +27,4 @@ export { rimTwin, rimTwinCaution } from "./rim-twins";
 export * from "./messages";
 export * from "./stock-words";
 export * from "./wear-match";
+export * from "./wear-match-words";

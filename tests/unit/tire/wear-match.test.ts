@@ -1,7 +1,7 @@
 import convert from "convert-units";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { depthLimit32, MM_PER_32ND, shaveDepthToShow, wearMatch, type WearLimit, wornTire } from "@/lib/tire";
+import { depthLimit32, formatDepth32, MM_PER_32ND, shaveDepthToShow, wearMatch, wearVerdictSentence, type WearLimit, wornTire } from "@/lib/tire";
 
 // 225/65R17: 17 × 25.4 + 2 × 225 × 0.65 = 431.8 + 292.5 = 724.3 mm, the ISO 4000-1 nominal overall diameter.
 const D_225_65R17 = 724.3;
@@ -109,5 +109,27 @@ describe("properties of the verdict", () => {
       }),
       { numRuns: 3000 },
     );
+  });
+});
+
+describe("the verdict in words", () => {
+  const sentence = (newDepth32: number, remaining32: number[], limit: WearLimit) =>
+    wearVerdictSentence(wearMatch({ newDiameterMm: D_225_65R17, newDepth32, remaining32, limit }), limit);
+
+  it("says each verdict with the numbers that decided it", () => {
+    expect(sentence(10, [9, 9.5, 10], depth(2))).toBe("The new tire can go on as it is: at 10/32 in it is within 2/32 in of tread depth of every tire that stays (9/32 in to 10/32 in).");
+    expect(sentence(10, [6, 6, 7], depth(2))).toBe(
+      "Shave the new tire to 8/32 in before it goes on: at 10/32 in it is 4/32 in deeper than the shallowest tire that stays (6/32 in), and the limit is 2/32 in of tread depth.",
+    );
+    expect(sentence(10, [5, 8], depth(2))).toMatch(/^Replace the set: the tires that stay already differ by 3\/32 in \(5\/32 in to 8\/32 in\)/);
+    expect(sentence(8, [11, 11.5], depth(2))).toMatch(/^Replace the set: the new tire's 8\/32 in is more than 2\/32 in of tread depth below the deepest tire that stays \(11.5\/32 in\), and shaving cannot add tread\.$/);
+  });
+
+  it("names a circumference limit and the depth it allows", () => {
+    expect(sentence(10, [6, 6, 6], circumference(10))).toContain("the limit is 10 mm of rolling circumference (about 2.01/32 in of tread depth)");
+  });
+
+  it("gives a depth in 32nds and millimetres", () => {
+    expect(formatDepth32(6.5)).toBe("6.5/32 in (5.2 mm)");
   });
 });

@@ -1,0 +1,36 @@
+import { formatOneDecimal } from "./display";
+import { MM_PER_32ND, shaveDepthToShow, type WearLimit, type WearMatch } from "./wear-match";
+
+/** Up to two decimals and no trailing zeros: 2, 6.5, 2.01. */
+const upToHundredths = (value: number): string => String(Math.round(value * 100) / 100);
+
+/** A depth as a fitter's gauge reads it: "6.5/32 in (5.2 mm)". */
+export function formatDepth32(depth32: number): string {
+  return `${upToHundredths(depth32)}/32 in (${formatOneDecimal(depth32 * MM_PER_32ND)} mm)`;
+}
+
+/** The limit in words: "2/32 in of tread depth" or "10 mm of rolling circumference (about 2/32 in of depth)". */
+export function formatWearLimit(limit: WearLimit, limit32: number): string {
+  if (limit.kind === "depth32") return `${limit.value}/32 in of tread depth`;
+  return `${upToHundredths(limit.value)} mm of rolling circumference (about ${upToHundredths(limit32)}/32 in of tread depth)`;
+}
+
+const depth = (depth32: number) => `${upToHundredths(depth32)}/32 in`;
+
+/** The verdict in one sentence, with the numbers that decided it. */
+export function wearVerdictSentence(match: WearMatch, limit: WearLimit): string {
+  const limitWords = formatWearLimit(limit, match.limit32);
+  const depths = match.remaining.map((tire) => tire.depth32);
+  const [shallowest, deepest] = [Math.min(...depths), Math.max(...depths)];
+  const newDepth = match.newTire.depth32;
+  switch (match.verdict) {
+    case "fitsAsIs":
+      return `The new tire can go on as it is: at ${depth(newDepth)} it is within ${limitWords} of every tire that stays (${depth(shallowest)} to ${depth(deepest)}).`;
+    case "shave":
+      return `Shave the new tire to ${depth(shaveDepthToShow(match)!)} before it goes on: at ${depth(newDepth)} it is ${depth(newDepth - shallowest)} deeper than the shallowest tire that stays (${depth(shallowest)}), and the limit is ${limitWords}.`;
+    case "replaceSet":
+      return match.replaceReason === "spread"
+        ? `Replace the set: the tires that stay already differ by ${depth(match.spread32)} (${depth(shallowest)} to ${depth(deepest)}), more than the limit of ${limitWords}, and a new tire cannot bring them closer.`
+        : `Replace the set: the new tire's ${depth(newDepth)} is more than ${limitWords} below the deepest tire that stays (${depth(deepest)}), and shaving cannot add tread.`;
+  }
+}
