@@ -8,7 +8,7 @@ export * from "./service-type";
 export * from "./decode-response";
 export { parseMarking } from "./parse/parse-marking";
 export { SIZE_BOUNDS } from "./parse/size-parts";
-export { measurableSizeFromSlug, noDiameterMessage, sizeFromSlug } from "./slug";
+export { measurableSizeFromSlug, noDiameterMessage, readMeasurableSize, sizeFromSlug } from "./slug";
 export type * from "./types";
 export * from "./display";
 export * from "./describe";

@@ -1,4 +1,5 @@
 import { formatOneDecimal } from "./display";
+import { mmToIn } from "./units";
 import { MM_PER_32ND, shaveDepthToShow, type WearLimit, type WearMatch } from "./wear-match";
 
 /** Up to two decimals and no trailing zeros: 2, 6.5, 2.01. */
@@ -7,6 +8,11 @@ const upToHundredths = (value: number): string => String(Math.round(value * 100)
 /** A depth as a fitter's gauge reads it: "6.5/32 in (5.2 mm)". */
 export function formatDepth32(depth32: number): string {
   return `${upToHundredths(depth32)}/32 in (${formatOneDecimal(depth32 * MM_PER_32ND)} mm)`;
+}
+
+/** A worn tire's diameter or circumference, fine enough to show a few millimetres of wear: 717.9 mm (28.27 in). */
+export function formatWornLength(mm: number): string {
+  return `${formatOneDecimal(mm)} mm (${mmToIn(mm).toFixed(2)} in)`;
 }
 
 /** The limit in words: "2/32 in of tread depth" or "10 mm of rolling circumference (about 2/32 in of depth)". */

@@ -3,14 +3,13 @@ import { schemaOf } from "@/lib/api/schema-match";
 import { optional } from "@/lib/api/query-fields";
 import {
   DEFAULT_WEAR_LIMIT_32,
-  hasNominalDiameter,
-  noDiameterMessage,
-  notASizeMessage,
   SIZE_REQUIRED,
-  sizeFromSlug,
+  readMeasurableSize,
   sizeGeometry,
   sizeToSlug,
   wearMatch,
+  type MeasurableSize,
+  type TireOnVehicle,
   type WearLimit,
   type WearMatch,
 } from "@/lib/tire";
@@ -53,7 +52,7 @@ export const wearMatchQuerySchema = z
   })
   .refine((query) => query.limit32 === undefined || query.limitCircumferenceMm === undefined, {
     path: ["limitCircumferenceMm"],
-    message: "give limit32 or limitCircumferenceMm, not both: the vehicle maker states one of them",
+    message: "give a tread-depth limit or a circumference limit, not both: the vehicle maker states one of them",
   });
 
 export type WearMatchQuery = z.infer<typeof wearMatchQuerySchema>;
@@ -93,32 +92,37 @@ export const wearMatchAnswerSchema = schemaOf<WearMatchBody>()(
   }),
 );
 
-export type WearMatchAnswer = { ok: true; body: WearMatchBody } | { ok: false; code: "unreadable"; message: string; field: string };
+export type WearMatchEvaluation =
+  | { ok: true; size: MeasurableSize; limit: WearLimit; limitFromShop: boolean; match: WearMatch }
+  | { ok: false; code: "unreadable"; message: string; field: "size" };
 
-/** The answer to a valid query; `shopLimit32` is the shop's default limit, used when the query names none. */
-export function answerWearMatch(query: WearMatchQuery, shopLimit32: number = DEFAULT_WEAR_LIMIT_32): WearMatchAnswer {
-  const size = sizeFromSlug(query.size);
-  if (!size) return { ok: false, code: "unreadable", message: notASizeMessage(query.size), field: "size" };
-  if (!hasNominalDiameter(size)) return { ok: false, code: "unreadable", message: noDiameterMessage(size), field: "size" };
+/** Judges a valid query with the tire core; `shopLimit32` is the shop's default limit, used when the query names none. */
+export function evaluateWearMatch(query: WearMatchQuery, shopLimit32: number = DEFAULT_WEAR_LIMIT_32): WearMatchEvaluation {
+  const size = readMeasurableSize(query.size);
+  if (!size.ok) return { ok: false, code: "unreadable", message: size.message, field: "size" };
+  const limitFromShop = query.limit32 === undefined && query.limitCircumferenceMm === undefined;
   const limit: WearLimit =
     query.limitCircumferenceMm !== undefined
       ? { kind: "circumferenceMm", value: query.limitCircumferenceMm }
       : { kind: "depth32", value: query.limit32 ?? shopLimit32 };
-  const match = wearMatch({ newDiameterMm: sizeGeometry(size).overallDiameterMm, newDepth32: query.newTreadDepth32, remaining32: query.remaining32, limit });
-  const tire = ({ overallDiameterMm, circumferenceMm }: { overallDiameterMm: number; circumferenceMm: number }) => ({ overallDiameterMm, circumferenceMm });
+  const match = wearMatch({ newDiameterMm: sizeGeometry(size.size).overallDiameterMm, newDepth32: query.newTreadDepth32, remaining32: query.remaining32, limit });
+  return { ok: true, size: size.size, limit, limitFromShop, match };
+}
+
+const tireFigures = ({ overallDiameterMm, circumferenceMm }: TireOnVehicle) => ({ overallDiameterMm, circumferenceMm });
+
+/** The API's 200 body for an evaluation. */
+export function wearMatchBody({ size, limit, limitFromShop, match }: Extract<WearMatchEvaluation, { ok: true }>): WearMatchBody {
   return {
-    ok: true,
-    body: {
-      size: sizeToSlug(size),
-      newTreadDepth32: query.newTreadDepth32,
-      new: tire(match.newTire),
-      remaining: match.remaining.map((staying) => ({ depth32: staying.depth32, ...tire(staying) })),
-      spread32: match.spread32,
-      limit: { ...limit, limit32: match.limit32, fromShop: query.limit32 === undefined && query.limitCircumferenceMm === undefined },
-      replaceSet: match.verdict === "replaceSet",
-      replaceReason: match.replaceReason,
-      fitsAsIs: match.verdict === "fitsAsIs",
-      shaveTo32: match.shaveTo32,
-    },
+    size: sizeToSlug(size),
+    newTreadDepth32: match.newTire.depth32,
+    new: tireFigures(match.newTire),
+    remaining: match.remaining.map((staying) => ({ depth32: staying.depth32, ...tireFigures(staying) })),
+    spread32: match.spread32,
+    limit: { ...limit, limit32: match.limit32, fromShop: limitFromShop },
+    replaceSet: match.verdict === "replaceSet",
+    replaceReason: match.replaceReason,
+    fitsAsIs: match.verdict === "fitsAsIs",
+    shaveTo32: match.shaveTo32,
   };
 }

@@ -153,6 +153,7 @@ export const PAGE_WALKS: Record<string, { path: string; as?: Caller; names?: str
   "sign-up/page.tsx": { path: "/sign-up", names: ["next"] },
   "size/[size]/opengraph-image.tsx": { path: "/size/{size}/opengraph-image" },
   "size/[size]/page.tsx": { path: "/size/{size}", names: ["units"] },
+  "wear-match/page.tsx": { path: "/wear-match", names: ["size", "newTreadDepth32", "remaining32", "limit32", "limitCircumferenceMm"] },
 };
 
 /** Path segments that are not percent-encoded UTF-8, or that carry what no address should. */
