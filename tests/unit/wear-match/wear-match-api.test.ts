@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { parseQuery } from "@/lib/api/query";
-import { answerWearMatch, wearMatchQuerySchema } from "@/lib/wear-match/wear-match-api";
+import { evaluateWearMatch, wearMatchBody, wearMatchQuerySchema } from "@/lib/wear-match/wear-match-api";
 
 const query = (search: string) => parseQuery(new URL(`http://localhost/api/v1/wear-match?${search}`), wearMatchQuerySchema);
 
@@ -46,7 +46,8 @@ describe("the answer", () => {
   const valid = (search: string) => {
     const parsed = query(search);
     if (!parsed.ok) throw new Error("expected a valid query");
-    return answerWearMatch(parsed.value, 2);
+    const evaluation = evaluateWearMatch(parsed.value, 2);
+    return evaluation.ok ? { ok: true as const, body: wearMatchBody(evaluation) } : evaluation;
   };
 
   it("takes the shop's default limit when the query names none, and says so", () => {
