@@ -5,7 +5,7 @@ import { SafetyCautions } from "@/components/ui/safety-cautions";
 import { WearMatchForm } from "@/components/wear-match/wear-match-form";
 import { WearMatchResult } from "@/components/wear-match/wear-match-result";
 import { wearMatchCautions } from "@/content/safety";
-import { DEFAULT_WEAR_LIMIT_32 } from "@/lib/tire";
+import { readCachedShopWearLimit32 } from "@/lib/shop/shop-cache";
 import { readWearMatchPage } from "@/lib/wear-match/page-state";
 
 export const metadata: Metadata = {
@@ -19,7 +19,7 @@ const EXAMPLE = "/wear-match?size=225-65R17&newTreadDepth32=10&remaining32=6,6,7
 
 // Rendered per request: the answer is read from the address.
 export default async function WearMatchPage({ searchParams }: { searchParams: SearchParams }) {
-  const shopLimit32 = DEFAULT_WEAR_LIMIT_32;
+  const shopLimit32 = await readCachedShopWearLimit32();
   const state = readWearMatchPage(await searchParams, shopLimit32);
   return (
     <section className="flex flex-col gap-6">
