@@ -12,9 +12,11 @@ test.describe("Wear match", () => {
     await page.getByLabel("Depths left on the tires that stay (32nds)").press("Enter");
     await expect(page).toHaveURL(/size=225%2F65R17&newTreadDepth32=10&remaining32=6%2C\+6%2C\+7/);
     await expect(page.getByRole("heading", { level: 2, name: "Shave the new tire first" })).toBeVisible();
-    await expect(page.getByText(/^Shave the new tire to 8\/32 in before it goes on: at 10\/32 in it is 4\/32 in deeper than the shallowest tire that stays \(6\/32 in\)/)).toBeVisible();
-    // 724.3 − 2 × 4 × 0.79375 = 717.95 mm for a tire at 6/32 in.
-    await expect(page.getByRole("row", { name: /^front left, stays/ })).toContainText("718.0 mm (28.27 in)");
+    // The sentence, which the drawing's description repeats for screen readers.
+    await expect(page.locator("p", { hasText: /^Shave the new tire to 8\/32 in before it goes on: at 10\/32 in it is 4\/32 in deeper than the shallowest tire that stays \(6\/32 in\)/ })).toBeVisible();
+    // 724.3 − 2 × 4 × 0.79375 = 717.95 mm for a tire at 6/32 in, which binary floating point holds as
+    // 717.9499…, so a tenth shows 717.9; 717.95 / 25.4 = 28.27 in.
+    await expect(page.getByRole("row", { name: /^front left, stays/ })).toContainText("717.9 mm (28.27 in)");
     await expect(page.getByRole("row", { name: /^rear right, new, shaved/ })).toContainText("8/32 in (6.4 mm)");
     await expect(page.getByRole("img", { name: "The vehicle from above, tires to scale" })).toBeVisible();
     await page.screenshot({ path: testInfo.outputPath(`wear-match-${testInfo.project.name}.png`), fullPage: true });
