@@ -27,4 +27,5 @@ export { rimTwin, rimTwinCaution } from "./rim-twins";
 export * from "./messages";
 export * from "./stock-words";
 export * from "./wear-match";
+export * from "./wear-match-candidate";
 export * from "./wear-match-words";

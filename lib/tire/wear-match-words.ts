@@ -1,6 +1,7 @@
 import { formatOneDecimal } from "./display";
 import { mmToIn } from "./units";
 import { MM_PER_32ND, shaveDepthToShow, type WearLimit, type WearMatch } from "./wear-match";
+import type { CandidateWear, StayingTires } from "./wear-match-candidate";
 
 /** Up to two decimals and no trailing zeros: 2, 6.5, 2.01. */
 const upToHundredths = (value: number): string => String(Math.round(value * 100) / 100);
@@ -39,4 +40,27 @@ export function wearVerdictSentence(match: WearMatch, limit: WearLimit): string 
         ? `Replace the set: the tires that stay already differ by ${depth(match.spread32)} (${depth(shallowest)} to ${depth(deepest)}), more than the limit of ${limitWords}, and a new tire cannot bring them closer.`
         : `Replace the set: the new tire's ${depth(newDepth)} is more than ${limitWords} below the deepest tire that stays (${depth(deepest)}), and shaving cannot add tread.`;
   }
+}
+
+/** A finder result's verdict in a few words, for its card and for what travels with a request. */
+export function candidateWearWords(wear: CandidateWear): string {
+  if (wear.kind === "otherSize") return "Another size: it cannot be matched by tread depth beside the tires that stay on an all-wheel-drive vehicle";
+  if (wear.kind === "unknownDepth") return "New tread depth not on record: ask the shop to measure it against the tires that stay";
+  const { match } = wear;
+  const newDepth = depth(match.newTire.depth32);
+  switch (match.verdict) {
+    case "fitsAsIs":
+      return `Fits as it is: ${newDepth} new, within the limit of the tires that stay`;
+    case "shave":
+      return `Shave to ${depth(shaveDepthToShow(match)!)} before fitting: ${newDepth} new`;
+    case "replaceSet":
+      return match.replaceReason === "spread"
+        ? "Replace the set: the tires that stay already differ by more than the limit"
+        : `Replace the set: ${newDepth} new is too far below the deepest tire that stays`;
+  }
+}
+
+/** The tires that stay in one line: "All-wheel drive: 2 tires stay at 7/32 in, 7.5/32 in (limit 2/32 in)". */
+export function stayingTiresWords({ remaining32, limit32 }: StayingTires): string {
+  return `All-wheel drive: ${remaining32.length} tires stay at ${remaining32.map(depth).join(", ")} (limit ${depth(limit32)})`;
 }
