@@ -13,14 +13,14 @@ import {
   type WearLimit,
   type WearMatch,
 } from "@/lib/tire";
-import { MAX_TREAD_DEPTH_32, STAYING_TIRES_MAX, STAYING_TIRES_MIN, WEAR_LIMIT_32_MAX, WEAR_LIMIT_MM_MAX } from "./wear-match-rules";
+import { HALF_32NDS_PATTERN, MAX_TREAD_DEPTH_32, STAYING_TIRES_MAX, STAYING_TIRES_MIN, WEAR_LIMIT_32_MAX, WEAR_LIMIT_MM_MAX } from "./wear-match-rules";
 
 const DEPTH_RULE = `a depth in 32nds of an inch from 0 to ${MAX_TREAD_DEPTH_32}, whole or a half (10 or 10.5)`;
 const halves = (min: number, max: number, rule: string) =>
   z
     .string()
     .trim()
-    .regex(/^\d+(\.[05])?$/, rule)
+    .regex(HALF_32NDS_PATTERN, rule)
     .transform(Number)
     .pipe(z.number().min(min, rule).max(max, rule));
 

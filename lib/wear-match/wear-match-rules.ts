@@ -9,3 +9,5 @@ export const STAYING_TIRES_MAX = 3;
 export const WEAR_LIMIT_32_MAX = 8;
 /** The largest circumference-difference limit, in millimetres (8/32 in of depth is about 40 mm of circumference). */
 export const WEAR_LIMIT_MM_MAX = 50;
+/** A depth or limit in 32nds as typed: whole or a half ("6", "6.5"). */
+export const HALF_32NDS_PATTERN = /^\d+(\.[05])?$/;
