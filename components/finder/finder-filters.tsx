@@ -19,7 +19,7 @@ const sortLabels: Record<NonNullable<FinderQuery["sort"]>, string> = {
   diameter: "Closest diameter",
   price: "Lowest price",
   loadMargin: "Most load to spare",
-  [WEAR_SORT]: "No shaving needed first",
+  [WEAR_SORT]: "No shaving needed",
 };
 
 interface FinderFiltersProps {

@@ -19,13 +19,13 @@ interface FinderResultsProps {
   pickLabel: string;
   /** Opens Ask the shop with the picked tires (the phone's ask bar). */
   onAsk: () => void;
-  /** Each result beside the tires that stay, when their depths are given; and the results in the order to show. */
-  wear: { of: (tire: Candidate) => CandidateWear; ordered: readonly Candidate[] } | null;
+  /** Each result beside the tires that stay, when their depths are given. */
+  wearOf: ((tire: Candidate) => CandidateWear) | null;
 }
 
 /** The qualifying tires, page by page, with the near misses folded away below. */
-export function FinderResults({ data, original, units, picked, onPick, pickLabel, onAsk, wear }: FinderResultsProps) {
-  const { first, error, isLoading, hasMore, isLoadingMore, loadMore, retry } = data;
+export function FinderResults({ data, original, units, picked, onPick, pickLabel, onAsk, wearOf }: FinderResultsProps) {
+  const { first, results, error, isLoading, hasMore, isLoadingMore, loadMore, retry } = data;
   if (error) {
     return (
       <div role="alert" className="rounded border-l-4 border-danger bg-sheet p-4">
@@ -44,7 +44,6 @@ export function FinderResults({ data, original, units, picked, onPick, pickLabel
     );
   }
   const nearMisses = first.nearMisses;
-  const results = wear?.ordered ?? data.results;
   return (
     <section aria-labelledby="results-heading" className="flex flex-col gap-3">
       <h2 id="results-heading" className="text-xl font-semibold" aria-live="polite">
@@ -65,7 +64,7 @@ export function FinderResults({ data, original, units, picked, onPick, pickLabel
               original={original}
               units={units}
               needed={first.quantity}
-              wear={wear?.of(tire)}
+              wear={wearOf?.(tire)}
               pick={{ label: pickLabel, picked: picked.includes(tire.sku), disabled: picked.length >= MAX_CARD_TIRES, onChange: (on) => onPick(tire.sku, on) }}
             />
           </li>

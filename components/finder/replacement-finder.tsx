@@ -6,7 +6,7 @@ import { drawnTireOf } from "@/components/reader/drawn-tire";
 import { useUnitSystem } from "@/components/units/use-unit-system";
 import { UnitsToggle } from "@/components/units/units-toggle";
 import type { FinderQuery } from "@/lib/finder/finder-query";
-import { alternativesSearch, finderSearch, setSizeOf } from "@/lib/finder/finder-state";
+import { alternativesSearch, FINDER_PAGE_SIZE, finderSearch, setSizeOf } from "@/lib/finder/finder-state";
 import type { OriginalReading } from "@/lib/finder/original-marking";
 import { placardFor } from "@/lib/finder/placard-for";
 import { readFinderWear, WEAR_SORT } from "@/lib/finder/finder-wear";
@@ -54,7 +54,12 @@ export function ReplacementFinder({ initialQuery, original, brands, defaultToler
   const wear = readFinderWear(query, shopWearLimit32);
   const staying = wear.on ? wear.staying : null;
   const wearOf = staying && data.first ? (tire: Candidate) => candidateWear(tire, data.first!.original.designation, staying) : null;
-  const wearResults = wearOf ? { of: wearOf, ordered: query.sort === WEAR_SORT ? byWearMatch(data.results, wearOf) : data.results } : null;
+  // Sorted by tread depth, the whole list is here at once and is shown a page at a time.
+  const [wearShown, setWearShown] = useState(FINDER_PAGE_SIZE);
+  const wearSorted = wearOf && query.sort === WEAR_SORT ? byWearMatch(data.results, wearOf) : null;
+  const list = wearSorted
+    ? { ...data, results: wearSorted.slice(0, wearShown), hasMore: wearSorted.length > wearShown, loadMore: () => setWearShown((shown) => shown + FINDER_PAGE_SIZE) }
+    : data;
   const quoteWear = staying && wearOf ? { staying, verdictOf: (tire: Candidate) => candidateWearWords(wearOf(tire)) } : null;
   const pick = (sku: string, on: boolean) =>
     setPicked((list) => (on ? [...list, ...data.results.filter((tire) => tire.sku === sku)] : list.filter((tire) => tire.sku !== sku)));
@@ -85,14 +90,14 @@ export function ReplacementFinder({ initialQuery, original, brands, defaultToler
       <div className="flex min-w-0 flex-col gap-4">
         <FinderFilters query={query} brands={brands} defaultTolerancePct={defaultTolerancePct} onChange={update} />
         <FinderResults
-          data={data}
+          data={list}
           original={original.marking.size && original.marking.geometry ? drawnTireOf(original.marking.size, original.marking.geometry) : null}
           units={units}
           picked={picked.map((tire) => tire.sku)}
           onPick={pick}
           pickLabel={pickLabel(staff)}
           onAsk={() => askTheShop.current?.open()}
-          wear={wearResults}
+          wearOf={wearOf}
         />
         {data.first ? <SaveFitCard draft={fitCardDraft(data.first.original.designation, query, minimums, picked, data.first.tolerancePct, staying)} /> : null}
         {data.first ? (

@@ -50,11 +50,11 @@ export function WearPanel({ query, wear, sizeSlug, onChange }: WearPanelProps) {
   return (
     <section aria-label="Tread depth on an all-wheel-drive vehicle" className="rounded border border-rule bg-sheet p-4 text-sm">
       <label className="flex min-h-11 items-center gap-2 font-semibold">
-        <input type="checkbox" checked={wear.on} onChange={(event) => toggle(event.target.checked)} aria-controls={`${id}-depths`} className="size-5 shrink-0 accent-[var(--color-accent)]" />
+        <input type="checkbox" checked={wear.on} onChange={(event) => toggle(event.target.checked)} className="size-5 shrink-0 accent-[var(--color-accent)]" />
         Replacing fewer than four on an all-wheel-drive vehicle
       </label>
       {wear.on ? (
-        <div id={`${id}-depths`} className="mt-2 flex flex-col gap-3">
+        <div className="mt-2 flex flex-col gap-3">
           <p className="text-ink-soft">
             New tires beside worn ones turn a different number of times a mile, and the drivetrain feels it. Measure each tire that stays in several
             grooves and give the lowest reading; each result below then says whether it fits as it is, needs shaving, or means a new set.
