@@ -4,7 +4,7 @@ import { commonSizeSlugs } from "@/lib/size-sheet/read-size-sheet";
 
 export default function sitemap(): MetadataRoute.Sitemap {
   const base = siteUrl();
-  const pages = ["/", "/compare", "/plus", "/replace", "/learn"].map((path) => ({
+  const pages = ["/", "/compare", "/plus", "/replace", "/wear-match", "/learn"].map((path) => ({
     url: new URL(path, base).toString(),
     changeFrequency: "monthly" as const,
   }));

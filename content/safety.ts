@@ -29,3 +29,13 @@ export const sizeChangeCautions = [
 /** Shown beside a tire that does not meet every rule of equal-or-better for the tire on the car. */
 export const notEqualOrBetterCaution =
   "Check your vehicle's tire placard and ask a qualified fitter before choosing this tire: it does not meet every rule for the tire on your car.";
+
+/** The cautions of Wear match: replacing one or two tires on an all-wheel-drive vehicle. */
+export const wearMatchCautions = [
+  "Follow the vehicle maker's limit on tread depth or rolling circumference, in the owner's handbook; the shop's default applies only where the maker states none.",
+  "Have a qualified fitter measure every tire with a gauge, in several grooves, and take the lowest reading; any shaving is done by the fitter on a tire lathe.",
+  "A new tire must match the size, load index and speed symbol on the vehicle's tire and loading placard (usually on the driver's door jamb).",
+  "Two new tires go on the rear axle (common practice); the fitter may advise otherwise for your vehicle.",
+  "Different sizes front and rear (a staggered fitment) are not covered here: ask the shop.",
+  "Local rules and the vehicle and tire makers' guidance prevail over anything shown here.",
+] as const;

@@ -7,7 +7,7 @@ import { PageIntro } from "@/components/ui/page-intro";
 import { SafetyCautions } from "@/components/ui/safety-cautions";
 import { readFinderQuery } from "@/lib/finder/finder-query";
 import { readOriginalMarking } from "@/lib/finder/original-marking";
-import { readCachedShopTolerance } from "@/lib/shop/shop-cache";
+import { readCachedShopTolerance, readCachedShopWearLimit32 } from "@/lib/shop/shop-cache";
 import { listBrandNames } from "@/lib/finder/queries";
 
 export const metadata: Metadata = {
@@ -24,7 +24,7 @@ export default async function ReplacementFinderPage({ searchParams }: { searchPa
   const query = readFinderQuery(await searchParams);
   const complete = Boolean(query.size && query.loadIndex !== undefined && query.speedSymbol);
   const db = await getDb();
-  const [brands, defaultTolerancePct] = await Promise.all([listBrandNames(db), readCachedShopTolerance()]);
+  const [brands, defaultTolerancePct, shopWearLimit32] = await Promise.all([listBrandNames(db), readCachedShopTolerance(), readCachedShopWearLimit32()]);
   return (
     <section className="flex flex-col gap-6">
       <PageIntro eyebrow="Replacement finder" title="Equal-or-better tires in stock">
@@ -38,6 +38,7 @@ export default async function ReplacementFinderPage({ searchParams }: { searchPa
           original={readOriginalMarking(query)}
           brands={brands}
           defaultTolerancePct={defaultTolerancePct}
+          shopWearLimit32={shopWearLimit32}
         />
       ) : null}
       <SafetyCautions />

@@ -1,7 +1,7 @@
 import { centsToDollarsText, parseDollars } from "@/lib/money/money";
 import { applySettingsChanges, settingChanges, type SettingChange } from "@/lib/shop/settings-changes";
 import type { ShopSettings, ShopSettingsChanges } from "@/lib/shop/settings-schema";
-import { FITTING_LIMITS, MAX_CHARGE_CENTS } from "@/lib/shop/limits";
+import { FITTING_LIMITS, MAX_CHARGE_CENTS, WEAR_LIMIT_32 } from "@/lib/shop/limits";
 import type { ShopContact } from "@/lib/shop/queries";
 import { parseTaxPercent, taxPercentText } from "@/lib/shop/tax-percent";
 import { closedDatesProblem, dayHoursProblem } from "@/lib/shop/week-rules";
@@ -29,6 +29,7 @@ export interface ShopFormValues extends Omit<ShopContact, "openingHours">, Recor
   hours: Record<Weekday, [string, string][]>;
   closedDates: string[];
   tolerancePct: string;
+  wearLimit32: string;
   fittingPerTire: string;
   disposalPerTire: string;
   tireFeePerTire: string;
@@ -55,6 +56,7 @@ export function formValuesOf(settings: ShopSettings): ShopFormValues {
     hours: settings.hours,
     closedDates: settings.closedDates,
     tolerancePct: String(settings.tolerancePct),
+    wearLimit32: String(settings.wearLimit32),
     fittingPerTire: centsToDollarsText(settings.fittingPerTireCents),
     disposalPerTire: centsToDollarsText(settings.disposalPerTireCents),
     tireFeePerTire: centsToDollarsText(settings.tireFeePerTireCents),
@@ -104,6 +106,10 @@ export function checkShopForm(values: ShopFormValues, initial: ShopSettings): Sh
   if (datesProblem) errors.closedDates = sentence(datesProblem.message);
   const tolerance = /^\d(?:\.\d+)?$/.test(values.tolerancePct.trim()) ? Number(values.tolerancePct.trim()) : NaN;
   if (!(tolerance >= 1 && tolerance <= 5)) errors.tolerancePct = "Enter a tolerance from 1 to 5 %, like 3 or 2.5.";
+  const wearLimit = /^\d(?:\.[05])?$/.test(values.wearLimit32.trim()) ? Number(values.wearLimit32.trim()) : NaN;
+  if (!(wearLimit >= WEAR_LIMIT_32.min && wearLimit <= WEAR_LIMIT_32.max)) {
+    errors.wearLimit32 = `Enter the limit in 32nds of an inch from ${WEAR_LIMIT_32.min} to ${WEAR_LIMIT_32.max}, whole or a half, like 2 or 2.5.`;
+  }
   const cents: Partial<Record<(typeof CHARGE_FIELDS)[number]["field"], number>> = {};
   for (const charge of CHARGE_FIELDS) {
     const parsed = parseDollars(values[charge.value]);
@@ -130,6 +136,7 @@ export function checkShopForm(values: ShopFormValues, initial: ShopSettings): Sh
     hours: values.hours,
     closedDates: values.closedDates,
     tolerancePct: tolerance,
+    wearLimit32: wearLimit,
     ...cents,
     taxRateBp,
     taxServices: values.taxServices,

@@ -109,6 +109,9 @@ export function ShopSettingsForm({ initial, timeZones }: { initial: ShopSettings
             <FormField {...field("tolerancePct")} label="Default diameter tolerance (%)" hint="1 to 5; a search may choose its own.">
               {(control) => <input {...control} name="tolerancePct" inputMode="decimal" value={values.tolerancePct} onChange={(e) => set("tolerancePct", e.target.value)} autoComplete="off" className={`${itemInputClass} font-mono`} />}
             </FormField>
+            <FormField {...field("wearLimit32")} label="Wear match's default limit (32nds of an inch)" hint="Tread depth allowed between any two tires on an all-wheel-drive vehicle when its maker states none; 2 is common practice.">
+              {(control) => <input {...control} name="wearLimit32" inputMode="decimal" value={values.wearLimit32} onChange={(e) => set("wearLimit32", e.target.value)} autoComplete="off" className={`${itemInputClass} font-mono`} />}
+            </FormField>
             {CHARGE_FIELDS.map(({ value, field: apiField, label }) => (
               <FormField key={value} {...field(apiField)} label={`${label} (US dollars)`}>
                 {(control) => <input {...control} name={value} inputMode="decimal" value={values[value]} onChange={(e) => set(value, e.target.value)} autoComplete="off" className={`${itemInputClass} font-mono`} />}

@@ -5,6 +5,7 @@ import type { FinderQuery } from "@/lib/finder/finder-query";
 import { activeFilterCount, setSizeOf } from "@/lib/finder/finder-state";
 import { formatCount } from "@/lib/format/format";
 import { centsToDollarsText, parseDollars } from "@/lib/money/money";
+import { WEAR_SORT } from "@/lib/finder/finder-wear";
 import { DEFAULT_SET_SIZE, FINDER_SORTS, SEASONS, SET_SIZE_CHOICES, TERRAINS } from "@/lib/tire/vocabulary";
 
 const setSizeLabels: Record<(typeof SET_SIZE_CHOICES)[number], string> = {
@@ -14,10 +15,11 @@ const setSizeLabels: Record<(typeof SET_SIZE_CHOICES)[number], string> = {
   6: "6 tires (rear duals)",
 };
 
-const sortLabels: Record<(typeof FINDER_SORTS)[number], string> = {
+const sortLabels: Record<NonNullable<FinderQuery["sort"]>, string> = {
   diameter: "Closest diameter",
   price: "Lowest price",
   loadMargin: "Most load to spare",
+  [WEAR_SORT]: "No shaving needed",
 };
 
 interface FinderFiltersProps {
@@ -26,6 +28,9 @@ interface FinderFiltersProps {
   defaultTolerancePct: number;
   onChange: (patch: Partial<FinderQuery>) => void;
 }
+
+/** The wear sort is offered once the tires that stay are being judged. */
+const sortChoices = (query: FinderQuery): NonNullable<FinderQuery["sort"]>[] => (query.awd ? [...FINDER_SORTS, WEAR_SORT] : [...FINDER_SORTS]);
 
 const select = "min-h-11 w-full rounded border border-rule bg-sheet px-2 text-ink";
 
@@ -80,7 +85,7 @@ export function FinderFilters({ query, brands, defaultTolerancePct, onChange }: 
         <label className="flex flex-col gap-1">
           Sort by
           <select className={select} value={query.sort ?? "diameter"} onChange={(event) => onChange({ sort: event.target.value as FinderQuery["sort"] })}>
-            {FINDER_SORTS.map((sort) => (
+            {sortChoices(query).map((sort) => (
               <option key={sort} value={sort}>
                 {sortLabels[sort]}
               </option>

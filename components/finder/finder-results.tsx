@@ -3,6 +3,8 @@
 import type { DrawnTire } from "@/components/diagram/drawing-layout";
 import type { UnitSystem } from "@/lib/tire";
 import { MAX_CARD_TIRES } from "@/lib/fit-cards/card-limits";
+import type { Candidate } from "@/lib/finder/alternatives-response";
+import type { CandidateWear } from "@/lib/tire/wear-match-candidate";
 import { AskBar } from "./ask-bar";
 import { ResultCard } from "./result-card";
 import type { useAlternatives } from "./use-alternatives";
@@ -17,10 +19,12 @@ interface FinderResultsProps {
   pickLabel: string;
   /** Opens Ask the shop with the picked tires (the phone's ask bar). */
   onAsk: () => void;
+  /** Each result beside the tires that stay, when their depths are given. */
+  wearOf: ((tire: Candidate) => CandidateWear) | null;
 }
 
 /** The qualifying tires, page by page, with the near misses folded away below. */
-export function FinderResults({ data, original, units, picked, onPick, pickLabel, onAsk }: FinderResultsProps) {
+export function FinderResults({ data, original, units, picked, onPick, pickLabel, onAsk, wearOf }: FinderResultsProps) {
   const { first, results, error, isLoading, hasMore, isLoadingMore, loadMore, retry } = data;
   if (error) {
     return (
@@ -60,6 +64,7 @@ export function FinderResults({ data, original, units, picked, onPick, pickLabel
               original={original}
               units={units}
               needed={first.quantity}
+              wear={wearOf?.(tire)}
               pick={{ label: pickLabel, picked: picked.includes(tire.sku), disabled: picked.length >= MAX_CARD_TIRES, onChange: (on) => onPick(tire.sku, on) }}
             />
           </li>

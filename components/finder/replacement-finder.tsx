@@ -6,9 +6,12 @@ import { drawnTireOf } from "@/components/reader/drawn-tire";
 import { useUnitSystem } from "@/components/units/use-unit-system";
 import { UnitsToggle } from "@/components/units/units-toggle";
 import type { FinderQuery } from "@/lib/finder/finder-query";
-import { alternativesSearch, finderSearch, setSizeOf } from "@/lib/finder/finder-state";
+import { alternativesSearch, FINDER_PAGE_SIZE, finderSearch, setSizeOf } from "@/lib/finder/finder-state";
 import type { OriginalReading } from "@/lib/finder/original-marking";
 import { placardFor } from "@/lib/finder/placard-for";
+import { readFinderWear, WEAR_SORT } from "@/lib/finder/finder-wear";
+import { byWearMatch, candidateWear } from "@/lib/tire/wear-match-candidate";
+import { candidateWearWords } from "@/lib/tire/wear-match-words";
 import { SaveFitCard } from "@/components/fit-card/save-fit-card-button";
 import { AskTheShop, type AskTheShopHandle } from "@/components/quotes/ask-the-shop";
 import { finderQuoteTires, quoteCatalogTires } from "@/components/quotes/quote-tires";
@@ -21,6 +24,7 @@ import { pickLabel } from "./pick-words";
 import { PlacardForm } from "./placard-form";
 import { useAlternatives } from "./use-alternatives";
 import { useStaffView } from "./use-staff-view";
+import { WearPanel } from "./wear-panel";
 
 // Staff only: fetched once the browser knows staff are looking, never by other visitors.
 const RecordCustomer = dynamic(() => import("./record-customer").then((module) => module.RecordCustomer));
@@ -31,10 +35,12 @@ interface ReplacementFinderProps {
   original: OriginalReading;
   brands: string[];
   defaultTolerancePct: number;
+  /** The shop's default limit between the tread depths of any two tires on an all-wheel-drive vehicle. */
+  shopWearLimit32: number;
 }
 
 /** Equal-or-better tires for the current one, fetched from the public API as filters change. */
-export function ReplacementFinder({ initialQuery, original, brands, defaultTolerancePct }: ReplacementFinderProps) {
+export function ReplacementFinder({ initialQuery, original, brands, defaultTolerancePct, shopWearLimit32 }: ReplacementFinderProps) {
   const [query, setQuery] = useState(initialQuery);
   const [units, setUnits] = useUnitSystem();
   const placard = useMemo(() => (original.ok ? placardFor(query, original.passengerTire, units) : null), [query, original, units]);
@@ -45,6 +51,16 @@ export function ReplacementFinder({ initialQuery, original, brands, defaultToler
   const [picked, setPicked] = useState<Candidate[]>([]);
   const staff = useStaffView();
   const askTheShop = useRef<AskTheShopHandle>(null);
+  const wear = readFinderWear(query, shopWearLimit32);
+  const staying = wear.on ? wear.staying : null;
+  const wearOf = staying && data.first ? (tire: Candidate) => candidateWear(tire, data.first!.original.designation, staying) : null;
+  // Sorted by tread depth, the whole list is here at once and is shown a page at a time.
+  const [wearShown, setWearShown] = useState(FINDER_PAGE_SIZE);
+  const wearSorted = wearOf && query.sort === WEAR_SORT ? byWearMatch(data.results, wearOf) : null;
+  const list = wearSorted
+    ? { ...data, results: wearSorted.slice(0, wearShown), hasMore: wearSorted.length > wearShown, loadMore: () => setWearShown((shown) => shown + FINDER_PAGE_SIZE) }
+    : data;
+  const quoteWear = staying && wearOf ? { staying, verdictOf: (tire: Candidate) => candidateWearWords(wearOf(tire)) } : null;
   const pick = (sku: string, on: boolean) =>
     setPicked((list) => (on ? [...list, ...data.results.filter((tire) => tire.sku === sku)] : list.filter((tire) => tire.sku !== sku)));
 
@@ -69,23 +85,25 @@ export function ReplacementFinder({ initialQuery, original, brands, defaultToler
           <UnitsToggle units={units} onChange={setUnits} />
         </div>
         <PlacardForm query={query} check={placard} originalLoadIndex={query.loadIndex} passengerTire={original.passengerTire} onChange={update} />
+        <WearPanel query={query} wear={wear} sizeSlug={original.sizeSlug} onChange={update} />
       </div>
       <div className="flex min-w-0 flex-col gap-4">
         <FinderFilters query={query} brands={brands} defaultTolerancePct={defaultTolerancePct} onChange={update} />
         <FinderResults
-          data={data}
+          data={list}
           original={original.marking.size && original.marking.geometry ? drawnTireOf(original.marking.size, original.marking.geometry) : null}
           units={units}
           picked={picked.map((tire) => tire.sku)}
           onPick={pick}
           pickLabel={pickLabel(staff)}
           onAsk={() => askTheShop.current?.open()}
+          wearOf={wearOf}
         />
-        {data.first ? <SaveFitCard draft={fitCardDraft(data.first.original.designation, query, minimums, picked, data.first.tolerancePct)} /> : null}
+        {data.first ? <SaveFitCard draft={fitCardDraft(data.first.original.designation, query, minimums, picked, data.first.tolerancePct, staying)} /> : null}
         {data.first ? (
-          <AskTheShop ref={askTheShop} source="finder" tires={finderQuoteTires(data.first.original, picked)} catalogTires={quoteCatalogTires(picked)} quantity={setSizeOf(query)} />
+          <AskTheShop ref={askTheShop} source="finder" tires={finderQuoteTires(data.first.original, picked, quoteWear)} catalogTires={quoteCatalogTires(picked)} quantity={setSizeOf(query)} />
         ) : null}
-        {data.first && staff ? <RecordCustomer tires={finderQuoteTires(data.first.original, picked)} skus={picked.map((tire) => tire.sku)} quantity={setSizeOf(query)} /> : null}
+        {data.first && staff ? <RecordCustomer tires={finderQuoteTires(data.first.original, picked, quoteWear)} skus={picked.map((tire) => tire.sku)} quantity={setSizeOf(query)} /> : null}
       </div>
     </div>
   );

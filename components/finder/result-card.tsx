@@ -7,6 +7,8 @@ import type { Candidate, NearMiss } from "@/lib/finder/alternatives-response";
 import { formatPrice } from "@/lib/money/money";
 import { formatSignedPercent, type UnitSystem } from "@/lib/tire/display";
 import { formatServiceDescription } from "@/lib/tire/format";
+import type { CandidateWear } from "@/lib/tire/wear-match-candidate";
+import { candidateWearWords } from "@/lib/tire/wear-match-words";
 import { RuleNotes } from "@/components/ui/rule-notes";
 import { EstimateBreakdown } from "@/components/ui/estimate-breakdown";
 import { StockLine } from "@/components/ui/stock-line";
@@ -22,10 +24,17 @@ interface ResultCardProps {
   needed: number;
   /** For qualifying tires: what picking it does, whether it is picked, and how to change that. */
   pick?: { label: string; picked: boolean; disabled: boolean; onChange: (picked: boolean) => void };
+  /** Beside the tires that stay on an all-wheel-drive vehicle, when their depths are known. */
+  wear?: CandidateWear;
 }
 
+const wearStyle = (wear: CandidateWear): string => {
+  if (wear.kind !== "judged") return "border-rule";
+  return { fitsAsIs: "border-accent", shave: "border-caution", replaceSet: "border-danger" }[wear.match.verdict];
+};
+
 /** One catalog tire: what it is, what it costs, whether it is here, and why it qualifies (or not). */
-export function ResultCard({ tire, original, units, needed, pick }: ResultCardProps) {
+export function ResultCard({ tire, original, units, needed, pick, wear }: ResultCardProps) {
   const [drawing, setDrawing] = useState(false);
   const lines = "reasons" in tire ? tire.reasons : tire.failed;
   const badges = [tire.extraLoad ? "XL" : null, tire.runFlat ? "Run-flat" : null, tire.loadRange ? `Load range ${tire.loadRange}` : null, tire.threePeak ? "3PMSF" : null];
@@ -61,6 +70,12 @@ export function ResultCard({ tire, original, units, needed, pick }: ResultCardPr
           </li>
         ))}
       </ul>
+      {wear ? (
+        <p className={`mt-2 border-l-4 pl-3 text-sm ${wearStyle(wear)}`} data-wear={wear.kind === "judged" ? wear.match.verdict : wear.kind}>
+          <span className="font-semibold">Tread depth: </span>
+          {candidateWearWords(wear)}
+        </p>
+      ) : null}
       {"notes" in tire && tire.notes.length > 0 ? <RuleNotes notes={tire.notes} /> : null}
       {"estimate" in tire ? <EstimateBreakdown estimate={tire.estimate} className="mt-3 sm:max-w-sm" /> : null}
       {pick ? (

@@ -32,6 +32,12 @@ export function FitCardTires({ tires, needed }: { tires: CardTire[]; needed: num
             <p className="mt-1 font-semibold">{priceLine(tire)}</p>
             {tire.stillStocked ? <StockLine quantity={tire.quantity} needed={needed} /> : <p className="text-sm text-ink-soft">Ask the shop for a current choice</p>}
             <TireVerdictList verdict={tire} />
+            {tire.wear ? (
+              <p className="mt-2 border-l-4 border-rule pl-3 text-sm" data-wear={tire.wear.verdict}>
+                <span className="font-semibold">Tread depth: </span>
+                {tire.wear.words}
+              </p>
+            ) : null}
             {tire.stillStocked ? <EstimateBreakdown estimate={tire.estimate} className="mt-3 print:p-1" /> : null}
           </li>
         ))}

@@ -5,7 +5,7 @@ import { SafetyCautions } from "@/components/ui/safety-cautions";
 import { originalServiceWords, placardMinimumWords } from "@/lib/fit-cards/original-words";
 import type { PublicFitCard } from "@/lib/fit-cards/read-card";
 import type { ShopContact } from "@/lib/shop/queries";
-import { measurableSizeFromSlug, seasonTireWords, type MeasurableSize } from "@/lib/tire";
+import { formatDepth32, measurableSizeFromSlug, seasonTireWords, type MeasurableSize } from "@/lib/tire";
 import { FitCardComparison } from "./fit-card-comparison";
 import { FitCardTires } from "./fit-card-tires";
 import { ShareActions } from "./share-actions";
@@ -37,6 +37,17 @@ export function FitCardView({ card, shop, url, timeZone }: { card: PublicFitCard
             A note from the shop
           </h2>
           <p className="mt-1 whitespace-pre-line">{card.note}</p>
+        </section>
+      ) : null}
+      {card.wear ? (
+        <section aria-labelledby="wear-heading" className="rounded border-l-4 border-caution bg-caution-soft p-4">
+          <h2 id="wear-heading" className="font-semibold">
+            All-wheel drive: the tires that stay
+          </h2>
+          <p className="mt-1">
+            Depth left: {card.wear.remaining32.map(formatDepth32).join(", ")}. Any two tires on the vehicle may differ by at most {card.wear.limit32}/32 in of
+            tread depth. Follow the vehicle maker&apos;s limit and have a qualified fitter measure before anything is fitted or shaved.
+          </p>
         </section>
       ) : null}
       <FitCardComparison sizes={card.sizes.map(measurableSizeFromSlug).filter((size): size is MeasurableSize => size !== null)} />

@@ -25,6 +25,7 @@ export async function postFitCard(draft: FitCardDraft, form: FormData): Promise<
     minLoadIndexDual: draft.minLoadIndexDual,
     originalSeason: draft.originalSeason,
     tolerancePct: draft.tolerancePct,
+    wear: draft.wear,
     note: text(form, "note"),
     expiresInDays: whole(text(form, "expiresInDays")),
   };

@@ -19,6 +19,8 @@ export interface FitCardDraft {
   minLoadIndexDual?: number;
   originalSeason?: string;
   tolerancePct?: number;
+  /** The depths left on the tires that stay on an all-wheel-drive vehicle, and the limit between any two. */
+  wear?: { remaining32: number[]; limit32: number };
 }
 
 // The form and its checks load when someone opens it, not with the page.

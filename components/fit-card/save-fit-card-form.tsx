@@ -46,6 +46,7 @@ export function SaveFitCardForm({ draft, onCancel }: { draft: FitCardDraft; onCa
       <p className="text-sm text-ink-soft">
         {draft.sizes.join(", ")}
         {draft.skus?.length ? ` · ${draft.skus.length} ${draft.skus.length === 1 ? "tire" : "tires"} picked` : ""}
+        {draft.wear ? ` · judged beside the tires that stay (${draft.wear.remaining32.join(", ")}/32 in)` : ""}
       </p>
       {needsService ? (
         <div className="grid grid-cols-2 gap-3">

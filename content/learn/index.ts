@@ -4,6 +4,7 @@ import { loadRangeLesson } from "./load-range";
 import { overallDiameterLesson } from "./overall-diameter";
 import { runFlatAndXlLesson } from "./run-flat-and-xl";
 import { speedSymbolsLesson } from "./speed-symbols";
+import { treadDepthLesson } from "./tread-depth";
 import { learnSlugs, type LearnSlug, type Lesson } from "./types";
 import { utqgLesson } from "./utqg";
 import { winterMarksLesson } from "./winter-marks";
@@ -19,6 +20,7 @@ const lessonsBySlug: Record<LearnSlug, Lesson> = {
   "winter-marks": winterMarksLesson,
   "run-flat-and-xl": runFlatAndXlLesson,
   "overall-diameter": overallDiameterLesson,
+  "tread-depth": treadDepthLesson,
 };
 
 /** Every lesson, in the order the school lists them. */

@@ -1,4 +1,4 @@
-/** The eight Sidewall school topics; other screens link to these slugs. */
+/** The Sidewall school topics; other screens link to these slugs. */
 export const learnSlugs = [
   "load-index",
   "speed-symbols",
@@ -8,6 +8,7 @@ export const learnSlugs = [
   "winter-marks",
   "run-flat-and-xl",
   "overall-diameter",
+  "tread-depth",
 ] as const;
 
 export type LearnSlug = (typeof learnSlugs)[number];

@@ -28,6 +28,10 @@ export const fitCard = pgTable(
     originalSeason: text({ enum: SEASONS }),
     tolerancePct: doublePrecision().notNull(),
     note: text(),
+    /** The depths left on the tires that stay on an all-wheel-drive vehicle (32nds), when the card was saved with them. */
+    wearRemaining32: jsonb().$type<number[]>(),
+    /** The limit between the tread depths of any two tires on that vehicle (32nds). */
+    wearLimit32: doublePrecision(),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
     expiresAt: timestamp({ withTimezone: true }),
     revokedAt: timestamp({ withTimezone: true }),
@@ -42,6 +46,10 @@ export const fitCard = pgTable(
     ),
     check("fit_card_original_season", sql`${table.originalSeason} in ${sql.raw(`(${SEASONS.map((season) => `'${season}'`).join(", ")})`)}`),
     check("fit_card_note", sql`length(${table.note}) <= 1000`),
+    check(
+      "fit_card_wear",
+      sql`(${table.wearRemaining32} is null) = (${table.wearLimit32} is null) and (${table.wearLimit32} is null or ${table.wearLimit32} between 0.5 and 8)`,
+    ),
   ],
 );
 

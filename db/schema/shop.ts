@@ -39,12 +39,15 @@ export const shop = pgTable(
     leadMinutes: integer().notNull().default(120),
     /** Until how many hours before the start a driver can cancel a fitting from the offer page. */
     cancelCutoffHours: smallint().notNull().default(24),
+    /** Wear match's limit when a vehicle maker states none: 32nds of an inch of tread depth between any two tires. */
+    wearLimit32: doublePrecision().notNull().default(2),
     updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
   (table) => [
     check("shop_tolerance_range", sql`${table.defaultTolerancePct} between 1 and 5`),
     check("shop_charges", sql`${table.fittingPerTireCents} >= 0 and ${table.disposalPerTireCents} >= 0 and ${table.tireFeePerTireCents} >= 0`),
     check("shop_tax_rate", sql`${table.taxRateBp} between 0 and 10000`),
+    check("shop_wear_limit", sql`${table.wearLimit32} between 0.5 and 8 and ${table.wearLimit32} * 2 = floor(${table.wearLimit32} * 2)`),
     check(
       "shop_fittings",
       sql`${table.fittingBays} between 1 and 20 and ${table.fittingMinutes} between 15 and 480 and ${table.leadMinutes} between 0 and 20160 and ${table.cancelCutoffHours} between 0 and 168`,

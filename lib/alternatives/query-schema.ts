@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { MAX_INT4, optional, originalQueryFields, wholeNumber, wholeNumberIn, yesNo } from "@/lib/api/query-fields";
-import { FINDER_SORTS, MAX_SET_SIZE, MIN_SET_SIZE, SEASONS, TERRAINS } from "@/lib/tire";
+import { FINDER_SORTS, MAX_ALTERNATIVES_PAGE, MAX_SET_SIZE, MIN_SET_SIZE, SEASONS, TERRAINS } from "@/lib/tire";
 
 const SET_SIZE_RULE = `how many tires are needed, a whole number from ${MIN_SET_SIZE} to ${MAX_SET_SIZE}`;
 
@@ -33,7 +33,7 @@ export const alternativesQuerySchema = z
     quantity: optional(setSize).describe(`How many tires are needed, ${MIN_SET_SIZE}–${MAX_SET_SIZE} (default 4): inStock=true keeps tires with at least this many to sell now, inStock=false those with fewer, and each result's estimate is for this many.`),
     inStock: optional(yesNo),
     sort: optional(z.enum(FINDER_SORTS)),
-    limit: optional(wholeNumberIn(1, 500)),
+    limit: optional(wholeNumberIn(1, MAX_ALTERNATIVES_PAGE)),
     cursor: optional(z.string()),
   })
   .refine((query) => query.minPriceCents === undefined || query.maxPriceCents === undefined || query.minPriceCents <= query.maxPriceCents, {

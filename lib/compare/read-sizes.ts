@@ -1,6 +1,5 @@
-import { hasNominalDiameter, type MeasurableSize } from "@/lib/tire/geometry";
-import { notASizeMessage } from "@/lib/tire/messages";
-import { noDiameterMessage, sizeFromSlug } from "@/lib/tire/slug";
+import type { MeasurableSize } from "@/lib/tire/geometry";
+import { readMeasurableSize } from "@/lib/tire/slug";
 import { MAX_COMPARED_SIZES } from "./compare-limits";
 
 export { MAX_COMPARED_SIZES };
@@ -20,10 +19,9 @@ export function readSizeList(text: string, min: number): SizeListResult {
   }
   const sizes: MeasurableSize[] = [];
   for (const part of parts) {
-    const size = sizeFromSlug(part);
-    if (!size) return { ok: false, code: "unreadable", message: notASizeMessage(part) };
-    if (!hasNominalDiameter(size)) return { ok: false, code: "unreadable", message: noDiameterMessage(size) };
-    sizes.push(size);
+    const size = readMeasurableSize(part);
+    if (!size.ok) return { ok: false, code: "unreadable", message: size.message };
+    sizes.push(size.size);
   }
   return { ok: true, sizes };
 }

@@ -1,6 +1,8 @@
 import { z } from "zod";
 import { FINDER_SORTS, SEASONS, SET_SIZE_CHOICES, TERRAINS } from "@/lib/tire/vocabulary";
 import { lineText } from "@/lib/validation/text";
+import { WEAR_LIMIT_32_MAX } from "@/lib/wear-match/wear-match-rules";
+import { WEAR_SORT } from "./finder-wear";
 
 export const vehicleTypes = ["passenger-car", "mpv-truck-trailer"] as const;
 
@@ -36,12 +38,22 @@ export const finderQuerySchema = z.object({
   /** How many tires are needed; absent means the default set of four. */
   quantity: setSize,
   inStock: flag,
-  sort: z.enum(FINDER_SORTS).optional().catch(undefined),
+  sort: z.enum([...FINDER_SORTS, WEAR_SORT]).optional().catch(undefined),
   gawrFront: z.coerce.number().positive().max(100_000).optional().catch(undefined),
   gawrRear: z.coerce.number().positive().max(100_000).optional().catch(undefined),
   gawrUnit: z.enum(["kg", "lb"]).optional().catch(undefined),
   rearDuals: flag,
   vehicle: z.enum(vehicleTypes).optional().catch(undefined),
+  /** Replacing fewer than four on an all-wheel-drive vehicle: the depths of the tires that stay, as typed. */
+  awd: flag,
+  remaining32: z.string().trim().max(40).optional().catch(undefined),
+  wearLimit32: z.coerce
+    .number()
+    .min(0.5)
+    .max(WEAR_LIMIT_32_MAX)
+    .refine((limit) => Number.isInteger(limit * 2))
+    .optional()
+    .catch(undefined),
 });
 
 export type FinderQuery = z.infer<typeof finderQuerySchema>;

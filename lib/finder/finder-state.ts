@@ -1,5 +1,6 @@
-import { DEFAULT_SET_SIZE } from "@/lib/tire/vocabulary";
+import { DEFAULT_SET_SIZE, MAX_ALTERNATIVES_PAGE } from "@/lib/tire/vocabulary";
 import type { FinderQuery } from "./finder-query";
+import { WEAR_SORT } from "./finder-wear";
 
 /**
  * What the finder's browser code does with its state (finder-query.ts reads it from the address
@@ -53,6 +54,12 @@ export function alternativesSearch(query: FinderQuery, minimums: PlacardMinimums
   // Always named, so that each answer says for how many tires its stock filter and estimates are.
   search.set("quantity", String(setSizeOf(query)));
   search.set("limit", String(FINDER_PAGE_SIZE));
+  // Tread depth verdicts depend on depths the API never sees: the whole list comes at once, closest
+  // diameter first, and the browser orders it.
+  if (query.sort === WEAR_SORT) {
+    search.delete("sort");
+    search.set("limit", String(MAX_ALTERNATIVES_PAGE));
+  }
   if (minimums.loadIndex !== null && minimums.loadIndex > (query.loadIndex ?? -1)) search.set("loadIndex", String(minimums.loadIndex));
   if (minimums.loadIndexDual !== null && minimums.loadIndexDual > (query.loadIndexDual ?? -1)) {
     search.set("loadIndexDual", String(minimums.loadIndexDual));

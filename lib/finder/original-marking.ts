@@ -1,10 +1,11 @@
 import { parseMarking } from "@/lib/tire/parse/parse-marking";
 import { serviceType } from "@/lib/tire/service-type";
+import { sizeToSlug } from "@/lib/tire/format";
 import { type Marking } from "@/lib/tire/types";
 import type { FinderQuery } from "./finder-query";
 
 export type OriginalReading =
-  | { ok: true; marking: Marking; passengerTire: boolean }
+  | { ok: true; marking: Marking; passengerTire: boolean; sizeSlug: string }
   | { ok: false; message: string };
 
 /**
@@ -22,5 +23,5 @@ export function readOriginalMarking(query: FinderQuery): OriginalReading {
   if (!marking.size || !marking.service) {
     return { ok: false, message: `"${query.size} ${query.loadIndex}${query.speedSymbol}" is not a size with a load index and speed symbol.` };
   }
-  return { ok: true, marking, passengerTire: serviceType(marking.size) === "passenger" };
+  return { ok: true, marking, passengerTire: serviceType(marking.size) === "passenger", sizeSlug: sizeToSlug(marking.size) };
 }

@@ -53,6 +53,8 @@ export async function createFitCard(db: Database, authorId: string, input: NewFi
         originalSeason: read.season,
         tolerancePct: input.tolerancePct ?? (await readShopTolerance(tx)),
         note: input.note || null,
+        wearRemaining32: input.wear?.remaining32 ?? null,
+        wearLimit32: input.wear?.limit32 ?? null,
         expiresAt: input.expiresInDays ? new Date(Date.now() + input.expiresInDays * DAY_MS) : null,
       })
       .returning({ id: fitCard.id });

@@ -9,6 +9,7 @@ import { DEFAULT_SET_SIZE, SEASONS, type LoadRange } from "@/lib/tire";
 import { estimateSet } from "@/lib/money/estimate";
 import { estimateSchema, readShopCharges } from "@/lib/shop/charges";
 import { cardTireVerdict, tireVerdictSchema } from "./tire-verdict";
+import { cardTireWear, cardWearSchema, stayingOnCard, tireWearSchema } from "./card-wear";
 
 /** How many tires a card's estimates are for: a card keeps no set size, so a set of four. */
 export const CARD_SET_SIZE = DEFAULT_SET_SIZE;
@@ -18,6 +19,7 @@ const cardTireSchema = tireSchema.extend(tireVerdictSchema.shape).extend({
   priceCentsAtSave: z.number().int(),
   stillStocked: z.boolean().describe("False once the item is retired (it then counts as not in stock, quantity 0)."),
   estimate: estimateSchema.describe("What the card's quantity of this tire costs out the door at today's price: an estimate, which the shop confirms."),
+  wear: tireWearSchema.nullable().describe("Beside the tires that stay on an all-wheel-drive vehicle, when the card was saved with their depths."),
 });
 
 /** GET /api/v1/fit-cards/{slug}: what anyone with the link may see; nothing about who made it. */
@@ -41,6 +43,7 @@ export const publicFitCardSchema = z.object({
   tolerancePct: z.number(),
   quantity: z.number().int().describe("How many tires the estimates are for (a card keeps no set size: 4)."),
   note: z.string().nullable(),
+  wear: cardWearSchema.nullable(),
   tires: z.array(cardTireSchema),
 });
 
@@ -83,6 +86,7 @@ export async function readFitCard(db: Database, slug: string, now = new Date()):
     .where(eq(fitCardTire.cardId, card.id))
     .orderBy(asc(fitCardTire.position));
   const charges = rows.length > 0 ? await readShopCharges(db) : null;
+  const staying = stayingOnCard(card);
 
   return {
     status: "found",
@@ -106,6 +110,7 @@ export async function readFitCard(db: Database, slug: string, now = new Date()):
       tolerancePct: card.tolerancePct,
       quantity: CARD_SET_SIZE,
       note: card.note,
+      wear: staying ? { remaining32: [...staying.remaining32], limit32: staying.limit32 } : null,
       tires: rows.map((row) => ({
         // Read now, never frozen: a retired item has none to sell.
         ...toTire({ ...row, quantity: row.retired ? 0 : row.quantity }),
@@ -113,6 +118,7 @@ export async function readFitCard(db: Database, slug: string, now = new Date()):
         priceCentsAtSave: row.priceCentsAtSave,
         estimate: estimateSet(row.priceCents, CARD_SET_SIZE, charges!),
         ...cardTireVerdict(original, row, card.tolerancePct),
+        wear: staying ? cardTireWear(toTire(row), original.designation, staying) : null,
       })),
     },
   };

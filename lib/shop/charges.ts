@@ -4,6 +4,7 @@ import type { Database } from "@/db/client";
 import { shop } from "@/db/schema";
 import { schemaOf } from "@/lib/api/schema-match";
 import type { Estimate, ShopCharges } from "@/lib/money/estimate";
+import { DEFAULT_WEAR_LIMIT_32 } from "@/lib/tire/wear-match";
 import { FALLBACK_TOLERANCE_PCT } from "./tolerance";
 
 /** What a shop not yet set up charges beyond the tires: nothing, and no tax. */
@@ -23,19 +24,26 @@ export async function readShopCharges(db: Database): Promise<ShopCharges> {
   return row ?? NO_CHARGES;
 }
 
+export interface FinderShopSettings {
+  tolerancePct: number;
+  /** Wear match's limit when a vehicle maker states none, in 32nds of an inch. */
+  wearLimit32: number;
+  charges: ShopCharges;
+}
+
 /**
  * What a finder search reads of the shop, in one query (a search runs in a few milliseconds, and a
- * round trip is a good part of one): its default tolerance and its charges.
+ * round trip is a good part of one): its default tolerance, Wear match's default limit and its charges.
  */
-export async function readFinderShopSettings(db: Database): Promise<{ tolerancePct: number; charges: ShopCharges }> {
+export async function readFinderShopSettings(db: Database): Promise<FinderShopSettings> {
   const [row] = await db
-    .select({ tolerancePct: shop.defaultTolerancePct, ...chargeColumns })
+    .select({ tolerancePct: shop.defaultTolerancePct, wearLimit32: shop.wearLimit32, ...chargeColumns })
     .from(shop)
     .orderBy(asc(shop.id))
     .limit(1);
-  if (!row) return { tolerancePct: FALLBACK_TOLERANCE_PCT, charges: NO_CHARGES };
-  const { tolerancePct, ...charges } = row;
-  return { tolerancePct, charges };
+  if (!row) return { tolerancePct: FALLBACK_TOLERANCE_PCT, wearLimit32: DEFAULT_WEAR_LIMIT_32, charges: NO_CHARGES };
+  const { tolerancePct, wearLimit32, ...charges } = row;
+  return { tolerancePct, wearLimit32, charges };
 }
 
 const cents = (what: string) => z.number().int().min(0).describe(what);

@@ -63,6 +63,7 @@ export function settingChanges(before: ShopSettings, after: ShopSettings): Setti
   push("fittingMinutes", before.fittingMinutes, after.fittingMinutes, `minutes per fitting ${before.fittingMinutes} → ${after.fittingMinutes}`);
   push("leadMinutes", before.leadMinutes, after.leadMinutes, `earliest booking ${before.leadMinutes} → ${after.leadMinutes} minutes ahead`);
   push("cancelCutoffHours", before.cancelCutoffHours, after.cancelCutoffHours, `online cancelling until ${before.cancelCutoffHours} → ${after.cancelCutoffHours} hours before`);
+  push("wearLimit32", before.wearLimit32, after.wearLimit32, `Wear match's default limit ${before.wearLimit32}/32 → ${after.wearLimit32}/32 in`);
   return changes;
 }
 

@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { WEEKDAYS, type Weekday } from "@/lib/tire";
 import { lineText } from "@/lib/validation/text";
-import { FITTING_LIMITS, MAX_CHARGE_CENTS } from "./limits";
+import { FITTING_LIMITS, MAX_CHARGE_CENTS, WEAR_LIMIT_32 } from "./limits";
 import { MAX_TAX_RATE_BP } from "./tax-percent";
 import { isTimeZoneName, TIME_ZONE_RULE } from "./time-zone";
 import { CLOCK_PATTERN, CLOCK_RULE, closedDatesProblem, dayHoursProblem, MAX_CLOSED_DATES } from "./week-rules";
@@ -9,7 +9,7 @@ import { CLOCK_PATTERN, CLOCK_RULE, closedDatesProblem, dayHoursProblem, MAX_CLO
 const SETTINGS_FIELDS = [
   "name", "address", "phone", "email", "timeZone", "hours", "closedDates", "tolerancePct",
   "fittingPerTireCents", "disposalPerTireCents", "tireFeePerTireCents", "taxRateBp", "taxServices",
-  "fittingBays", "fittingMinutes", "leadMinutes", "cancelCutoffHours",
+  "fittingBays", "fittingMinutes", "leadMinutes", "cancelCutoffHours", "wearLimit32",
 ] as const;
 const ADDRESS_FIELDS = ["streetAddress", "town", "region", "postalCode"] as const;
 
@@ -107,6 +107,11 @@ export const shopSettingsChangesSchema = z
       0,
       FITTING_LIMITS.cancelCutoffHours.max,
     ),
+    wearLimit32: z
+      .number({ error: WEAR_LIMIT_32.rule })
+      .min(WEAR_LIMIT_32.min, { error: WEAR_LIMIT_32.rule })
+      .max(WEAR_LIMIT_32.max, { error: WEAR_LIMIT_32.rule })
+      .refine((value) => Number.isInteger(value * 2), { error: WEAR_LIMIT_32.rule }),
   })
   .partial()
   .catchall(unknownKey(`not a setting of the shop: remove it (the settings are ${SETTINGS_FIELDS.join(", ")})`))
@@ -147,6 +152,8 @@ export const shopSettingsSchema = z.object({
   leadMinutes: z.number().int(),
   /** A driver can cancel a fitting online until this many hours before it starts. */
   cancelCutoffHours: z.number().int(),
+  /** Wear match's limit when a vehicle maker states none, in 32nds of an inch of tread depth (2 is common practice). */
+  wearLimit32: z.number(),
 });
 
 export type ShopSettings = z.infer<typeof shopSettingsSchema>;

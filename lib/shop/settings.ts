@@ -23,6 +23,7 @@ const settingsColumns = {
   fittingMinutes: shop.fittingMinutes,
   leadMinutes: shop.leadMinutes,
   cancelCutoffHours: shop.cancelCutoffHours,
+  wearLimit32: shop.wearLimit32,
 };
 
 type SettingsRow = { [K in keyof typeof settingsColumns]: (typeof settingsColumns)[K]["_"]["data"] };
@@ -30,13 +31,13 @@ type SettingsRow = { [K in keyof typeof settingsColumns]: (typeof settingsColumn
 function settingsOf(row: SettingsRow): ShopSettings {
   const { name, streetAddress, town, region, postalCode, phone, email, timeZone, hours, closedDates, tolerancePct } = row;
   const { fittingPerTireCents, disposalPerTireCents, tireFeePerTireCents, taxRateBp, taxServices } = row;
-  const { fittingBays, fittingMinutes, leadMinutes, cancelCutoffHours } = row;
+  const { fittingBays, fittingMinutes, leadMinutes, cancelCutoffHours, wearLimit32 } = row;
   // jsonb keeps an object's keys in its own order: answer the week Monday first.
   const week = Object.fromEntries(WEEKDAYS.map((day) => [day, hours[day] ?? []])) as WeeklyHours;
   return {
     name, address: { streetAddress, town, region, postalCode }, phone, email, timeZone, hours: week, closedDates, tolerancePct,
     fittingPerTireCents, disposalPerTireCents, tireFeePerTireCents, taxRateBp, taxServices,
-    fittingBays, fittingMinutes, leadMinutes, cancelCutoffHours,
+    fittingBays, fittingMinutes, leadMinutes, cancelCutoffHours, wearLimit32,
   };
 }
 

@@ -42,6 +42,11 @@ export async function readCachedShopTolerance(): Promise<number> {
   return (await cachedFinderSettings()).tolerancePct;
 }
 
+/** Wear match's default limit in 32nds of an inch, from the cache. */
+export async function readCachedShopWearLimit32(): Promise<number> {
+  return (await cachedFinderSettings()).wearLimit32;
+}
+
 /** After a change of the shop's settings has committed: the next request reads the shop again. */
 export function expireShopCache(): void {
   revalidateTag(SHOP_CACHE_TAG, { expire: 0 });

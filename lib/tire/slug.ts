@@ -1,4 +1,5 @@
 import { formatSize } from "./format";
+import { notASizeMessage } from "./messages";
 import { hasNominalDiameter, NO_NOMINAL_DIAMETER, type MeasurableSize } from "./geometry";
 import { parseMarking } from "./parse/parse-marking";
 import type { TireSize } from "./types";
@@ -21,3 +22,10 @@ export function measurableSizeFromSlug(slug: string): MeasurableSize | null {
 
 /** Why an inch-width size cannot be measured, drawn or compared, in one sentence. */
 export const noDiameterMessage = (size: TireSize): string => `${formatSize(size)} cannot be measured: ${NO_NOMINAL_DIAMETER}.`;
+
+/** A size that can be measured, or the one sentence saying why not: not a size, or a marking with no diameter. */
+export function readMeasurableSize(text: string): { ok: true; size: MeasurableSize } | { ok: false; message: string } {
+  const size = sizeFromSlug(text);
+  if (!size) return { ok: false, message: notASizeMessage(text) };
+  return hasNominalDiameter(size) ? { ok: true, size } : { ok: false, message: noDiameterMessage(size) };
+}

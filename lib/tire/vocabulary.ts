@@ -30,6 +30,9 @@ export const TREAD_DEPTH32_MAX = 40;
 export const FINDER_SORTS = ["diameter", "price", "loadMargin"] as const;
 export type FinderSort = (typeof FINDER_SORTS)[number];
 
+/** The most alternatives one request may ask for. */
+export const MAX_ALTERNATIVES_PAGE = 500;
+
 /**
  * How many tires a driver needs at once: the API takes 1–8 (default 4: a set), the finder offers the
  * usual counts (one, an axle, a set, a truck with rear duals).

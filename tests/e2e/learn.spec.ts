@@ -10,6 +10,7 @@ const topics = [
   { slug: "winter-marks", card: "Winter marks", heading: "Winter marks: M+S and the three-peak mountain snowflake" },
   { slug: "run-flat-and-xl", card: "Run-flat and XL", heading: "Run-flat and Extra Load (XL) tires" },
   { slug: "overall-diameter", card: "Diameter and speedometer", heading: "Overall diameter, aspect ratio and the speedometer" },
+  { slug: "tread-depth", card: "Tread depth and AWD", heading: "Tread depth and all-wheel drive" },
 ];
 
 const tableRows = (page: Page) => page.locator("tbody tr[data-row]");

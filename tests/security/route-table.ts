@@ -26,6 +26,7 @@ export const PUBLIC_HANDLERS = [
   "v1/quote-requests/form-token/route.ts#GET",
   "v1/quote-requests/route.ts#POST",
   "v1/shop/route.ts#GET",
+  "v1/wear-match/route.ts#GET",
 ];
 
 /** Every method a route file can answer; Next.js answers 405 for one the file does not export. */

@@ -92,6 +92,13 @@ export const API_WALKS: Record<string, ApiWalk[]> = {
   ],
   "v1/fit-cards/[slug]/email/route.ts": [{ method: "POST", path: `/api/v1/fit-cards/${SLUG}/email`, as: "staff", body: { to: "nobody@example.test", message: "walk" } }],
   "v1/openapi.json/route.ts": [{ method: "GET", path: "/api/v1/openapi.json" }],
+  "v1/wear-match/route.ts": [
+    {
+      method: "GET",
+      path: "/api/v1/wear-match",
+      query: { base: "size=225-65R17&newTreadDepth32=10&remaining32=6,6,7", names: ["size", "newTreadDepth32", "remaining32", "limit32", "limitCircumferenceMm"] },
+    },
+  ],
   "v1/plus/route.ts": [{ method: "GET", path: "/api/v1/plus", query: { base: "size=225-45R17", names: ["size", "loadIndex", "speedSymbol", "tolerancePct", "all"] } }],
   "v1/quote-requests/route.ts": [
     {
@@ -153,6 +160,7 @@ export const PAGE_WALKS: Record<string, { path: string; as?: Caller; names?: str
   "sign-up/page.tsx": { path: "/sign-up", names: ["next"] },
   "size/[size]/opengraph-image.tsx": { path: "/size/{size}/opengraph-image" },
   "size/[size]/page.tsx": { path: "/size/{size}", names: ["units"] },
+  "wear-match/page.tsx": { path: "/wear-match", names: ["size", "newTreadDepth32", "remaining32", "limit32", "limitCircumferenceMm"] },
 };
 
 /** Path segments that are not percent-encoded UTF-8, or that carry what no address should. */

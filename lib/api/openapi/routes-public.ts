@@ -5,6 +5,7 @@ import { compareAnswerSchema, compareQuerySchema } from "@/lib/compare/compare-a
 import { decodeAnswerSchema, decodeQuerySchema } from "@/lib/decode/decode-api";
 import { healthyBodySchema, unhealthyBodySchema } from "@/lib/health/check-database";
 import { plusBodySchema, plusQuerySchema } from "@/lib/plus/plus-request";
+import { wearMatchAnswerSchema, wearMatchQuerySchema } from "@/lib/wear-match/wear-match-api";
 import { named, type ApiOperation } from "./operation";
 
 /** The 200 body of GET /api/v1/openapi.json, as far as a client relies on it. */
@@ -85,5 +86,20 @@ export const PUBLIC_ROUTES: ApiOperation[] = [
     query: alternativesQuerySchema,
     answers: [{ status: 200, description: "One page of results, their total and the near misses.", json: named("Alternatives", alternativesSchema) }],
     errors: [...READING_ERRORS],
+  },
+  {
+    method: "get",
+    path: "/api/v1/wear-match",
+    tag: "Sizes",
+    summary: "Wear match: can one or two new tires join worn ones on an all-wheel-drive vehicle",
+    description:
+      "Every tire must lie within the limit of every other. With a tread-depth limit (limit32) or a rolling-circumference limit (limitCircumferenceMm), " +
+      "or neither for the shop's default, but not both (400). The new tire's diameter is the size's nominal one (common practice); the staying tires are " +
+      "taken to have started at the new tire's depth. replaceSet when the staying tires already differ by more than the limit or the new tire is too " +
+      "shallow; else fitsAsIs, or shaveTo32 (unrounded). Depths in 32nds of an inch, halves allowed.",
+    access: "public",
+    query: wearMatchQuerySchema,
+    answers: [{ status: 200, description: "The verdict and each tire's figures.", json: named("WearMatch", wearMatchAnswerSchema) }],
+    errors: ["unreadable"],
   },
 ];

@@ -66,6 +66,7 @@ describe("GET /api/v1/shop", () => {
       fittingMinutes: 60,
       leadMinutes: 120,
       cancelCutoffHours: 24,
+      wearLimit32: 2,
     });
   });
 
@@ -183,7 +184,7 @@ describe("PATCH /api/v1/shop", () => {
   it("names the unknown field and lists the settings it takes", async () => {
     const { body } = await change({ colour: "black" });
     expect(body.error.message).toBe(
-      'The field "colour" is invalid: not a setting of the shop: remove it (the settings are name, address, phone, email, timeZone, hours, closedDates, tolerancePct, fittingPerTireCents, disposalPerTireCents, tireFeePerTireCents, taxRateBp, taxServices, fittingBays, fittingMinutes, leadMinutes, cancelCutoffHours).',
+      'The field "colour" is invalid: not a setting of the shop: remove it (the settings are name, address, phone, email, timeZone, hours, closedDates, tolerancePct, fittingPerTireCents, disposalPerTireCents, tireFeePerTireCents, taxRateBp, taxServices, fittingBays, fittingMinutes, leadMinutes, cancelCutoffHours, wearLimit32).',
     );
   });
 

@@ -123,6 +123,31 @@ describe.each(testDatabaseKinds)("Fit cards on %s", (kind) => {
     }
   });
 
+  it("keeps the depths of the tires that stay on an all-wheel-drive vehicle and judges each tire beside them", async () => {
+    await database.db.update(stockItem).set({ treadDepth32: 10 }).where(eq(stockItem.sku, "FC-17"));
+    const saved = await createFitCard(database.db, author.id, cardInput({ wear: { remaining32: [7, 7.5, 8], limit32: 2 } }));
+    if (!saved.ok) throw new Error(saved.message);
+    const lookup = await readFitCard(database.db, saved.slug);
+    if (lookup.status !== "found") throw new Error(lookup.status);
+    expect(lookup.card.wear).toEqual({ remaining32: [7, 7.5, 8], limit32: 2 });
+    // 10/32 new beside 7 to 8/32 with a 2/32 limit: shave to 7 + 2 = 9/32 (worked by hand).
+    expect(lookup.card.tires.map((tire) => [tire.sku, tire.wear?.verdict, tire.wear?.shaveTo32])).toEqual([
+      ["FC-17", "shave", 9],
+      ["FC-18", "otherSize", null],
+    ]);
+    const plain = await createFitCard(database.db, author.id, cardInput());
+    const plainLookup = plain.ok ? await readFitCard(database.db, plain.slug) : null;
+    expect(plainLookup?.status === "found" && plainLookup.card.wear).toBeNull();
+  });
+
+  it("refuses depths that are not whole or halves, and a limit saved without the depths it belongs to", async () => {
+    expect(newFitCardSchema.safeParse({ ...cardInput(), wear: { remaining32: [7.25, 8], limit32: 2 } }).success).toBe(false);
+    expect(newFitCardSchema.safeParse({ ...cardInput(), wear: { remaining32: [7], limit32: 2 } }).success).toBe(false);
+    expect(newFitCardSchema.safeParse({ ...cardInput(), wear: { remaining32: [7, 8], limit32: 9 } }).success).toBe(false);
+    const [one] = await database.db.select().from(fitCard).limit(1);
+    await expect(database.db.update(fitCard).set({ wearLimit32: 2, wearRemaining32: null }).where(eq(fitCard.id, one!.id))).rejects.toThrow();
+  });
+
   it("gives every card its own slug", async () => {
     const slugs = new Set<string>();
     for (let i = 0; i < 40; i++) {

@@ -20,6 +20,7 @@ const saved: ShopSettings = {
   fittingMinutes: 60,
   leadMinutes: 120,
   cancelCutoffHours: 24,
+  wearLimit32: 2,
 };
 
 describe("the shop settings form", () => {

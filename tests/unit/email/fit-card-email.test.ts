@@ -33,6 +33,7 @@ const tire = (overrides: Partial<CardTire>): CardTire => ({
   priceCentsAtSave: 15_900,
   stillStocked: true,
   estimate: { quantity: 4, tiresCents: 59_600, servicesCents: 0, feesCents: 0, taxCents: 0, totalCents: 59_600 },
+  wear: null,
   ...overrides,
 });
 
@@ -56,6 +57,7 @@ const card: PublicFitCard = {
   tolerancePct: 3,
   quantity: 4,
   note: null,
+  wear: null,
   tires: [tire({}), tire({ sku: "OK-2", brand: "Okenby", line: "Ridge Sport", designation: "225/40R18", loadIndex: 92, speedSymbol: "Y", extraLoad: false, priceCents: 17_900 })],
 };
 

@@ -4,7 +4,7 @@ import { sidewallParts } from "@/content/sidewall-parts";
 import { parseMarking } from "@/lib/tire";
 
 describe("Sidewall school lessons", () => {
-  it("are exactly the eight topics other screens link to, in order", () => {
+  it("are exactly the nine topics other screens link to, in order", () => {
     expect(lessons.map((lesson) => lesson.slug)).toEqual([
       "load-index",
       "speed-symbols",
@@ -14,8 +14,9 @@ describe("Sidewall school lessons", () => {
       "winter-marks",
       "run-flat-and-xl",
       "overall-diameter",
+      "tread-depth",
     ]);
-    expect(learnSlugs).toHaveLength(8);
+    expect(learnSlugs).toHaveLength(9);
     expect(findLesson("no-such-topic")).toBeUndefined();
     expect(findLesson("toString")).toBeUndefined();
   });
@@ -24,6 +25,14 @@ describe("Sidewall school lessons", () => {
     for (const part of Object.values(sidewallParts)) {
       if (part.learnTopic) expect(findLesson(part.learnTopic), part.learnTopic).toBeDefined();
     }
+  });
+
+  it("work the tread-depth example with the core: 4/32 in of wear takes 6.35 mm off the diameter (2 × 4 × 0.79375 mm, worked by hand)", () => {
+    const text = JSON.stringify(findLesson("tread-depth"));
+    expect(text).toContain("3.2 mm of tread on each side");
+    expect(text).toContain("shaved to 8/32 in");
+    expect(text).toMatch(/vehicle maker/);
+    expect(text).toMatch(/qualified fitter/);
   });
 
   it("state the pressures at which a passenger load index is defined: SL 250 kPa (36 psi), XL 290 kPa (42 psi) (ETRTO, from memory)", () => {

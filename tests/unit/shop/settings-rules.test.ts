@@ -118,6 +118,7 @@ describe("what a change of settings did", () => {
     fittingMinutes: 60,
     leadMinutes: 120,
     cancelCutoffHours: 24,
+    wearLimit32: 2,
   };
 
   it("merges the address and the week part by part and sorts the closed dates", () => {

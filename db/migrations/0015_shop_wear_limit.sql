@@ -1,0 +1,2 @@
+ALTER TABLE "shop" ADD COLUMN "wear_limit32" double precision DEFAULT 2 NOT NULL;--> statement-breakpoint
+ALTER TABLE "shop" ADD CONSTRAINT "shop_wear_limit" CHECK ("shop"."wear_limit32" between 0.5 and 8 and "shop"."wear_limit32" * 2 = floor("shop"."wear_limit32" * 2));

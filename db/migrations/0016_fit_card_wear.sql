@@ -1,0 +1,3 @@
+ALTER TABLE "fit_card" ADD COLUMN "wear_remaining32" jsonb;--> statement-breakpoint
+ALTER TABLE "fit_card" ADD COLUMN "wear_limit32" double precision;--> statement-breakpoint
+ALTER TABLE "fit_card" ADD CONSTRAINT "fit_card_wear" CHECK (("fit_card"."wear_remaining32" is null) = ("fit_card"."wear_limit32" is null) and ("fit_card"."wear_limit32" is null or "fit_card"."wear_limit32" between 0.5 and 8));
