@@ -68,7 +68,8 @@ export default defineConfig({
       env: { FAKE_RESEND_PORT: new URL(fakeResendUrl).port },
     },
     {
-      command: `npm run build && node node_modules/next/dist/bin/next start -p ${port}`,
+      // scripts/e2e.mjs builds once for both of its lanes and says so with E2E_BUILT.
+      command: `${process.env.E2E_BUILT ? "" : "npm run build && "}node node_modules/next/dist/bin/next start -p ${port}`,
       url: `${baseURL}/api/health`,
       timeout: 300_000,
       reuseExistingServer: !process.env.CI,
