@@ -5,9 +5,11 @@
  * Goals: performance ≥ 90 and within 6 points of the bare page; accessibility, best practices and
  * SEO 100. LCP and TBT are reported beside the bare page's. Debian's Chromium, headless.
  *   npm run build && npm run bench:lighthouse
+ * LIGHTHOUSE_REPORT_DIR=<folder> also writes each run's whole report there (`<page>-<round>.json`):
+ * the LCP element and its phases, the long tasks and the network requests behind the figures.
  */
 import { type ChildProcess, spawn } from "node:child_process";
-import { mkdtempSync, rmSync } from "node:fs";
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import lighthouse from "lighthouse";
@@ -20,6 +22,7 @@ const CATEGORIES = ["performance", "accessibility", "best-practices", "seo"] as 
 const MIN_PERFORMANCE = 90;
 const MAX_BEHIND_BARE = 6;
 const CHROMIUM = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";
+const REPORT_DIR = process.env.LIGHTHOUSE_REPORT_DIR;
 
 type Category = (typeof CATEGORIES)[number];
 
@@ -61,10 +64,14 @@ async function startChromium(): Promise<Chromium> {
   return { port, stop };
 }
 
-async function audit(url: string, port: number): Promise<Audit> {
+/** The report's file name: the page's path with its query, in characters any file system takes. */
+const reportName = (page: string, round: number) => `${page.replace(/^\//, "").replace(/[^\w.-]+/g, "_") || "home"}-${round + 1}.json`;
+
+async function audit(url: string, port: number, reportFile?: string): Promise<Audit> {
   const result = await lighthouse(url, { port, output: "json", logLevel: "error", onlyCategories: [...CATEGORIES] });
   if (!result) throw new Error(`Lighthouse gave no result for ${url}`);
   const { lhr } = result;
+  if (reportFile) writeFileSync(reportFile, JSON.stringify(lhr));
   if (lhr.runtimeError) throw new Error(`Lighthouse could not audit ${url}: ${lhr.runtimeError.message}`);
   const scores = Object.fromEntries(CATEGORIES.map((id) => [id, Math.round((lhr.categories[id]?.score ?? 0) * 100)])) as Record<Category, number>;
   const findings = Object.values(lhr.audits)
@@ -137,8 +144,12 @@ async function measure(quick: boolean, print: boolean): Promise<BenchRow[]> {
     // One unmeasured visit each, so the first audited load does not pay for the server's first render.
     for (const target of targets) await fetch(target.url);
     const runs = new Map(targets.map((target) => [target.page, [] as Audit[]]));
+    if (REPORT_DIR) mkdirSync(REPORT_DIR, { recursive: true });
     for (let round = 0; round < rounds; round++) {
-      for (const target of targets) runs.get(target.page)!.push(await audit(target.url, chromium.port));
+      for (const target of targets) {
+        const reportFile = REPORT_DIR ? path.join(REPORT_DIR, reportName(target.page, round)) : undefined;
+        runs.get(target.page)!.push(await audit(target.url, chromium.port, reportFile));
+      }
     }
     const all = targets.map((target) => ({ page: target.page, runs: runs.get(target.page)! }));
     if (print) printDetails(all);
