@@ -94,3 +94,22 @@ test.describe("the finder beside the tires that stay on an all-wheel-drive vehic
     await expectNoAxeViolations(page);
   });
 });
+
+test.describe("Wear match at a phone's and a desktop's width", () => {
+  const pages = [
+    ["finder", `${FINDER}&awd=1&quantity=2&remaining32=9%2C10&sort=noShaving`, /Fits as it is: 10\/32 in new/],
+    ["page", "/wear-match?size=235-65R17&newTreadDepth32=12&remaining32=9,9.5,10", /Shave the new tire to 11\/32 in/],
+  ] as const;
+  for (const [name, path, verdict] of pages) {
+    for (const width of [390, 1280]) {
+      test(`the ${name} looks right at ${width} px`, async ({ page, isMobile }, testInfo) => {
+        test.skip(isMobile !== (width === 390), "each width once, in its own project");
+        await page.setViewportSize({ width, height: 844 });
+        await page.goto(path);
+        await expect(page.getByText(verdict).first()).toBeVisible();
+        expect(await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth)).toBe(true);
+        await page.screenshot({ path: testInfo.outputPath(`wear-${name}-${width}.png`), fullPage: true });
+      });
+    }
+  }
+});
