@@ -54,11 +54,20 @@ export function ReplacementFinder({ initialQuery, original, brands, defaultToler
   const wear = readFinderWear(query, shopWearLimit32);
   const staying = wear.on ? wear.staying : null;
   const wearOf = staying && data.first ? (tire: Candidate) => candidateWear(tire, data.first!.original.designation, staying) : null;
-  // Sorted by tread depth, the whole list is here at once and is shown a page at a time.
+  // Sorted by tread depth, the list comes whole (up to the API's largest page) and is shown a dozen
+  // at a time; beyond that page, Show more fetches the next.
   const [wearShown, setWearShown] = useState(FINDER_PAGE_SIZE);
   const wearSorted = wearOf && query.sort === WEAR_SORT ? byWearMatch(data.results, wearOf) : null;
   const list = wearSorted
-    ? { ...data, results: wearSorted.slice(0, wearShown), hasMore: wearSorted.length > wearShown, loadMore: () => setWearShown((shown) => shown + FINDER_PAGE_SIZE) }
+    ? {
+        ...data,
+        results: wearSorted.slice(0, wearShown),
+        hasMore: wearSorted.length > wearShown || data.hasMore,
+        loadMore: () => {
+          if (wearSorted.length <= wearShown) data.loadMore();
+          setWearShown((shown) => shown + FINDER_PAGE_SIZE);
+        },
+      }
     : data;
   const quoteWear = staying && wearOf ? { staying, verdictOf: (tire: Candidate) => candidateWearWords(wearOf(tire)) } : null;
   const pick = (sku: string, on: boolean) =>
