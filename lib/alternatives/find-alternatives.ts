@@ -2,7 +2,7 @@ import { z } from "zod";
 import type { Database } from "@/db/client";
 import type { FinderSort } from "@/lib/tire";
 import { encodeAlternativesCursor, type AlternativesCursor } from "./cursor";
-import type { FinderAnswer } from "./answer-rows";
+import { namedAnswer, type FinderAnswer, type FinderStatementAnswer } from "./answer-rows";
 import { finderStatement, NEAR_MISS_LIMIT } from "./statement";
 import { failedRuleWords, isNearMiss, judgeCandidate, noteWords, qualifyingReasonWords, type Verdict } from "@/lib/tire";
 import { judgedCandidate } from "./judged-candidate";
@@ -79,8 +79,8 @@ function confirmed<Row extends CandidateRow>(rows: Row[], verdictOf: (row: Row) 
 
 /**
  * The finder statement's answer for one search (a page plus one row, to tell whether more follow).
- * It is built by the statement's own json_build_object, so it is taken as it comes; the tests hold
- * it to finderAnswerSchema, and the judge confirms every row before it is shown.
+ * It is built by the statement's own json_build_array, so it is taken as it comes, its rows' values
+ * named; the tests hold it to finderAnswerSchema, and the judge confirms every row before it is shown.
  */
 export async function finderAnswer(db: Database, original: Original, options: AlternativesOptions): Promise<FinderAnswer> {
   const shape = finderShape(original, options, options.quantity);
@@ -88,7 +88,8 @@ export async function finderAnswer(db: Database, original: Original, options: Al
   const run = cachedStatement(db, `${options.sort} ${options.cursor ? "after" : "first"} ${JSON.stringify(shape)}`, () =>
     finderStatement(db, ruleSql(shape), options.sort, options.cursor !== null),
   );
-  return (await run({ ...values, ...cursorValues(options.cursor), limit: options.limit + 1, nearMissLimit: NEAR_MISS_LIMIT })) as FinderAnswer;
+  const answer = await run({ ...values, ...cursorValues(options.cursor), limit: options.limit + 1, nearMissLimit: NEAR_MISS_LIMIT });
+  return namedAnswer(answer as FinderStatementAnswer);
 }
 
 /**
