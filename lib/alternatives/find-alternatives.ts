@@ -68,13 +68,19 @@ type CandidateRow = Parameters<typeof judgedCandidate>[0] & Parameters<typeof to
  * The SQL picks the rows; the judge decides what is said of each. A row the judge does not confirm
  * is never shown (the property tests prove the two agree; this keeps a disagreement from reaching a driver).
  */
-function confirmed<Row extends CandidateRow>(rows: Row[], verdictOf: (row: Row) => Verdict, holds: (verdict: Verdict) => boolean) {
-  return rows.flatMap((row) => {
+function confirmed<Row extends CandidateRow, Shown>(
+  rows: Row[],
+  verdictOf: (row: Row) => Verdict,
+  holds: (verdict: Verdict) => boolean,
+  show: (row: Row, verdict: Verdict) => Shown,
+): Shown[] {
+  const shown: Shown[] = [];
+  for (const row of rows) {
     const verdict = verdictOf(row);
-    if (holds(verdict)) return [{ row, verdict }];
-    console.error(`finder: the judge does not confirm ${row.sku} (rules ${verdict.failedRules.join(", ")})`);
-    return [];
-  });
+    if (holds(verdict)) shown.push(show(row, verdict));
+    else console.error(`finder: the judge does not confirm ${row.sku} (rules ${verdict.failedRules.join(", ")})`);
+  }
+  return shown;
 }
 
 /**
@@ -115,18 +121,18 @@ export async function findAlternatives(db: Database, original: Original, options
     tolerancePct: options.tolerancePct,
     quantity: options.quantity,
     total,
-    results: confirmed(page, verdictOf, (verdict) => verdict.qualifies).map(({ row, verdict }) => ({
-      ...toTire(row),
-      diameterDiffPct: row.diffPct,
-      reasons: qualifyingReasonWords(verdict),
-      notes: noteWords(verdict.notes),
-      estimate: estimateSet(row.priceCents, options.quantity, options.charges),
-    })),
+    // Object.assign rather than a spread into a new object, which made this the slowest step of a page (measured).
+    results: confirmed(page, verdictOf, (verdict) => verdict.qualifies, (row, verdict) =>
+      Object.assign(toTire(row), {
+        diameterDiffPct: row.diffPct,
+        reasons: qualifyingReasonWords(verdict),
+        notes: noteWords(verdict.notes),
+        estimate: estimateSet(row.priceCents, options.quantity, options.charges),
+      }),
+    ),
     nextCursor: hasMore ? encodeAlternativesCursor({ sort: options.sort, key: last.sortKey, priceCents: last.priceCents, sku: last.sku }) : null,
-    nearMisses: confirmed(nearMisses, verdictOf, isNearMiss).map(({ row, verdict }) => ({
-      ...toTire(row),
-      diameterDiffPct: row.diffPct,
-      failed: failedRuleWords(verdict),
-    })),
+    nearMisses: confirmed(nearMisses, verdictOf, isNearMiss, (row, verdict) =>
+      Object.assign(toTire(row), { diameterDiffPct: row.diffPct, failed: failedRuleWords(verdict) }),
+    ),
   };
 }
