@@ -2,7 +2,7 @@ import { z } from "zod";
 import type { Database } from "@/db/client";
 import type { FinderSort } from "@/lib/tire";
 import { encodeAlternativesCursor, type AlternativesCursor } from "./cursor";
-import type { FinderAnswer } from "./answer-rows";
+import { namedAnswer, type FinderAnswer, type FinderStatementAnswer } from "./answer-rows";
 import { finderStatement, NEAR_MISS_LIMIT } from "./statement";
 import { failedRuleWords, isNearMiss, judgeCandidate, noteWords, qualifyingReasonWords, type Verdict } from "@/lib/tire";
 import { judgedCandidate } from "./judged-candidate";
@@ -68,19 +68,25 @@ type CandidateRow = Parameters<typeof judgedCandidate>[0] & Parameters<typeof to
  * The SQL picks the rows; the judge decides what is said of each. A row the judge does not confirm
  * is never shown (the property tests prove the two agree; this keeps a disagreement from reaching a driver).
  */
-function confirmed<Row extends CandidateRow>(rows: Row[], verdictOf: (row: Row) => Verdict, holds: (verdict: Verdict) => boolean) {
-  return rows.flatMap((row) => {
+function confirmed<Row extends CandidateRow, Shown>(
+  rows: Row[],
+  verdictOf: (row: Row) => Verdict,
+  holds: (verdict: Verdict) => boolean,
+  show: (row: Row, verdict: Verdict) => Shown,
+): Shown[] {
+  const shown: Shown[] = [];
+  for (const row of rows) {
     const verdict = verdictOf(row);
-    if (holds(verdict)) return [{ row, verdict }];
-    console.error(`finder: the judge does not confirm ${row.sku} (rules ${verdict.failedRules.join(", ")})`);
-    return [];
-  });
+    if (holds(verdict)) shown.push(show(row, verdict));
+    else console.error(`finder: the judge does not confirm ${row.sku} (rules ${verdict.failedRules.join(", ")})`);
+  }
+  return shown;
 }
 
 /**
  * The finder statement's answer for one search (a page plus one row, to tell whether more follow).
- * It is built by the statement's own json_build_object, so it is taken as it comes; the tests hold
- * it to finderAnswerSchema, and the judge confirms every row before it is shown.
+ * It is built by the statement's own json_build_array, so it is taken as it comes, its rows' values
+ * named; the tests hold it to finderAnswerSchema, and the judge confirms every row before it is shown.
  */
 export async function finderAnswer(db: Database, original: Original, options: AlternativesOptions): Promise<FinderAnswer> {
   const shape = finderShape(original, options, options.quantity);
@@ -88,7 +94,8 @@ export async function finderAnswer(db: Database, original: Original, options: Al
   const run = cachedStatement(db, `${options.sort} ${options.cursor ? "after" : "first"} ${JSON.stringify(shape)}`, () =>
     finderStatement(db, ruleSql(shape), options.sort, options.cursor !== null),
   );
-  return (await run({ ...values, ...cursorValues(options.cursor), limit: options.limit + 1, nearMissLimit: NEAR_MISS_LIMIT })) as FinderAnswer;
+  const answer = await run({ ...values, ...cursorValues(options.cursor), limit: options.limit + 1, nearMissLimit: NEAR_MISS_LIMIT });
+  return namedAnswer(answer as FinderStatementAnswer);
 }
 
 /**
@@ -114,18 +121,18 @@ export async function findAlternatives(db: Database, original: Original, options
     tolerancePct: options.tolerancePct,
     quantity: options.quantity,
     total,
-    results: confirmed(page, verdictOf, (verdict) => verdict.qualifies).map(({ row, verdict }) => ({
-      ...toTire(row),
-      diameterDiffPct: row.diffPct,
-      reasons: qualifyingReasonWords(verdict),
-      notes: noteWords(verdict.notes),
-      estimate: estimateSet(row.priceCents, options.quantity, options.charges),
-    })),
+    // Object.assign rather than a spread into a new object, which made this the slowest step of a page (measured).
+    results: confirmed(page, verdictOf, (verdict) => verdict.qualifies, (row, verdict) =>
+      Object.assign(toTire(row), {
+        diameterDiffPct: row.diffPct,
+        reasons: qualifyingReasonWords(verdict),
+        notes: noteWords(verdict.notes),
+        estimate: estimateSet(row.priceCents, options.quantity, options.charges),
+      }),
+    ),
     nextCursor: hasMore ? encodeAlternativesCursor({ sort: options.sort, key: last.sortKey, priceCents: last.priceCents, sku: last.sku }) : null,
-    nearMisses: confirmed(nearMisses, verdictOf, isNearMiss).map(({ row, verdict }) => ({
-      ...toTire(row),
-      diameterDiffPct: row.diffPct,
-      failed: failedRuleWords(verdict),
-    })),
+    nearMisses: confirmed(nearMisses, verdictOf, isNearMiss, (row, verdict) =>
+      Object.assign(toTire(row), { diameterDiffPct: row.diffPct, failed: failedRuleWords(verdict) }),
+    ),
   };
 }

@@ -29,12 +29,17 @@ export interface PickSource {
 const SKIPPED_ITEM_COST = 0.1;
 
 const rowFields = { ...tireStockColumns, ...ruleFactColumns, ...tireLineColumns };
+
+/** The names of a candidate row's values, in the order pickItems writes them. */
+export const CANDIDATE_ROW_FIELDS = [...Object.keys(rowFields), "diffPct", "sortKey"] as const;
 const itemColumns = sql`${stockItem.id}, ${stockItem.priceCents}, ${stockItem.sku}`;
 const cheapestFirst = sql`order by ${stockItem.priceCents}, ${skuPlainOrder}`;
 
 /**
  * The first `limit` items of some fitments by (sort key, price, SKU in plain character order), as
- * one JSON array of candidate rows (see finder-answer).
+ * one JSON array of candidate rows, each an array of its values in the order of CANDIDATE_ROW_FIELDS
+ * (see answer-rows): PostgreSQL writes an array of values in about a third of the time it takes to
+ * write the same row as an object, key by key.
  *
  * A fitment's items all share its sort key, so only fitments with fewer than `limit` items at a
  * smaller key ("before") can hold a shown item, and at most `limit − before` of them. Fitments of
@@ -83,8 +88,7 @@ export function pickItems({ name, limit, itemOfSize, itemFilter, after }: PickSo
     ) as "items"
     order by "sort_key", "price_cents", "sku" collate "C"
     limit ${limit}`;
-  const fields = Object.entries(rowFields).map(([key, column]) => sql`${sql.raw(`'${key}'`)}, ${column}`);
-  const row = sql`json_build_object(${sql.join(fields, sql`, `)}, 'diffPct', "picked"."diff", 'sortKey', "picked"."sort_key")`;
+  const row = sql`json_build_array(${sql.join(Object.values(rowFields), sql`, `)}, "picked"."diff", "picked"."sort_key")`;
   return sql`(
     select coalesce(json_agg(${row} order by "picked"."sort_key", "picked"."price_cents", "picked"."sku" collate "C"), '[]'::json)
     from (${picked}) as "picked"
