@@ -34,6 +34,9 @@ export default defineConfig({
   forbidOnly: Boolean(process.env.CI),
   retries: process.env.CI ? 1 : 0,
   reporter: process.env.CI ? [["list"]] : [["list"]],
+  // Each of scripts/e2e.mjs's lanes keeps its traces and screenshots apart: Playwright empties its
+  // output folder when it starts, and both lanes' first workers would share one artifacts folder.
+  outputDir: process.env.E2E_OUTPUT_DIR ?? "test-results",
   timeout: 30_000,
   // A wait, not a measure: on a shared, busy machine a sign-in and the page after it can take
   // longer than Playwright's default 5 s, and each expect still returns as soon as it holds.

@@ -19,7 +19,13 @@ const mailPort = Number(process.env.E2E_FAKE_RESEND_PORT ?? 3226);
 const lanes = [["phone"], ["desktop", "http"]];
 
 const runs = lanes.map((projects, lane) => {
-  const env = { ...process.env, E2E_BUILT: "1", E2E_PORT: String(port + lane), E2E_FAKE_RESEND_PORT: String(mailPort + lane) };
+  const env = {
+    ...process.env,
+    E2E_BUILT: "1",
+    E2E_PORT: String(port + lane),
+    E2E_FAKE_RESEND_PORT: String(mailPort + lane),
+    E2E_OUTPUT_DIR: `test-results/${projects.join("-")}`,
+  };
   const child = spawn(process.execPath, [...playwright, ...projects.map((project) => `--project=${project}`)], { stdio: "inherit", env });
   return new Promise((resolve) => child.once("exit", (code) => resolve(code ?? 1)));
 });
