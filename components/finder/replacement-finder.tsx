@@ -11,7 +11,7 @@ import type { OriginalReading } from "@/lib/finder/original-marking";
 import { placardFor } from "@/lib/finder/placard-for";
 import { readFinderWear, WEAR_SORT } from "@/lib/finder/finder-wear";
 import { byWearMatch, candidateWear } from "@/lib/tire/wear-match-candidate";
-import { candidateWearWords } from "@/lib/tire/wear-match-words";
+import { candidateWearWords, stayingTiresWords } from "@/lib/tire/wear-match-words";
 import { SaveFitCard } from "@/components/fit-card/save-fit-card-button";
 import { AskTheShop, type AskTheShopHandle } from "@/components/quotes/ask-the-shop";
 import { finderQuoteTires, quoteCatalogTires } from "@/components/quotes/quote-tires";
@@ -69,7 +69,7 @@ export function ReplacementFinder({ initialQuery, original, brands, defaultToler
         },
       }
     : data;
-  const quoteWear = staying && wearOf ? { staying, verdictOf: (tire: Candidate) => candidateWearWords(wearOf(tire)) } : null;
+  const quoteWear = staying && wearOf ? { staying: stayingTiresWords(staying), verdictOf: (tire: Candidate) => candidateWearWords(wearOf(tire)) } : null;
   const pick = (sku: string, on: boolean) =>
     setPicked((list) => (on ? [...list, ...data.results.filter((tire) => tire.sku === sku)] : list.filter((tire) => tire.sku !== sku)));
 

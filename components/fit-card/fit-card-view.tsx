@@ -5,7 +5,7 @@ import { SafetyCautions } from "@/components/ui/safety-cautions";
 import { originalServiceWords, placardMinimumWords } from "@/lib/fit-cards/original-words";
 import type { PublicFitCard } from "@/lib/fit-cards/read-card";
 import type { ShopContact } from "@/lib/shop/queries";
-import { formatDepth32, measurableSizeFromSlug, seasonTireWords, type MeasurableSize } from "@/lib/tire";
+import { formatDepth32, measurableSizeFromSlug, seasonTireWords, stayingTiresWords, type MeasurableSize } from "@/lib/tire";
 import { FitCardComparison } from "./fit-card-comparison";
 import { FitCardTires } from "./fit-card-tires";
 import { ShareActions } from "./share-actions";
@@ -55,7 +55,7 @@ export function FitCardView({ card, shop, url, timeZone }: { card: PublicFitCard
       <AskTheShop
         source="fit-card"
         reference={card.slug}
-        tires={fitCardQuoteTires(card)}
+        tires={fitCardQuoteTires(card, card.wear ? stayingTiresWords(card.wear) : null)}
         catalogTires={quoteCatalogTires(card.tires.filter((tire) => tire.stillStocked))}
         quantity={card.quantity}
       />

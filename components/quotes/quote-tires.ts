@@ -1,27 +1,28 @@
 import { describeTire, type ServiceDescribed } from "@/lib/tire/describe-tire";
-import type { StayingTires } from "@/lib/tire/wear-match-candidate";
-import { stayingTiresWords } from "@/lib/tire/wear-match-words";
 
 type PickedTire = ServiceDescribed & { brand: string; line: string };
 
-/** The tires that stay on an all-wheel-drive vehicle, and each picked tire's verdict beside them. */
+/**
+ * The tires that stay on an all-wheel-drive vehicle in words (stayingTiresWords), and each picked
+ * tire's verdict beside them: worded by the caller, so pages that never judge wear carry no wear code.
+ */
 export interface QuoteWear<T> {
-  staying: StayingTires;
+  staying: string;
   verdictOf: (tire: T) => string;
 }
 
 /** What the finder sends: the tire on the car, the tires that stay (if any are judged), then any tires picked from the results. */
 export function finderQuoteTires<T extends PickedTire>(original: ServiceDescribed, picked: readonly T[], wear?: QuoteWear<T> | null): string {
-  const lines = [`Replacing ${describeTire(original)}`, ...(wear ? [stayingTiresWords(wear.staying)] : [])];
+  const lines = [`Replacing ${describeTire(original)}`, ...(wear ? [wear.staying] : [])];
   for (const tire of picked) lines.push(`${tire.brand} ${tire.line} ${describeTire(tire)}${wear ? ` (${wear.verdictOf(tire)})` : ""}`);
   return lines.join("\n");
 }
 
 /** What a Fit card sends: its picked tires (with their verdicts beside the tires that stay, if any), or its sizes when none were picked. */
-export function fitCardQuoteTires(card: { sizes: string[]; wear: StayingTires | null; tires: readonly (PickedTire & { wear: { words: string } | null })[] }): string {
+export function fitCardQuoteTires(card: { sizes: string[]; tires: readonly (PickedTire & { wear: { words: string } | null })[] }, stayingWords: string | null): string {
   if (card.tires.length === 0) return card.sizes.join(", ");
   const tires = card.tires.map((tire) => `${tire.brand} ${tire.line} ${describeTire(tire)}${tire.wear ? ` (${tire.wear.words})` : ""}`);
-  return [...(card.wear ? [stayingTiresWords(card.wear)] : []), ...tires].join("\n");
+  return [...(stayingWords ? [stayingWords] : []), ...tires].join("\n");
 }
 
 /**

@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { renderEmail } from "@/lib/email/render-email";
 import { quoteReplyEmail, requestConfirmationEmail, requestToShopEmail } from "@/lib/quotes/quote-emails";
 import { finderQuoteTires, fitCardQuoteTires } from "@/components/quotes/quote-tires";
-import { describeTire } from "@/lib/tire";
+import { describeTire, stayingTiresWords } from "@/lib/tire";
 
 const request = {
   id: 42,
@@ -72,17 +72,17 @@ describe("the tires a page fills in", () => {
   it("send the finder's original and the picked tires, or a Fit card's tires or sizes", () => {
     const picked = [{ brand: "Harrowgate", line: "Trailmere AT", designation: "235/65R17", loadIndex: 108, speedSymbol: "T" }];
     expect(finderQuoteTires({ designation: "235/65R17", loadIndex: 104, speedSymbol: "H" }, picked)).toBe("Replacing 235/65R17 104H\nHarrowgate Trailmere AT 235/65R17 108T");
-    expect(fitCardQuoteTires({ sizes: ["225/45R17", "225/40R18"], wear: null, tires: [] })).toBe("225/45R17, 225/40R18");
-    expect(fitCardQuoteTires({ sizes: ["235/65R17"], wear: null, tires: picked.map((tire) => ({ ...tire, wear: null })) })).toBe("Harrowgate Trailmere AT 235/65R17 108T");
+    expect(fitCardQuoteTires({ sizes: ["225/45R17", "225/40R18"], tires: [] }, null)).toBe("225/45R17, 225/40R18");
+    expect(fitCardQuoteTires({ sizes: ["235/65R17"], tires: picked.map((tire) => ({ ...tire, wear: null })) }, null)).toBe("Harrowgate Trailmere AT 235/65R17 108T");
   });
 
   it("send the tires that stay on an all-wheel-drive vehicle and each picked tire's verdict beside them", () => {
     const picked = [{ brand: "Harrowgate", line: "Trailmere AT", designation: "235/65R17", loadIndex: 108, speedSymbol: "T" }];
-    const staying = { remaining32: [7, 7.5], limit32: 2 };
+    const staying = stayingTiresWords({ remaining32: [7, 7.5], limit32: 2 });
     const verdict = "Shave to 9/32 in before fitting: 11/32 in new";
     const expected = `Replacing 235/65R17 104H\nAll-wheel drive: 2 tires stay at 7/32 in, 7.5/32 in (limit 2/32 in)\nHarrowgate Trailmere AT 235/65R17 108T (${verdict})`;
     expect(finderQuoteTires({ designation: "235/65R17", loadIndex: 104, speedSymbol: "H" }, picked, { staying, verdictOf: () => verdict })).toBe(expected);
-    const card = { sizes: ["235/65R17"], wear: staying, tires: picked.map((tire) => ({ ...tire, wear: { words: verdict } })) };
-    expect(fitCardQuoteTires(card)).toBe(expected.split("\n").slice(1).join("\n"));
+    const card = { sizes: ["235/65R17"], tires: picked.map((tire) => ({ ...tire, wear: { words: verdict } })) };
+    expect(fitCardQuoteTires(card, staying)).toBe(expected.split("\n").slice(1).join("\n"));
   });
 });
