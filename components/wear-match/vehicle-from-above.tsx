@@ -1,4 +1,4 @@
-import { formatDepth32, formatWornLength, shaveDepthToShow, type TireOnVehicle, type WearMatch, wornTire } from "@/lib/tire";
+import { formatDepth32, formatDepth32Short, formatWornLength, shaveDepthToShow, type TireOnVehicle, type WearMatch, wornTire } from "@/lib/tire";
 
 // A generic vehicle's track and wheelbase (mm): only where the tires sit, not any vehicle's figures.
 const TRACK_MM = 1600;
@@ -71,14 +71,14 @@ export function VehicleFromAbove({ match, sectionWidthMm, description }: { match
             >
               <tspan x={corner.endsWith("right") ? x(corner) - 50 : x(corner) + width + 50}>{isNew ? "new" : "stays"}</tspan>
               <tspan x={corner.endsWith("right") ? x(corner) - 50 : x(corner) + width + 50} dy={150}>
-                {`${Math.round(tire.depth32 * 100) / 100}/32`}
+                {formatDepth32Short(tire.depth32)}
               </tspan>
             </text>
           </g>
         ))}
         <rect x={newX} y={newY} width={width} height={length} rx={60} className="fill-accent" />
         <text x={newX + width / 2} y={newY - 60} textAnchor="middle" className="fill-ink" fontSize={120}>
-          {`new, ${Math.round(match.newTire.depth32 * 100) / 100}/32`}
+          {`new, ${formatDepth32Short(match.newTire.depth32)}`}
         </text>
       </svg>
       <figcaption className="mt-2 text-sm text-ink-soft">

@@ -1,7 +1,5 @@
-import { formatDepth32, formatOneDecimal, formatWearLimit, formatWornLength, MM_PER_32ND, type WearLimit, type WearMatch } from "@/lib/tire";
+import { formatDepth32, formatDepth32Short as depth, formatOneDecimal, formatWearLimit, formatWornLength, MM_PER_32ND, type WearLimit, type WearMatch } from "@/lib/tire";
 import { placeTires } from "./vehicle-from-above";
-
-const depth = (depth32: number) => `${Math.round(depth32 * 100) / 100}/32`;
 
 /** Every tire's depth, diameter and circumference, then the three comparisons that decide the verdict. */
 export function WearArithmetic({ match, limit, limitFromShop }: { match: WearMatch; limit: WearLimit; limitFromShop: boolean }) {

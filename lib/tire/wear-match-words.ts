@@ -22,7 +22,10 @@ export function formatWearLimit(limit: WearLimit, limit32: number): string {
   return `${upToHundredths(limit.value)} mm of rolling circumference (about ${upToHundredths(limit32)}/32 in of tread depth)`;
 }
 
-const depth = (depth32: number) => `${upToHundredths(depth32)}/32 in`;
+/** A depth as a drawing labels it, without the unit: "6.5/32". */
+export const formatDepth32Short = (depth32: number): string => `${upToHundredths(depth32)}/32`;
+
+const depth = (depth32: number) => `${formatDepth32Short(depth32)} in`;
 
 /** The verdict in one sentence, with the numbers that decided it. */
 export function wearVerdictSentence(match: WearMatch, limit: WearLimit): string {
