@@ -1,7 +1,7 @@
 import pg from "pg";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { openServerPool } from "@/db/server-pool";
-import { createServerDatabase } from "../helpers/test-database";
+import { createServerDatabase } from "../helpers/server-database";
 
 const serverUrl = process.env.TEST_DATABASE_URL;
 

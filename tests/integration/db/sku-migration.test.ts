@@ -7,7 +7,8 @@ import { migrateDatabase, openDatabase, type DatabaseHandle } from "@/db/client"
 import { isSku } from "@/lib/tire";
 import { measurableSizeFromSlug, sizeGeometry, speedSymbolRank } from "@/lib/tire";
 import { migrationsBefore } from "../helpers/migrations-before";
-import { createServerDatabase, testDatabaseKinds } from "../helpers/test-database";
+import { createServerDatabase } from "../helpers/server-database";
+import { testDatabaseKinds } from "../helpers/test-database";
 
 const LONG = "L".repeat(63);
 // SKUs the earlier rule (printable ASCII without spaces) allowed.

@@ -1,8 +1,7 @@
-import { randomBytes } from "node:crypto";
 import { readFileSync } from "node:fs";
-import pg from "pg";
 import { inject } from "vitest";
-import { type DatabaseHandle, migrateDatabase, openDatabase } from "@/db/client";
+import { type DatabaseHandle, openDatabase } from "@/db/client";
+import { createServerDatabase } from "./server-database";
 
 export type TestDatabaseKind = "pglite" | "postgres";
 
@@ -28,30 +27,10 @@ async function openPgliteFromSnapshot(): Promise<DatabaseHandle> {
   return openDatabase({ dataDir: "memory://", loadDataDir: new Blob([bytes]) });
 }
 
-async function onServer(serverUrl: string, statement: string): Promise<void> {
-  const admin = new pg.Client({ connectionString: serverUrl });
-  await admin.connect();
-  try {
-    await admin.query(statement);
-  } finally {
-    await admin.end();
-  }
-}
-
-/** A new, empty database on the server: its address, and a way to drop it (ending any connection left to it). */
-export async function createServerDatabase(serverUrl: string): Promise<{ name: string; url: string; drop: () => Promise<void> }> {
-  const name = `sidewise_test_${randomBytes(6).toString("hex")}`;
-  await onServer(serverUrl, `create database ${name}`);
-  const url = new URL(serverUrl);
-  url.pathname = `/${name}`;
-  return { name, url: url.toString(), drop: () => onServer(serverUrl, `drop database if exists ${name} with (force)`) };
-}
-
-/** A throw-away database on the server: created, migrated, and dropped again on close. */
+/** A throw-away database on the server: a copy of the run's migrated template, dropped again on close. */
 async function openServerDatabase(serverUrl: string): Promise<DatabaseHandle> {
-  const created = await createServerDatabase(serverUrl);
+  const created = await createServerDatabase(serverUrl, inject("postgresTemplate"));
   const handle = await openDatabase({ url: created.url });
-  await migrateDatabase(handle);
   return {
     ...handle,
     close: async () => {
