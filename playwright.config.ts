@@ -37,9 +37,9 @@ export default defineConfig({
   // Each of scripts/e2e.mjs's lanes keeps its traces and screenshots apart: Playwright empties its
   // output folder when it starts, and both lanes' first workers would share one artifacts folder.
   outputDir: process.env.E2E_OUTPUT_DIR ?? "test-results",
-  timeout: 30_000,
-  // A wait, not a measure: on a shared, busy machine a sign-in and the page after it can take
-  // longer than Playwright's default 5 s, and each expect still returns as soon as it holds.
+  // Waits, not measures: on a shared, busy machine (two suites at once) a long flow and a sign-in
+  // can take longer than Playwright's defaults, and each test and expect still ends as soon as it holds.
+  timeout: 60_000,
   expect: { timeout: 10_000 },
   use: {
     baseURL,
