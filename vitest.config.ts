@@ -13,6 +13,9 @@ export default defineConfig({
     reporters: process.env.CI ? ["verbose"] : ["default"],
     // Every file opens its own database, so files run side by side on every core (the default leaves one idle).
     maxWorkers: availableParallelism(),
+    // Worker threads rather than child processes: each file still gets its own module graph and copy of
+    // process.env, and the whole run took 230 s instead of 297 s on a 2-core machine, mostly in imports.
+    pool: "threads",
     // A wait, not a measure: a file that migrates a fresh database from nothing takes a few seconds alone
     // and several times that on a busy 2-core machine; every test still ends as soon as it passes.
     testTimeout: 90_000,
