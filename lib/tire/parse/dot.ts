@@ -6,13 +6,22 @@ import { isDigit, isLetter, isSpace } from "./tokens";
 const TIN_MAX_SYMBOLS = 13;
 /** 9 symbols before the date code make a 13-symbol TIN, which starts with a 3-symbol plant code. */
 const SYMBOLS_BEFORE_DATE_WITH_3_SYMBOL_PLANT = 9;
+/** Whether each ASCII character is one of `chars`, by its code: a look-up cheaper than a Set's in a loop over characters. */
+function asciiTable(chars: string): Uint8Array {
+  const table = new Uint8Array(128);
+  for (let i = 0; i < chars.length; i++) table[chars.charCodeAt(i)] = 1;
+  return table;
+}
+const isIn = (table: Uint8Array, c: number): boolean => c < 128 && table[c] === 1;
+
 /** TIN symbols never include G, I, O, Q, S or Z (49 CFR 574.5, from memory). */
-const NOT_TIN_SYMBOLS: ReadonlySet<number> = new Set([..."GIOQSZ"].map((letter) => letter.charCodeAt(0)));
+const NOT_TIN_SYMBOLS = asciiTable("GIOQSZ");
 /** Words that end a TIN when they follow it on the same line; only groups starting with a letter are looked up. */
 const AFTER_TIN = ["MAX", "MAXIMUM", "LOAD", "XL", "SL", "TREADWEAR", "TRACTION", "TEMPERATURE", "TEMP", "UTQG", "DOT", "TIN"];
 /** Marks that may close the last group of a TIN, besides whitespace and the end of the text. */
-const CLOSING_MARKS: ReadonlySet<number> = new Set([...",;.)"].map((mark) => mark.charCodeAt(0)));
-const KEYWORD_GAP_MARKS: ReadonlySet<number> = new Set([...":#-"].map((mark) => mark.charCodeAt(0)));
+const CLOSING_MARKS = asciiTable(",;.)");
+/** Marks that may stand between the keyword and the symbols ("DOT: …", "DOT# …", "TIN-…"). */
+const KEYWORD_GAP_MARKS = asciiTable(":#-");
 
 const [D, I, N, O, T] = [..."DINOT"].map((letter) => letter.charCodeAt(0));
 /** Clearing bit 5 upper-cases an ASCII letter, and turns no other character into one. */
@@ -39,7 +48,10 @@ function spells(input: string, from: number, to: number, word: string): boolean 
   return true;
 }
 
-const isWordAfterTin = (input: string, from: number, to: number): boolean => AFTER_TIN.some((word) => spells(input, from, to, word));
+function isWordAfterTin(input: string, from: number, to: number): boolean {
+  for (const word of AFTER_TIN) if (spells(input, from, to, word)) return true;
+  return false;
+}
 
 /** Records the space-separated symbol groups from `from` on, as long as they can still belong to one TIN; their count. */
 function readGroups(input: string, from: number): number {
@@ -51,7 +63,7 @@ function readGroups(input: string, from: number): number {
     while (end < input.length && isAlnum(input.charCodeAt(end))) end++;
     if (end === pos) break;
     const after = end < input.length ? input.charCodeAt(end) : 0;
-    const closes = end === input.length || isSpace(after) || CLOSING_MARKS.has(after);
+    const closes = end === input.length || isSpace(after) || isIn(CLOSING_MARKS, after);
     if (!closes || symbols + end - pos > TIN_MAX_SYMBOLS || (isLetter(input.charCodeAt(pos)) && isWordAfterTin(input, pos, end))) break;
     groups[2 * count] = pos;
     groups[2 * count + 1] = end;
@@ -66,7 +78,7 @@ function readGroups(input: string, from: number): number {
 /** The symbol groups after a "DOT" or "TIN" keyword starting at `keywordAt`; their count. */
 function readGroupsAfterKeyword(input: string, keywordAt: number): number {
   let from = keywordAt + 3;
-  while (from < input.length && (isSpace(input.charCodeAt(from)) || KEYWORD_GAP_MARKS.has(input.charCodeAt(from)))) from++;
+  while (from < input.length && (isSpace(input.charCodeAt(from)) || isIn(KEYWORD_GAP_MARKS, input.charCodeAt(from)))) from++;
   return readGroups(input, from);
 }
 
@@ -99,7 +111,7 @@ function tinThrough(input: string, g: number): string {
 function hasNotTinSymbol(input: string, g: number, dateAt: number): boolean {
   for (let k = 0; k <= g; k++) {
     const end = k === g ? dateAt : groupEnd(k);
-    for (let i = groupStart(k); i < end; i++) if (NOT_TIN_SYMBOLS.has(upper(input.charCodeAt(i)))) return true;
+    for (let i = groupStart(k); i < end; i++) if (isIn(NOT_TIN_SYMBOLS, upper(input.charCodeAt(i)))) return true;
   }
   return false;
 }
