@@ -1,13 +1,29 @@
 import type { TemperatureGrade, TractionGrade } from "../types";
-import { addSpan, endsChunk, glued, numAt, skipPunct, wordAt, type Reader } from "./reader";
+import { addSpan, endOf, endsChunk, glued, numAt, skipPunct, startOf, wordAt, type Draft, type Reader } from "./reader";
 
 export const TRACTION: ReadonlySet<string> = new Set<TractionGrade>(["AA", "A", "B", "C"]);
-const TEMPERATURE: ReadonlySet<string> = new Set<TemperatureGrade>(["A", "B", "C"]);
+export const TEMPERATURE: ReadonlySet<string> = new Set<TemperatureGrade>(["A", "B", "C"]);
 
-function set<K extends "treadwear" | "traction" | "temperature">(r: Reader, key: K, value: NonNullable<Reader["draft"][K]>, label: string): void {
-  const d = r.draft;
-  if (d[key] !== null && d[key] !== value) d.warnings.push(`Two ${label} grades are marked (${d[key]} and ${value}); ${d[key]} is used.`);
+type GradeKey = "treadwear" | "traction" | "temperature";
+
+/** Records one grade; the first one marked is kept. */
+function set<K extends GradeKey>(d: Draft, key: K, value: NonNullable<Draft[K]>): void {
+  if (d[key] !== null && d[key] !== value) d.warnings.push(`Two ${key} grades are marked (${d[key]} and ${value}); ${d[key]} is used.`);
   d[key] ??= value;
+}
+
+/** Records the three grades written together in [start, end): "500 A A", "500AA A". */
+export function recordGrades(d: Draft, treadwear: number, traction: TractionGrade, temperature: TemperatureGrade, start: number, end: number): void {
+  set(d, "treadwear", treadwear);
+  set(d, "traction", traction);
+  set(d, "temperature", temperature);
+  d.spans.push({ part: "utqg", start, end });
+}
+
+/** Records one grade after its word, in [start, end): "TREADWEAR 500", "TRACTION A", "TEMP B". */
+export function recordGradeWord<K extends GradeKey>(d: Draft, key: K, value: NonNullable<Draft[K]>, start: number, end: number): void {
+  set(d, key, value);
+  d.spans.push({ part: "utqg", start, end });
 }
 
 /** Traction then temperature grade from the words at k: "AA A", "A A", "AAA", "AB". */
@@ -26,10 +42,7 @@ export function readUtqgGrades(r: Reader, i: number): number {
   if (!tw?.plain || tw.text.length < 2 || tw.text.length > 4) return 0;
   const g = grades(r, i + 1);
   if (!g || !TRACTION.has(g.traction) || !TEMPERATURE.has(g.temperature) || !endsChunk(r, g.next)) return 0;
-  set(r, "treadwear", tw.value, "treadwear");
-  set(r, "traction", g.traction as TractionGrade, "traction");
-  set(r, "temperature", g.temperature as TemperatureGrade, "temperature");
-  addSpan(r, "utqg", i, g.next);
+  recordGrades(r.draft, tw.value, g.traction as TractionGrade, g.temperature as TemperatureGrade, startOf(r, i), endOf(r, g.next));
   return g.next;
 }
 
@@ -43,16 +56,16 @@ export function readUtqgWords(r: Reader, i: number): number {
     return end;
   }
   if (!endsChunk(r, j + 1)) return 0;
+  const start = startOf(r, i);
   if (key === "TREADWEAR") {
     const n = numAt(r, j);
     if (!n?.plain) return 0;
-    set(r, "treadwear", n.value, "treadwear");
+    recordGradeWord(r.draft, "treadwear", n.value, start, endOf(r, j + 1));
   } else {
     const grade = wordAt(r, j) ?? "";
-    if (key === "TRACTION" && TRACTION.has(grade)) set(r, "traction", grade as TractionGrade, "traction");
-    else if ((key === "TEMPERATURE" || key === "TEMP") && TEMPERATURE.has(grade)) set(r, "temperature", grade as TemperatureGrade, "temperature");
+    if (key === "TRACTION" && TRACTION.has(grade)) recordGradeWord(r.draft, "traction", grade as TractionGrade, start, endOf(r, j + 1));
+    else if ((key === "TEMPERATURE" || key === "TEMP") && TEMPERATURE.has(grade)) recordGradeWord(r.draft, "temperature", grade as TemperatureGrade, start, endOf(r, j + 1));
     else return 0;
   }
-  addSpan(r, "utqg", i, j + 1);
   return j + 1;
 }
