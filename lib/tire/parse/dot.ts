@@ -1,4 +1,4 @@
-import { upper, valueOf } from "./chars";
+import { asciiTable, isIn, spells, upper, valueOf } from "./chars";
 import { addMiss, type Draft, type Reader } from "./reader";
 import { isDigit, isLetter, isSpace } from "./tokens";
 
@@ -6,14 +6,6 @@ import { isDigit, isLetter, isSpace } from "./tokens";
 const TIN_MAX_SYMBOLS = 13;
 /** 9 symbols before the date code make a 13-symbol TIN, which starts with a 3-symbol plant code. */
 const SYMBOLS_BEFORE_DATE_WITH_3_SYMBOL_PLANT = 9;
-/** Whether each ASCII character is one of `chars`, by its code: a look-up cheaper than a Set's in a loop over characters. */
-function asciiTable(chars: string): Uint8Array {
-  const table = new Uint8Array(128);
-  for (let i = 0; i < chars.length; i++) table[chars.charCodeAt(i)] = 1;
-  return table;
-}
-const isIn = (table: Uint8Array, c: number): boolean => c < 128 && table[c] === 1;
-
 /** TIN symbols never include G, I, O, Q, S or Z (49 CFR 574.5, from memory). */
 const NOT_TIN_SYMBOLS = asciiTable("GIOQSZ");
 /** Words that end a TIN when they follow it on the same line; only groups starting with a letter are looked up. */
@@ -39,13 +31,6 @@ const groupEnd = (g: number): number => groups[2 * g + 1] as number;
 function allDigits(input: string, from: number, to: number): boolean {
   for (let i = from; i < to; i++) if (!isDigit(input.charCodeAt(i))) return false;
   return to > from;
-}
-
-/** The letters in [from, to) spell `word` in any case. */
-function spells(input: string, from: number, to: number, word: string): boolean {
-  if (to - from !== word.length) return false;
-  for (let i = from; i < to; i++) if (upper(input.charCodeAt(i)) !== word.charCodeAt(i - from)) return false;
-  return true;
 }
 
 function isWordAfterTin(input: string, from: number, to: number): boolean {
@@ -99,12 +84,21 @@ function dateGroup(input: string, count: number): number {
 /** Where the date code in group `g` starts: the whole group, or its last 4 digits when the TIN runs together. */
 const dateStart = (g: number): number => (groupEnd(g) - groupStart(g) > 4 ? groupEnd(g) - 4 : groupStart(g));
 
-/** The TIN's symbols up to the end of group `g`, in capitals and without spaces. */
-function tinThrough(input: string, g: number): string {
-  let tin = input.slice(groupStart(0), groupEnd(0));
-  for (let k = 1; k <= g; k++) tin += input.slice(groupStart(k), groupEnd(k));
-  for (let i = 0; i < tin.length; i++) if (tin.charCodeAt(i) >= 97) return tin.toUpperCase();
-  return tin;
+/**
+ * The first `count` symbols of the TIN, in capitals and without spaces. Read from the text rather than
+ * from a TIN joined already: a joined string of 13 symbols is a rope, slow to read character by character.
+ */
+function tinSymbols(input: string, count: number): string {
+  let symbols = "";
+  let lower = false;
+  for (let g = 0; count > 0; g++) {
+    const start = groupStart(g);
+    const end = Math.min(groupEnd(g), start + count);
+    for (let i = start; i < end && !lower; i++) lower = input.charCodeAt(i) >= 97;
+    symbols += input.slice(start, end);
+    count -= end - start;
+  }
+  return lower ? symbols.toUpperCase() : symbols;
 }
 
 /** Whether a symbol before the date code, which ends group `g`, is one a TIN never uses. */
@@ -137,10 +131,12 @@ function recordDot(d: Draft, input: string, start: number, g: number): void {
   }
   const threeDigit = end - dateAt === 3;
   const year = threeDigit ? 1990 + valueOf(input, dateAt + 2, end) : 2000 + valueOf(input, dateAt + 2, end);
-  const tin = tinThrough(input, g);
-  const symbolsBefore = tin.length - (end - dateAt);
+  let symbolsThroughDate = 0;
+  for (let k = 0; k <= g; k++) symbolsThroughDate += groupEnd(k) - groupStart(k);
+  const symbolsBefore = symbolsThroughDate - (end - dateAt);
   const plantSymbols = symbolsBefore === SYMBOLS_BEFORE_DATE_WITH_3_SYMBOL_PLANT ? 3 : 2;
-  d.dot = { plantCode: tin.slice(0, Math.min(plantSymbols, symbolsBefore)), week, year, yearAmbiguous: threeDigit, tin };
+  const plantCode = tinSymbols(input, Math.min(plantSymbols, symbolsBefore));
+  d.dot = { plantCode, week, year, yearAmbiguous: threeDigit, tin: tinSymbols(input, symbolsThroughDate) };
   if (threeDigit) {
     const date = input.slice(dateAt, end);
     d.assumptions.push(`The three-digit date code ${date} is from before 2000 and gives only the last digit of the year: week ${week} of ${year} is assumed (it could be ${year - 10}).`);
