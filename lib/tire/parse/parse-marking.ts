@@ -7,6 +7,7 @@ import { addSpan, newDraft, textOf, type Draft, type PartReader, type Reader } f
 import { readService } from "./service";
 import { diagnoseBareRim, diagnoseSize, readSize } from "./size";
 import { tokenize } from "./tokens";
+import { readUsualMarks } from "./usual-marks";
 import { readUsualStart } from "./usual-start";
 import { readUtqgGrades, readUtqgWords } from "./utqg";
 
@@ -74,10 +75,11 @@ function readTokens(input: string, draft: Draft, from: number, options: ParseOpt
 export function parseMarking(text: string, options: ParseOptions = {}): ParseResult {
   const input = typeof text === "string" ? text : "";
   const draft = newDraft();
-  return readTokens(input, draft, Math.max(readUsualStart(input, draft), 0), options);
+  const restFrom = readUsualMarks(input, draft, Math.max(readUsualStart(input, draft), 0));
+  return readTokens(input, draft, restFrom, options);
 }
 
-/** The same reading token by token, without the shortcut for the usual start: tests hold the two equal. */
+/** The same reading token by token, without the shortcuts for the usual start and marks: tests hold the two equal. */
 export function parseMarkingByTokens(text: string, options: ParseOptions = {}): ParseResult {
   return readTokens(typeof text === "string" ? text : "", newDraft(), 0, options);
 }
