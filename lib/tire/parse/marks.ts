@@ -1,10 +1,8 @@
 import { isLoadRange } from "../load-range";
 import { endOf, endsChunk, numAt, punctAt, skipPunct, startOf, wordAt, type Draft, type Reader } from "./reader";
 
-/**
- * The recorders below take the characters [start, end) a mark was read from, so that the token
- * readers here and the shortcut in `usual-marks.ts` record a mark the same way.
- */
+// The record… functions take the characters [start, end) a mark was read from, so that the token
+// readers here and the shortcut in `usual-marks.ts` record a mark the same way.
 
 /** Records a load range; the letter must be a known one. */
 export function recordLoadRange(d: Draft, letter: string, start: number, end: number): void {
