@@ -107,7 +107,9 @@ export function recordRf(d: Draft, start: number, end: number): void {
 }
 
 export function recordWinter(d: Draft, mark: "mudAndSnow" | "threePeak", start: number, end: number): void {
-  d[mark] = true;
+  // Each field by its name: a write by a computed key is slow.
+  if (mark === "mudAndSnow") d.mudAndSnow = true;
+  else d.threePeak = true;
   d.spans.push({ part: "winter", start, end });
 }
 

@@ -11,7 +11,7 @@ import { dotKeywordAt, readDotChunk } from "./dot";
 import { recordLoadRange, recordLoadType, recordPlyRating, recordRf, recordWinter } from "./marks";
 import type { Draft } from "./reader";
 import { digitsEnd, isSpace, MULTIPLICATION_SIGN, shortWord } from "./tokens";
-import { recordGradeWord, recordGrades, TEMPERATURE, TRACTION } from "./utqg";
+import { recordGrades, recordTemperature, recordTraction, recordTreadwear, TEMPERATURE, TRACTION } from "./utqg";
 
 /** A mark ends at whitespace or at the end of the text, where its token reader's would end too. */
 const endsMark = (input: string, at: number): boolean => at === input.length || isSpace(input.charCodeAt(at));
@@ -53,15 +53,15 @@ function readGradeWord(input: string, d: Draft, at: number, end: number): number
   if (spells(input, at, end, "TREADWEAR")) {
     const valueEnd = digitsEnd(input, valueAt);
     if (valueEnd === valueAt || !endsMark(input, valueEnd)) return 0;
-    recordGradeWord(d, "treadwear", valueOf(input, valueAt, valueEnd), at, valueEnd);
+    recordTreadwear(d, valueOf(input, valueAt, valueEnd), at, valueEnd);
     return valueEnd;
   }
   const gradeEnd = letterRunEnd(input, valueAt);
   if (gradeEnd === valueAt || gradeEnd - valueAt > 2 || !endsMark(input, gradeEnd)) return 0;
   const grade = shortWord(input, valueAt, gradeEnd);
-  if (spells(input, at, end, "TRACTION") && TRACTION.has(grade)) recordGradeWord(d, "traction", grade as TractionGrade, at, gradeEnd);
+  if (spells(input, at, end, "TRACTION") && TRACTION.has(grade)) recordTraction(d, grade as TractionGrade, at, gradeEnd);
   else if ((spells(input, at, end, "TEMPERATURE") || spells(input, at, end, "TEMP")) && TEMPERATURE.has(grade)) {
-    recordGradeWord(d, "temperature", grade as TemperatureGrade, at, gradeEnd);
+    recordTemperature(d, grade as TemperatureGrade, at, gradeEnd);
   } else return 0;
   return gradeEnd;
 }
