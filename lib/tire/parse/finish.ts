@@ -18,7 +18,11 @@ function utqgOf(r: Reader, warnings: string[]): Utqg | null {
 }
 
 function inOrder(spans: readonly { start: number }[]): boolean {
-  for (let i = 1; i < spans.length; i++) if ((spans[i]?.start ?? 0) < (spans[i - 1]?.start ?? 0)) return false;
+  let previous = Number.NEGATIVE_INFINITY;
+  for (const { start } of spans) {
+    if (start < previous) return false;
+    previous = start;
+  }
   return true;
 }
 

@@ -1,19 +1,26 @@
 import { isLoadRange } from "../load-range";
-import { addSpan, endsChunk, numAt, punctAt, skipPunct, textOf, wordAt, type Reader } from "./reader";
+import { endOf, endsChunk, numAt, punctAt, skipPunct, startOf, wordAt, type Draft, type Reader } from "./reader";
 
-/** Records a load range read from tokens [from, to); the letter must be a known one. */
-export function setLoadRange(r: Reader, letter: string, from: number, to: number): void {
-  const d = r.draft;
+// The record… functions take the characters [start, end) a mark was read from, so that the token
+// readers here and the shortcut in `usual-marks.ts` record a mark the same way.
+
+/** Records a load range; the letter must be a known one. */
+export function recordLoadRange(d: Draft, letter: string, start: number, end: number): void {
   if (!isLoadRange(letter)) {
     d.warnings.push(`Load range ${letter} is not a known load range (B to N).`);
-    addSpan(r, "unread", from, to);
+    d.spans.push({ part: "unread", start, end });
     return;
   }
   if (d.loadRange !== null && d.loadRange !== letter) {
     d.warnings.push(`Two load ranges are marked (${d.loadRange} and ${letter}); ${d.loadRange} is used.`);
   }
   d.loadRange ??= letter;
-  addSpan(r, "loadRange", from, to);
+  d.spans.push({ part: "loadRange", start, end });
+}
+
+/** Records a load range read from tokens [from, to). */
+export function setLoadRange(r: Reader, letter: string, from: number, to: number): void {
+  recordLoadRange(r.draft, letter, startOf(r, from), endOf(r, to));
 }
 
 /** "LOAD RANGE E", "LR E", "LR-E", "LRE". */
@@ -62,53 +69,66 @@ export function readPlyRating(r: Reader, i: number): number {
   j++;
   if (wordAt(r, j) === "RATING") j++;
   if (!endsChunk(r, j)) return 0;
-  const d = r.draft;
-  if (n.value < 2 || n.value > 40) {
-    d.warnings.push(`"${textOf(r, i, j)}" is not a usual ply rating (2 to 40).`);
-    addSpan(r, "unread", i, j);
-    return j;
-  }
-  if (d.plyRating !== null && d.plyRating !== n.value) {
-    d.warnings.push(`Two ply ratings are marked (${d.plyRating} and ${n.value}); ${d.plyRating} is used.`);
-  }
-  d.plyRating ??= n.value;
-  addSpan(r, "plyRating", i, j);
+  recordPlyRating(r.draft, r.input, n.value, startOf(r, i), endOf(r, j));
   return j;
 }
 
-function setLoadType(r: Reader, type: "SL" | "XL", from: number, to: number): number {
-  const d = r.draft;
+/** Records a ply rating of `value` written in [start, end) of `input`. */
+export function recordPlyRating(d: Draft, input: string, value: number, start: number, end: number): void {
+  if (value < 2 || value > 40) {
+    d.warnings.push(`"${input.slice(start, end)}" is not a usual ply rating (2 to 40).`);
+    d.spans.push({ part: "unread", start, end });
+    return;
+  }
+  if (d.plyRating !== null && d.plyRating !== value) {
+    d.warnings.push(`Two ply ratings are marked (${d.plyRating} and ${value}); ${d.plyRating} is used.`);
+  }
+  d.plyRating ??= value;
+  d.spans.push({ part: "plyRating", start, end });
+}
+
+export function recordLoadType(d: Draft, type: "SL" | "XL", start: number, end: number): void {
   if (d.loadType !== null && d.loadType !== type) {
     d.warnings.push("Both standard load (SL) and extra load (XL) are marked; extra load is used.");
   }
   if (d.loadType !== "XL") d.loadType = type;
-  addSpan(r, "loadType", from, to);
-  return to;
+  d.spans.push({ part: "loadType", start, end });
 }
 
-function setRunFlat(r: Reader, from: number, to: number): number {
-  r.draft.runFlat = true;
-  addSpan(r, "runFlat", from, to);
-  return to;
+export function recordRunFlat(d: Draft, start: number, end: number): void {
+  d.runFlat = true;
+  d.spans.push({ part: "runFlat", start, end });
 }
 
-/**
- * "XL", "Extra Load", "Reinforced", "SL", "Standard Load", and "RF", which means reinforced once a
- * service description has been read and run-flat before one (in or right after the size).
- */
+/** "RF" reads as reinforced once a service description has been read, and as run-flat before one (in or right after the size). */
+export function recordRf(d: Draft, start: number, end: number): void {
+  if (d.service) recordLoadType(d, "XL", start, end);
+  else recordRunFlat(d, start, end);
+}
+
+export function recordWinter(d: Draft, mark: "mudAndSnow" | "threePeak", start: number, end: number): void {
+  // Each field by its name: a write by a computed key is slow.
+  if (mark === "mudAndSnow") d.mudAndSnow = true;
+  else d.threePeak = true;
+  d.spans.push({ part: "winter", start, end });
+}
+
+/** "XL", "Extra Load", "Reinforced", "SL", "Standard Load", and "RF" (see `recordRf`). */
 export function readLoadType(r: Reader, i: number): number {
   const w = wordAt(r, i);
   const next = wordAt(r, i + 1);
   let to = i + 1;
-  let type: "SL" | "XL" | "runFlat";
+  let type: "SL" | "XL" | "RF";
   if (w === "XL" || w === "REINFORCED" || w === "REINF") type = "XL";
   else if (w === "SL") type = "SL";
-  else if (w === "RF") type = r.draft.service ? "XL" : "runFlat";
+  else if (w === "RF") type = "RF";
   else if (w === "EXTRA" && next === "LOAD") [type, to] = ["XL", i + 2];
   else if (w === "STANDARD" && next === "LOAD") [type, to] = ["SL", i + 2];
   else return 0;
   if (!endsChunk(r, to)) return 0;
-  return type === "runFlat" ? setRunFlat(r, i, to) : setLoadType(r, type, i, to);
+  if (type === "RF") recordRf(r.draft, startOf(r, i), endOf(r, to));
+  else recordLoadType(r.draft, type, startOf(r, i), endOf(r, to));
+  return to;
 }
 
 /** "RFT", "Runflat", "Run Flat", "Run-Flat". */
@@ -120,12 +140,13 @@ export function readRunFlat(r: Reader, i: number): number {
     const j = skipPunct(r, i + 1, "-");
     if (wordAt(r, j) === "FLAT") to = j + 1;
   }
-  return to > 0 && endsChunk(r, to) ? setRunFlat(r, i, to) : 0;
+  if (to === 0 || !endsChunk(r, to)) return 0;
+  recordRunFlat(r.draft, startOf(r, i), endOf(r, to));
+  return to;
 }
 
 function setWinter(r: Reader, mark: "mudAndSnow" | "threePeak", from: number, to: number): number {
-  r.draft[mark] = true;
-  addSpan(r, "winter", from, to);
+  recordWinter(r.draft, mark, startOf(r, from), endOf(r, to));
   return to;
 }
 

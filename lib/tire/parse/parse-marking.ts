@@ -6,7 +6,8 @@ import { readMaxRating, readPressureThenLabel } from "./max-ratings";
 import { addSpan, newDraft, textOf, type Draft, type PartReader, type Reader } from "./reader";
 import { readService } from "./service";
 import { diagnoseBareRim, diagnoseSize, readSize } from "./size";
-import { tokenize } from "./tokens";
+import { tokenize, type Token } from "./tokens";
+import { readUsualMarks } from "./usual-marks";
 import { readUsualStart } from "./usual-start";
 import { readUtqgGrades, readUtqgWords } from "./utqg";
 
@@ -40,9 +41,12 @@ function reportUnread(r: Reader, from: number, to: number): void {
   r.draft.warnings.push(`Not read: "${textOf(r, from, to)}".`);
 }
 
+const NO_TOKENS: readonly Token[] = [];
+const NO_OPTIONS: ParseOptions = {};
+
 /** Reads the text from character `from` on, token by token, into what `draft` holds already. */
 function readTokens(input: string, draft: Draft, from: number, options: ParseOptions): ParseResult {
-  const r: Reader = { input, tokens: tokenize(input, from), draft };
+  const r: Reader = { input, tokens: from < input.length ? tokenize(input, from) : NO_TOKENS, draft };
   const n = r.tokens.length;
   // Tokens no reader took, gathered into runs so that a warning names "ACME Trailmaster" once.
   let unreadFrom = -1;
@@ -71,13 +75,14 @@ function readTokens(input: string, draft: Draft, from: number, options: ParseOpt
  * rating, XL / run-flat marks, DOT code, UTQG grades, winter marks, maximum load and pressure.
  * Never throws. Pass `today` to have the DOT code's age worked out.
  */
-export function parseMarking(text: string, options: ParseOptions = {}): ParseResult {
+export function parseMarking(text: string, options: ParseOptions = NO_OPTIONS): ParseResult {
   const input = typeof text === "string" ? text : "";
   const draft = newDraft();
-  return readTokens(input, draft, Math.max(readUsualStart(input, draft), 0), options);
+  const restFrom = readUsualMarks(input, draft, Math.max(readUsualStart(input, draft), 0));
+  return readTokens(input, draft, restFrom, options);
 }
 
-/** The same reading token by token, without the shortcut for the usual start: tests hold the two equal. */
-export function parseMarkingByTokens(text: string, options: ParseOptions = {}): ParseResult {
+/** The same reading token by token, without the shortcuts for the usual start and marks: tests hold the two equal. */
+export function parseMarkingByTokens(text: string, options: ParseOptions = NO_OPTIONS): ParseResult {
   return readTokens(typeof text === "string" ? text : "", newDraft(), 0, options);
 }

@@ -135,6 +135,10 @@ export function addDetail(r: Reader, detail: DetailKind, from: number, to: numbe
   if (a && b) r.draft.details.push({ detail, start: a.start, end: b.end });
 }
 
+/** Where token `from` starts and token `to - 1` ends: the characters tokens [from, to) cover. */
+export const startOf = (r: Reader, from: number): number => (r.tokens[from] as Token).start;
+export const endOf = (r: Reader, to: number): number => (r.tokens[to - 1] as Token).end;
+
 /** Records that tokens [from, to) form a part. */
 export function addSpan(r: Reader, part: PartKind, from: number, to: number): void {
   const a = r.tokens[from];

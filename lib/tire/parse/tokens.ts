@@ -47,6 +47,9 @@ function wordText(input: string, start: number, end: number, lower: boolean): st
   return lower ? input.slice(start, end).toUpperCase() : input.slice(start, end);
 }
 
+/** Upper-cased text of a run of one or two ASCII letters [start, end), shared. */
+export const shortWord = (input: string, start: number, end: number): string => wordText(input, start, end, true);
+
 /** Text of the digits [start, end) with value `value`; shared when it has no leading zero. */
 function digitsText(input: string, start: number, end: number, value: number): string {
   if (value >= NUMBER_TEXT_LIMIT || (end - start > 1 && input.charCodeAt(start) === 48)) return input.slice(start, end);
