@@ -1,5 +1,5 @@
-// The end-to-end suite in two lanes at once after one production build: the phone project in one
-// Playwright process, desktop and http in another. Each lane starts its own server on its own port,
+// The end-to-end suite in two lanes at once after one production build: the phone and http projects
+// in one Playwright process, desktop in another (phone and desktop take about as long; http is short). Each lane starts its own server on its own port,
 // with its own embedded database and fake e-mail inbox, so neither sees what the other changes.
 // Arguments (a spec, --project=…, -g …) run one ordinary Playwright process instead.
 import { spawn, spawnSync } from "node:child_process";
@@ -16,7 +16,7 @@ if (built.status !== 0) process.exit(built.status ?? 1);
 
 const port = Number(process.env.E2E_PORT ?? 3210);
 const mailPort = Number(process.env.E2E_FAKE_RESEND_PORT ?? 3226);
-const lanes = [["phone"], ["desktop", "http"]];
+const lanes = [["phone", "http"], ["desktop"]];
 
 const runs = lanes.map((projects, lane) => {
   const env = {
