@@ -5,11 +5,9 @@
  */
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { parseMarking, parseMarkingByTokens } from "@/lib/tire/parse/parse-marking";
 import { newDraft } from "@/lib/tire/parse/reader";
 import { readUsualMarks } from "@/lib/tire/parse/usual-marks";
-
-const TODAY = new Date("2026-06-01T00:00:00Z");
+import { readsAlike } from "./helpers";
 
 /** Mostly `usual`, sometimes `odd`. */
 const mostly = <T>(usual: fc.Arbitrary<T>, odd: fc.Arbitrary<T>) => fc.oneof({ arbitrary: usual, weight: 4 }, { arbitrary: odd, weight: 1 });
@@ -38,11 +36,6 @@ const gap = mostly(fc.constant(" "), fc.constantFrom("", "  ", "\t", "\u00a0"));
 const marking = fc
   .tuple(start, fc.array(fc.tuple(gap, mark), { maxLength: 5 }), fc.constantFrom("", "", " "))
   .map(([text, marks, end]) => text + marks.map(([space, piece]) => (text === "" && space === " " ? "" : space) + piece).join("") + end);
-
-function readsAlike(text: string): void {
-  expect(JSON.stringify(parseMarking(text))).toBe(JSON.stringify(parseMarkingByTokens(text)));
-  expect(JSON.stringify(parseMarking(text, { today: TODAY }))).toBe(JSON.stringify(parseMarkingByTokens(text, { today: TODAY })));
-}
 
 describe("the shortcut for the usual marks reads what the token readers read", () => {
   it("on generated marks after the usual starts, in spellings it takes and near ones it leaves", () => {

@@ -5,12 +5,10 @@
  */
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { parseMarking, parseMarkingByTokens } from "@/lib/tire/parse/parse-marking";
 import { newDraft, type Draft } from "@/lib/tire/parse/reader";
 import { readUsualStart } from "@/lib/tire/parse/usual-start";
 import { generateMarkings } from "../../bench/decode-markings";
-
-const TODAY = new Date("2026-06-01T00:00:00Z");
+import { readsAlike } from "./helpers";
 
 const digits = (min: number, max: number) => fc.stringMatching(new RegExp(`^\\d{${min},${max}}$`));
 /** Mostly `usual`, sometimes `odd`. */
@@ -81,11 +79,6 @@ const dotCode = fc
 const usualStart = fc
   .tuple(fc.oneof({ arbitrary: fc.tuple(fc.oneof({ arbitrary: size, weight: 3 }, flotationSize), fc.option(service, { freq: 4 })).map(([s, sd]) => s + (sd ?? "")), weight: 3 }, dotCode), tail)
   .map(([start, rest]) => start + rest);
-
-function readsAlike(text: string): void {
-  expect(JSON.stringify(parseMarking(text))).toBe(JSON.stringify(parseMarkingByTokens(text)));
-  expect(JSON.stringify(parseMarking(text, { today: TODAY }))).toBe(JSON.stringify(parseMarkingByTokens(text, { today: TODAY })));
-}
 
 describe("the shortcut for the usual start reads what the token readers read", () => {
   it("on generated sizes with and without service descriptions and what may follow them", () => {
