@@ -27,7 +27,7 @@ const files: Record<string, string> = {
   "app/page.jsx": "export default function Page() {\n  return <main><h1>Bare page</h1><p>One paragraph of text.</p></main>;\n}\n",
 };
 
-/** Writes and builds the bare app; its folder is removed by `stop`. */
+/** Writes and builds the bare app. */
 function buildBareApp(): string {
   const folder = mkdtempSync(path.join(tmpdir(), "sidewise-bare-next-"));
   for (const [name, text] of Object.entries(files)) {
@@ -47,9 +47,20 @@ function buildBareApp(): string {
   return folder;
 }
 
-/** Builds the bare app and serves it on a free port; `server.stop()` also removes its folder. */
-export async function startBareNextApp(): Promise<BareNextApp> {
+let builtFolder: string | undefined;
+
+/** The bare app, built once per process (`npm run bench` serves it to two benches); its folder goes when the process ends. */
+function bareAppFolder(): string {
+  if (builtFolder) return builtFolder;
   const folder = buildBareApp();
+  process.once("exit", () => rmSync(folder, { recursive: true, force: true }));
+  builtFolder = folder;
+  return folder;
+}
+
+/** Serves the bare app (built on first use) on a free port. */
+export async function startBareNextApp(): Promise<BareNextApp> {
+  const folder = bareAppFolder();
   const port = await freePort();
   const url = `http://localhost:${port}`;
   const child = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-p", String(port)], {
@@ -61,7 +72,6 @@ export async function startBareNextApp(): Promise<BareNextApp> {
   const end = (signal: NodeJS.Signals) => async () => {
     child.kill(signal);
     await exited;
-    rmSync(folder, { recursive: true, force: true });
   };
   const server: RunningServer = { url, stop: end("SIGTERM"), kill: end("SIGKILL") };
   try {
