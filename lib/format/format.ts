@@ -3,6 +3,8 @@
  * zone as a parameter (the pages pass the shop's, read through lib/shop; UTC when there is none).
  * Prices are lib/money's; tire figures are lib/tire's.
  */
+import { formatUpToDecimals } from "@/lib/tire/display";
+
 export const LOCALE = "en-US";
 export const DEFAULT_TIME_ZONE = "UTC";
 
@@ -63,7 +65,7 @@ export const shopTimesCaption = (timeZone: string): string => `times in ${timeZo
 
 /** 12,345 */
 export function formatCount(count: number): string {
-  return count.toLocaleString(LOCALE);
+  return formatUpToDecimals(count, 3);
 }
 
 /** "12 cards", "1 card". */

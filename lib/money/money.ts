@@ -3,6 +3,7 @@
  * "1204.5" or "159" (a dollar sign, thousands commas in groups of three, up to two decimals), and
  * they are shown as "$1,204.50". Only integer arithmetic touches an amount, so nothing is a cent off.
  */
+import { groupThousands } from "@/lib/tire/display";
 
 /** The largest price a catalog row holds: its cents are a 32-bit integer. */
 export const MAX_PRICE_CENTS = 2_147_483_647;
@@ -25,9 +26,8 @@ export function centsToDollarsText(cents: number): string {
   return `${Math.floor(cents / 100)}.${String(cents % 100).padStart(2, "0")}`;
 }
 
-const usd = new Intl.NumberFormat("en-US", { style: "currency", currency: "USD" });
-
-/** Cents as a price reads: 120450 → "$1,204.50". */
+/** Cents as a price reads: 120450 → "$1,204.50", −250 → "-$2.50". */
 export function formatPrice(cents: number): string {
-  return usd.format(cents / 100);
+  const whole = Math.abs(Math.round(cents));
+  return `${cents < 0 ? "-" : ""}$${groupThousands(String(Math.floor(whole / 100)))}.${String(whole % 100).padStart(2, "0")}`;
 }

@@ -3,11 +3,54 @@ import { kgToLb, kmhToMph, kpaToPsi, mmToIn } from "./units";
 /** How figures are shown to a person; the API always answers in both. */
 export type UnitSystem = "metric" | "imperial";
 
-const grouped = new Intl.NumberFormat("en-US", { maximumFractionDigits: 0 });
-const oneDecimal = new Intl.NumberFormat("en-US", { minimumFractionDigits: 1, maximumFractionDigits: 1 });
+// Figures are written out here rather than by Intl.NumberFormat: a browser's first Intl formatter
+// loads its locale data, which costs a phone tens of milliseconds in the middle of the page's start.
 
-export const formatInteger = (value: number): string => grouped.format(Math.round(value));
-export const formatOneDecimal = (value: number): string => oneDecimal.format(value);
+/** Whole-number digits grouped in threes with commas, as en-US writes them: "1234567" → "1,234,567". */
+export const groupThousands = (digits: string): string => digits.replace(/\B(?=(\d{3})+$)/g, ",");
+
+/** Adds one to a string of decimal digits: "0999" → "1000". */
+function incrementDigits(digits: string): string {
+  let i = digits.length - 1;
+  while (i >= 0 && digits[i] === "9") i--;
+  if (i < 0) return `1${"0".repeat(digits.length)}`;
+  return `${digits.slice(0, i)}${Number(digits[i]) + 1}${"0".repeat(digits.length - i - 1)}`;
+}
+
+/** |value| rounded to `decimals` places as its shortest decimal spelling reads, halves up: 9898.55 → "9898.6". */
+function roundedDigits(magnitude: number, decimals: number): string {
+  const spelled = String(magnitude);
+  // Below 1e-6 or from 1e21 up, the spelling has an exponent; toFixed rounds those as well as anything would.
+  if (spelled.includes("e")) return magnitude.toFixed(decimals);
+  const [whole = "0", fraction = ""] = spelled.split(".");
+  if (fraction.length <= decimals) return decimals === 0 ? whole : `${whole}.${fraction.padEnd(decimals, "0")}`;
+  const kept = `${whole}${fraction.slice(0, decimals)}`;
+  const digits = fraction[decimals]! >= "5" ? incrementDigits(kept) : kept;
+  const point = digits.length - decimals;
+  return decimals === 0 ? digits : `${digits.slice(0, point)}.${digits.slice(point)}`;
+}
+
+/**
+ * `value` with exactly `decimals` decimals, thousands grouped (en-US): 1234.56 → "1,234.6" with 1.
+ * Rounds the number as written, halves away from zero, as Intl.NumberFormat does (9898.55 → 9,898.6,
+ * where toFixed gives 9898.5); a value that rounds to zero has no sign.
+ */
+export function formatDecimals(value: number, decimals: number): string {
+  const fixed = roundedDigits(Math.abs(value), decimals);
+  const point = fixed.indexOf(".");
+  const whole = groupThousands(point < 0 ? fixed : fixed.slice(0, point));
+  const sign = value < 0 && /[1-9]/.test(fixed) ? "-" : "";
+  return `${sign}${whole}${point < 0 ? "" : fixed.slice(point)}`;
+}
+
+/** `value` with at most `decimals` decimals, trailing zeros dropped, thousands grouped: 2.50 → "2.5", 3.0 → "3". */
+export function formatUpToDecimals(value: number, decimals: number): string {
+  const text = formatDecimals(value, decimals);
+  return text.includes(".") ? text.replace(/\.?0+$/, "") : text;
+}
+
+export const formatInteger = (value: number): string => formatDecimals(Math.round(value), 0);
+export const formatOneDecimal = (value: number): string => formatDecimals(value, 1);
 
 /** Millimetres to the nearest millimetre, inches to a tenth: 793 mm, 31.2 in. */
 export function formatLength(mm: number, units: UnitSystem): string {
@@ -63,7 +106,7 @@ export function formatRevolutions(revsPerKm: number, revsPerMile: number, units:
 export function formatSignedPercent(pct: number): string {
   const rounded = (Math.sign(pct) * Math.round(Math.abs(pct) * 10)) / 10;
   if (rounded === 0) return "0.0 %";
-  return `${rounded > 0 ? "+" : "−"}${oneDecimal.format(Math.abs(rounded))} %`;
+  return `${rounded > 0 ? "+" : "−"}${formatOneDecimal(Math.abs(rounded))} %`;
 }
 
 /** The default unit system for a browser locale: imperial for the United States, Liberia and Myanmar. */

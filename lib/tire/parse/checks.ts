@@ -1,3 +1,4 @@
+import { formatUpToDecimals } from "../display";
 import { formatSize } from "../format";
 import { IMPLIED_ASPECT_RATIO } from "../geometry";
 import { loadIndexKg, loadIndexLb } from "../load-index";
@@ -6,7 +7,8 @@ import { rimTwinCaution } from "../rim-twins";
 import type { LoadMark, PressureMark, ServiceDescription, TireSize } from "../types";
 import { kgToLb, kpaToPsi } from "../units";
 
-const fmt = (n: number): string => n.toLocaleString("en-US");
+// As toLocaleString("en-US") writes them: grouped, up to three decimals.
+const fmt = (n: number): string => formatUpToDecimals(n, 3);
 
 /** Printed kilograms are rounded: allow 0.5 % (at least one kilogram). */
 function differs(marked: number, expected: number): boolean {

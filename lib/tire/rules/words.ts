@@ -1,4 +1,4 @@
-import { formatSignedPercent } from "../display";
+import { formatSignedPercent, formatUpToDecimals } from "../display";
 import type { ServiceType } from "../service-type";
 import { speedSymbolInfo, type SpeedSymbol } from "../speed-symbols";
 import type { Season } from "../vocabulary";
@@ -15,14 +15,13 @@ const SERVICE_NAMES: Record<ServiceType, string> = {
   T: "temporary spare (T)",
 };
 
-const number = new Intl.NumberFormat("en-US", { maximumFractionDigits: 1 });
 const MINUS = "\u2212";
 
 /** Rounded half away from zero, so that +37.5 and −37.5 mm read alike as 38. */
 function signed(value: number, unit: string): string {
   const magnitude = Math.round(Math.abs(value));
   if (magnitude === 0) return `0 ${unit}`;
-  return `${value > 0 ? "+" : MINUS}${number.format(magnitude)} ${unit}`;
+  return `${value > 0 ? "+" : MINUS}${formatUpToDecimals(magnitude, 1)} ${unit}`;
 }
 
 /** Two decimals, so that a diameter just outside the tolerance does not read as on it: −3.03 %. */
@@ -39,7 +38,7 @@ function speedText(symbol: SpeedSymbol | "ZR" | null): string {
 }
 
 const placardTag = (source: "original" | "placard") => (source === "placard" ? " (Placard check)" : "");
-const kgMargin = (kg: number) => `${kg >= 0 ? "+" : MINUS}${number.format(Math.abs(kg))} kg`;
+const kgMargin = (kg: number) => `${kg >= 0 ? "+" : MINUS}${formatUpToDecimals(Math.abs(kg), 1)} kg`;
 
 function holdsText(check: RuleCheck): string {
   switch (check.rule) {

@@ -41,6 +41,16 @@ describe("dollars and cents", () => {
     expect([formatPrice(120_450), formatPrice(5), formatPrice(0)]).toEqual(["$1,204.50", "$0.05", "$0.00"]);
   });
 
+  it("writes every amount as Intl.NumberFormat's en-US dollars do, without loading Intl on the page", () => {
+    const usd = new Intl.NumberFormat("en-US", { style: "currency", currency: "USD" });
+    fc.assert(
+      fc.property(fc.integer({ min: -MAX_PRICE_CENTS, max: MAX_PRICE_CENTS }), (cents) => {
+        expect(formatPrice(cents)).toBe(usd.format(cents / 100));
+      }),
+      { seed: 8, numRuns: 5000 },
+    );
+  });
+
   it("writes two decimals", () => {
     expect([centsToDollarsText(0), centsToDollarsText(5), centsToDollarsText(15_900), centsToDollarsText(12_345)]).toEqual(["0.00", "0.05", "159.00", "123.45"]);
   });
