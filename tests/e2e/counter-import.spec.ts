@@ -27,6 +27,7 @@ function chooseFile(page: Page, name: string, buffer: Buffer, mimeType = "text/c
 }
 
 test.describe("the Counter's import and export", () => {
+  test.skip(({ isMobile }) => isMobile, "staff flows run once, in the desktop project; counter-phone.spec.ts scans these pages at phone width");
   test("staff read, preview and import a CSV, then see a refused file write nothing", async ({ page }, testInfo) => {
     // Two imports and four accessibility scans in one story.
     test.setTimeout(90_000);

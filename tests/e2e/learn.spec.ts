@@ -29,7 +29,8 @@ test.describe("Sidewall school", () => {
   });
 
   for (const { slug, heading } of topics) {
-    test(`/learn/${slug} names its standard, links to the reader and has no accessibility violations`, async ({ page }) => {
+    test(`/learn/${slug} names its standard, links to the reader and has no accessibility violations`, async ({ page, isMobile }) => {
+      test.skip(!isMobile, "the lessons share one layout, scanned at phone width; the desktop project scans /learn and the load-index table");
       const response = await page.goto(`/learn/${slug}`);
       expect(response?.status()).toBe(200);
       await expect(page.getByRole("heading", { level: 1, name: heading })).toBeVisible();
