@@ -4,7 +4,7 @@ import { createContext, useContext, useState, type ReactNode } from "react";
 import { SaveFitCard } from "@/components/fit-card/save-fit-card-button";
 import { AskTheShop } from "@/components/quotes/ask-the-shop";
 import { plusQuoteTires } from "@/components/quotes/quote-tires";
-import { MAX_COMPARED_SIZES } from "@/lib/compare/read-sizes";
+import { MAX_COMPARED_SIZES } from "@/lib/compare/compare-limits";
 
 const MAX_PICKS = MAX_COMPARED_SIZES - 1;
 

@@ -2,8 +2,6 @@ import type { MeasurableSize } from "@/lib/tire/geometry";
 import { readMeasurableSize } from "@/lib/tire/slug";
 import { MAX_COMPARED_SIZES } from "./compare-limits";
 
-export { MAX_COMPARED_SIZES };
-
 export type SizeListResult =
   | { ok: true; sizes: MeasurableSize[] }
   | { ok: false; code: "invalid_parameter" | "unreadable"; message: string };

@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { LOAD_RANGES } from "@/lib/tire/load-range";
 import { SEASONS } from "@/lib/tire/vocabulary";
-import { MAX_COMPARED_SIZES } from "@/lib/compare/read-sizes";
+import { MAX_COMPARED_SIZES } from "@/lib/compare/compare-limits";
 import { skuSchema } from "@/lib/validation/sku";
 import { lineText, multiLineText } from "@/lib/validation/text";
 import { MAX_CARD_TIRES, MAX_NOTE_LENGTH } from "./card-limits";

@@ -16,8 +16,8 @@ const forbidden = [
   { name: "@/lib/tire", why: "the tire core's index pulls in every reader; import each function from its own module" },
 ];
 
-/** The reader, Side-by-side and finder pages, which stay lighter still. */
-const typingPages = ["reader", "compare", "finder"].map((feature) => path.join(root, "components", feature) + path.sep);
+/** The reader, Side-by-side, Plus planner and finder pages, which stay lighter still. */
+const typingPages = ["reader", "compare", "plus", "finder"].map((feature) => path.join(root, "components", feature) + path.sep);
 const onTypingPage = (entry: string) => typingPages.some((folder) => entry.startsWith(folder));
 
 /** What the typing pages' first loads leave out as well; the reader however it is reached (relative imports included). */
