@@ -37,10 +37,11 @@ export default defineConfig({
   // Each of scripts/e2e.mjs's lanes keeps its traces and screenshots apart: Playwright empties its
   // output folder when it starts, and both lanes' first workers would share one artifacts folder.
   outputDir: process.env.E2E_OUTPUT_DIR ?? "test-results",
-  // Waits, not measures: on a shared, busy machine (two suites at once) a long flow and a sign-in
-  // can take longer than Playwright's defaults, and each test and expect still ends as soon as it holds.
+  // Waits, not measures: on a shared, busy machine (two suites at once on two cores, load average
+  // near 19) a long flow took over 30 s and a sign-in's way to the Counter over 10 s, and each test
+  // and expect still ends as soon as it holds.
   timeout: 60_000,
-  expect: { timeout: 10_000 },
+  expect: { timeout: 20_000 },
   use: {
     baseURL,
     trace: "retain-on-failure",
