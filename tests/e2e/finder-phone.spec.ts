@@ -14,7 +14,7 @@ const pickBoxes = (page: Page, name: RegExp) => resultItems(page).getByRole("che
 
 async function openFinder(page: Page, path: string) {
   await page.goto(path);
-  await expect(resultsHeading(page)).toBeVisible({ timeout: 15_000 });
+  await expect(resultsHeading(page)).toBeVisible();
   await expect(resultItems(page).first()).toBeVisible();
 }
 

@@ -17,7 +17,7 @@ interface Result {
 }
 
 const results = (page: Page) => page.locator("article[data-sku]");
-const listShown = (page: Page) => expect(results(page).first()).toBeVisible({ timeout: 15_000 });
+const listShown = (page: Page) => expect(results(page).first()).toBeVisible();
 const setSize = (page: Page) => page.getByLabel("Tires needed");
 
 /** The first page of results, as the finder asks for it. */
@@ -70,10 +70,10 @@ test.describe("how many are on hand, and what a set costs out the door", () => {
     await showFilters(page);
     await setSize(page).selectOption("2");
     await expect(page).toHaveURL(/quantity=2/);
-    await expect(results(page).first().locator("[data-estimate-total] h4")).toContainText("Out the door for 2", { timeout: 15_000 });
+    await expect(results(page).first().locator("[data-estimate-total] h4")).toContainText("Out the door for 2");
     await page.reload();
     await expect(setSize(page)).toHaveValue("2");
-    await expect(results(page).first().locator("[data-estimate-total] h4")).toContainText("Out the door for 2", { timeout: 15_000 });
+    await expect(results(page).first().locator("[data-estimate-total] h4")).toContainText("Out the door for 2");
     const tires = await firstPage(page, 2);
     for (const tire of [tires.find((t) => t.quantity === 1), tires.find((t) => t.quantity >= 2), tires[0]]) if (tire) await expectPriced(page, tire, 2);
 
@@ -139,7 +139,7 @@ test.describe("how many are on hand, and what a set costs out the door", () => {
       await page.setViewportSize({ width, height: 900 });
       await page.goto(`/replace?${SEARCH}`);
       const first = results(page).first();
-      await expect(first.locator("[data-estimate-total]")).toBeVisible({ timeout: 15_000 });
+      await expect(first.locator("[data-estimate-total]")).toBeVisible();
       // Nothing scrolls sideways.
       expect(await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth)).toBe(true);
       await first.scrollIntoViewIfNeeded();
