@@ -74,7 +74,7 @@ test.describe("Ask the shop and Fit cards on Side-by-side and the Plus planner",
   });
 
   test("Plus planner: stocked sizes first, its own cautions, and Ask the shop with the picked size", async ({ page }, testInfo) => {
-    test.setTimeout(120_000); // the scan walks every row of a long page, and a request goes out by e-mail
+    test.slow(); // the scan walks every row of a long page, and a request goes out by e-mail
     // A browser that refuses the clipboard: the link is shown to copy by hand.
     await page.addInitScript(() => {
       Object.defineProperty(navigator, "clipboard", { value: { writeText: () => Promise.reject(new Error("refused")) } });
@@ -129,7 +129,7 @@ test.describe("Ask the shop and Fit cards on Side-by-side and the Plus planner",
   });
 
   test("the Plus planner shows staff Save as Fit card and no accessibility violations", async ({ page }, testInfo) => {
-    test.setTimeout(90_000); // the scan walks every row of a long page
+    test.slow(); // the scan walks every row of a long page
     await signIn(page, PLUS);
     await expect(page.getByRole("heading", { level: 2, name: /Plus 1: 18-inch wheels/ })).toBeVisible();
     await expect(page.getByRole("button", { name: "Save as Fit card" })).toBeVisible();

@@ -30,7 +30,7 @@ test.describe("the Counter's import and export", () => {
   test.skip(({ isMobile }) => isMobile, "staff flows run once, in the desktop project; counter-phone.spec.ts scans these pages at phone width");
   test("staff read, preview and import a CSV, then see a refused file write nothing", async ({ page }, testInfo) => {
     // Two imports and four accessibility scans in one story.
-    test.setTimeout(90_000);
+    test.slow();
     const prefix = `IMP-${testInfo.project.name.toUpperCase()}-${Date.now().toString(36).toUpperCase()}`;
     await signInTo(page, "staff@sidewise.test");
     await expect(page.getByRole("heading", { level: 1, name: "Import & export" })).toBeVisible();

@@ -16,7 +16,7 @@ const brandSection = (page: Page, name: string) => page.getByRole("region", { na
 test.describe("the Counter's Lines page", () => {
   test.skip(({ isMobile }) => isMobile, "staff flows run once, in the desktop project; counter-phone.spec.ts scans these pages at phone width");
   test("add a brand and a line, rename the brand from the keyboard, retire and un-retire the line", async ({ page }, testInfo) => {
-    test.setTimeout(90_000);
+    test.slow();
     const stamp = `${testInfo.project.name === "phone" ? "P" : "D"}${Date.now().toString(36).toUpperCase()}`;
     const brand = `Brisket ${stamp}`;
     const renamed = `Brantley ${stamp}`;

@@ -34,7 +34,7 @@ test.describe("the Plus planner", () => {
 
   test("shows the wheel cautions and has no accessibility violations", async ({ page }) => {
     // The scan walks every row of a page listing some two hundred sizes; on a busy machine that alone can take half a minute.
-    test.setTimeout(90_000);
+    test.slow();
     await page.goto("/plus?size=225-45R17&loadIndex=94&speedSymbol=W");
     await expect(page.getByText(/bolt pattern/)).toBeVisible();
     await expectNoAxeViolations(page);
