@@ -1,4 +1,4 @@
-import { expect, test, type Page } from "./helpers/test";
+import { expect, test, type Page, staffFlowsAtDesktopWidth } from "./helpers/test";
 import { expectNoAxeViolations } from "./helpers/axe";
 
 const HEADER = "sku,brand,line,size,load_index,load_index_dual,speed_symbol,load_range,extra_load,price,quantity";
@@ -27,7 +27,7 @@ function chooseFile(page: Page, name: string, buffer: Buffer, mimeType = "text/c
 }
 
 test.describe("the Counter's import and export", () => {
-  test.skip(({ isMobile }) => isMobile, "staff flows run once, in the desktop project; counter-phone.spec.ts scans these pages at phone width");
+  staffFlowsAtDesktopWidth();
   test("staff read, preview and import a CSV, then see a refused file write nothing", async ({ page }, testInfo) => {
     // Two imports and four accessibility scans in one story.
     test.slow();

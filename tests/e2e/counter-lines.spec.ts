@@ -1,4 +1,4 @@
-import { expect, test, type Page } from "./helpers/test";
+import { expect, test, type Page, staffFlowsAtDesktopWidth } from "./helpers/test";
 import { expectNoAxeViolations } from "./helpers/axe";
 
 // Both projects share one database per run: each adds a brand of its own name and leaves it there.
@@ -14,7 +14,7 @@ async function signInToLines(page: Page) {
 const brandSection = (page: Page, name: string) => page.getByRole("region", { name, exact: true });
 
 test.describe("the Counter's Lines page", () => {
-  test.skip(({ isMobile }) => isMobile, "staff flows run once, in the desktop project; counter-phone.spec.ts scans these pages at phone width");
+  staffFlowsAtDesktopWidth();
   test("add a brand and a line, rename the brand from the keyboard, retire and un-retire the line", async ({ page }, testInfo) => {
     test.slow();
     const stamp = `${testInfo.project.name === "phone" ? "P" : "D"}${Date.now().toString(36).toUpperCase()}`;

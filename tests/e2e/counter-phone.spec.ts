@@ -1,4 +1,5 @@
 import { expectNoAxeViolations } from "./helpers/axe";
+import { signIn } from "./helpers/finder";
 import { expect, test } from "./helpers/test";
 
 // The Counter's staff flows run in the desktop project (counter*.spec.ts); at phone width each of
@@ -19,13 +20,10 @@ test.describe("the Counter at phone width", () => {
 
   test("every staff page has no accessibility violations", async ({ page }) => {
     test.slow();
-    await page.goto("/sign-in?next=%2Fcounter");
-    await page.getByLabel("E-mail").fill("admin@sidewise.test");
-    await page.getByLabel("Password").fill("sidewise-demo");
-    await page.getByRole("button", { name: "Sign in" }).click();
-    await expect(page).toHaveURL(/\/counter$/);
+    await signIn(page, "admin@sidewise.test");
     for (const { path, heading } of pages) {
       await page.goto(path);
+      await expect(page).toHaveURL(new RegExp(`${path}$`));
       await expect(page.getByRole("heading", { level: 1, name: heading })).toBeVisible();
       await expectNoAxeViolations(page);
     }

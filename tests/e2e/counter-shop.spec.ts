@@ -1,7 +1,7 @@
 import type { APIRequestContext } from "@playwright/test";
 import { client } from "../security/http";
 import { expectNoAxeViolations } from "./helpers/axe";
-import { expect, test, type Page } from "./helpers/test";
+import { expect, test, type Page, staffFlowsAtDesktopWidth } from "./helpers/test";
 
 // Both projects share one database per run and every other spec expects the demo shop: each test
 // starts from the settings read before it and afterAll puts them back.
@@ -33,7 +33,7 @@ async function signIn(page: Page, email: string, path: string) {
 const footer = (page: Page) => page.getByRole("contentinfo");
 
 test.describe("the Counter's shop settings", () => {
-  test.skip(({ isMobile }) => isMobile, "staff flows run once, in the desktop project; counter-phone.spec.ts scans these pages at phone width");
+  staffFlowsAtDesktopWidth();
   test("an admin changes the charges, the tax rate, Saturday's hours and a closed date; the footer follows", async ({ page }) => {
     await signIn(page, "admin@sidewise.test", "/counter/shop");
     await expect(page.getByRole("heading", { level: 1, name: "Shop settings" })).toBeVisible();

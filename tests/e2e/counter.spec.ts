@@ -1,4 +1,4 @@
-import { expect, test, type Page } from "./helpers/test";
+import { expect, test, type Page, staffFlowsAtDesktopWidth } from "./helpers/test";
 import { expectNoAxeViolations } from "./helpers/axe";
 
 // Both projects share one database per run: each works on its own item and puts back what it changed.
@@ -13,7 +13,7 @@ async function signInAsStaff(page: Page, path: string) {
 const itemCount = (page: Page) => page.getByText(/^[\d,]+ items? · page \d+ of \d+$/);
 
 test.describe("the Counter's catalog", () => {
-  test.skip(({ isMobile }) => isMobile, "staff flows run once, in the desktop project; counter-phone.spec.ts scans these pages at phone width");
+  staffFlowsAtDesktopWidth();
   // Each test signs in and loads pages of 50 items, one with an accessibility scan over the whole table.
   test.beforeEach(() => test.slow());
 

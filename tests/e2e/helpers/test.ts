@@ -18,3 +18,11 @@ export const test = base.extend({
     await provide({ ...extraHTTPHeaders, "x-forwarded-for": address });
   },
 });
+
+/**
+ * For a describe block of the Counter's staff flows: they run once, at desktop width, since their
+ * logic does not change with the screen; counter-phone.spec.ts scans their pages at phone width.
+ */
+export function staffFlowsAtDesktopWidth(): void {
+  test.skip(({ isMobile }) => isMobile, "staff flows run once, in the desktop project; counter-phone.spec.ts scans these pages at phone width");
+}
